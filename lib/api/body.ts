@@ -1,0 +1,32 @@
+import type { NextRequest } from 'next/server';
+import { HttpError } from './errors';
+
+/** Largest JSON body the API accepts, in bytes. */
+export const MAX_JSON_BYTES = 1024 * 1024;
+
+/** Reads a JSON body with a size limit; malformed or oversized input becomes a 400/413 HttpError. */
+export async function readJson(req: NextRequest, limit = MAX_JSON_BYTES): Promise<unknown> {
+  const declared = Number(req.headers.get('content-length') ?? '0');
+  if (declared > limit) throw new HttpError(413, `The request body is larger than ${Math.round(limit / 1024)} KB.`);
+  const reader = req.body?.getReader();
+  if (!reader) throw new HttpError(400, 'The request has no body; send JSON.');
+  const chunks: Uint8Array[] = [];
+  let size = 0;
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) break;
+    size += value.byteLength;
+    if (size > limit) {
+      await reader.cancel();
+      throw new HttpError(413, `The request body is larger than ${Math.round(limit / 1024)} KB.`);
+    }
+    chunks.push(value);
+  }
+  const text = Buffer.concat(chunks).toString('utf8');
+  if (!text.trim()) throw new HttpError(400, 'The request body is empty; send JSON.');
+  try {
+    return JSON.parse(text);
+  } catch {
+    throw new HttpError(400, 'The request body is not valid JSON.');
+  }
+}

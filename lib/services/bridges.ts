@@ -1,0 +1,149 @@
+import { Op } from 'sequelize';
+import { z } from 'zod';
+import { Bridge, GeometryRevision, User } from '@/models';
+import { db } from '@/lib/db/connection';
+import { HttpError } from '@/lib/api/errors';
+import type { SessionUser } from '@/lib/auth/session';
+import type { BridgeDescription } from '@/lib/geometry';
+import { checkedDescription } from './description';
+import { audit } from './audit';
+
+export const bridgeNameSchema = z
+  .string({ error: 'Give the bridge a name.' })
+  .trim()
+  .min(1, 'Give the bridge a name.')
+  .max(200, 'Keep the name under 200 characters.');
+
+export const createBridgeSchema = z.object({ name: bridgeNameSchema, description: z.unknown() });
+export const renameBridgeSchema = z.object({ name: bridgeNameSchema });
+export const createRevisionSchema = z.object({
+  base_revision: z.number({ error: 'base_revision must be the revision number you edited.' }).int().positive(),
+  description: z.unknown(),
+  note: z.string().trim().max(500, 'Keep the note under 500 characters.').optional().default(''),
+});
+
+export type BridgeSummary = { id: number; name: string; units: string; revision: number; updatedAt: string };
+export type BridgeDetail = BridgeSummary & { description: BridgeDescription };
+export type RevisionSummary = { revision: number; author: string | null; note: string; createdAt: string };
+
+function summary(b: Bridge): BridgeSummary {
+  return { id: b.id, name: b.name, units: b.units, revision: b.currentRevision, updatedAt: b.updatedAt.toISOString() };
+}
+
+function parseId(id: string | number): number {
+  const n = Number(id);
+  if (!Number.isInteger(n) || n <= 0) throw new HttpError(404, 'There is no bridge with that id.');
+  return n;
+}
+
+async function findBridge(id: string | number): Promise<Bridge> {
+  await db();
+  const bridge = await Bridge.findByPk(parseId(id));
+  if (!bridge) throw new HttpError(404, 'There is no bridge with that id.');
+  return bridge;
+}
+
+export async function listBridges(): Promise<BridgeSummary[]> {
+  await db();
+  const rows = await Bridge.findAll({ order: [['name', 'ASC']] });
+  return rows.map(summary);
+}
+
+/** The stored description of one revision (the latest when `revision` is omitted). */
+export async function getRevisionDescription(bridgeId: number, revision: number): Promise<BridgeDescription> {
+  const row = await GeometryRevision.findOne({ where: { bridgeId, revision } });
+  if (!row) throw new HttpError(404, `Revision ${revision} of this bridge does not exist.`);
+  return JSON.parse(row.description) as BridgeDescription;
+}
+
+export async function getBridge(id: string | number): Promise<BridgeDetail> {
+  const bridge = await findBridge(id);
+  return { ...summary(bridge), description: await getRevisionDescription(bridge.id, bridge.currentRevision) };
+}
+
+export async function createBridge(user: SessionUser, input: z.infer<typeof createBridgeSchema>) {
+  const description = checkedDescription(input.description);
+  const sequelize = await db();
+  const bridge = await sequelize.transaction(async (transaction) => {
+    const created = await Bridge.create({ name: input.name, units: description.units, currentRevision: 1 }, { transaction });
+    await GeometryRevision.create(
+      { bridgeId: created.id, revision: 1, description: JSON.stringify(description), authorId: user.id, note: 'Created' },
+      { transaction },
+    );
+    await audit(user.id, 'bridge.create', 'bridge', created.id, { name: created.name }, transaction);
+    return created;
+  });
+  return { id: bridge.id, name: bridge.name, revision: 1 };
+}
+
+export async function renameBridge(user: SessionUser, id: string, name: string): Promise<BridgeSummary> {
+  const bridge = await findBridge(id);
+  const sequelize = await db();
+  await sequelize.transaction(async (transaction) => {
+    const before = bridge.name;
+    bridge.name = name;
+    await bridge.save({ transaction });
+    await audit(user.id, 'bridge.rename', 'bridge', bridge.id, { from: before, to: name }, transaction);
+  });
+  return summary(bridge);
+}
+
+export async function deleteBridge(user: SessionUser, id: string): Promise<void> {
+  const bridge = await findBridge(id);
+  const sequelize = await db();
+  await sequelize.transaction(async (transaction) => {
+    await GeometryRevision.destroy({ where: { bridgeId: bridge.id }, transaction });
+    await bridge.destroy({ transaction });
+    await audit(user.id, 'bridge.delete', 'bridge', bridge.id, { name: bridge.name }, transaction);
+  });
+}
+
+export async function listRevisions(id: string): Promise<RevisionSummary[]> {
+  const bridge = await findBridge(id);
+  const rows = await GeometryRevision.findAll({
+    where: { bridgeId: bridge.id },
+    include: [{ model: User, as: 'author', attributes: ['name', 'email'] }],
+    order: [['revision', 'DESC']],
+  });
+  return rows.map((r) => {
+    const author = (r as GeometryRevision & { author?: User | null }).author;
+    return { revision: r.revision, author: author ? author.name : null, note: r.note, createdAt: r.createdAt.toISOString() };
+  });
+}
+
+/**
+ * Saves a new revision on top of `base_revision`. The bridge row is advanced with a conditional
+ * update, so of several saves on the same base exactly one wins and the rest get 409.
+ */
+export async function createRevision(user: SessionUser, id: string, input: z.infer<typeof createRevisionSchema>) {
+  const bridge = await findBridge(id);
+  const description = checkedDescription(input.description);
+  if (description.units !== bridge.units) {
+    throw new HttpError(400, `This bridge is in ${bridge.units}; a revision cannot change its units.`, {
+      'description.units': [`Must stay "${bridge.units}".`],
+    });
+  }
+  const next = input.base_revision + 1;
+  const sequelize = await db();
+  const stale = () =>
+    new HttpError(409, `Revision ${input.base_revision} is no longer the latest. Reload the bridge to see the newer revision, then make your change again.`);
+  try {
+    await sequelize.transaction(async (transaction) => {
+      const [count] = await Bridge.update(
+        { currentRevision: next },
+        { where: { id: bridge.id, currentRevision: { [Op.eq]: input.base_revision } }, transaction },
+      );
+      if (count !== 1) throw stale();
+      await GeometryRevision.create(
+        { bridgeId: bridge.id, revision: next, description: JSON.stringify(description), authorId: user.id, note: input.note },
+        { transaction },
+      );
+      await audit(user.id, 'revision.create', 'bridge', bridge.id, { revision: next }, transaction);
+    });
+  } catch (err) {
+    if (err instanceof HttpError) throw err;
+    if ((err as Error).name === 'SequelizeUniqueConstraintError') throw stale();
+    throw err;
+  }
+  return { revision: next };
+}

@@ -1,0 +1,43 @@
+import { computeOffsetTable, GeometryError, type BridgeDescription, type OffsetTable } from '@/lib/geometry';
+import { HttpError } from '@/lib/api/errors';
+import { Bridge } from '@/models';
+import { db } from '@/lib/db/connection';
+import { checkedDescription } from './description';
+import { getRevisionDescription } from './bridges';
+
+/** Runs the engine, mapping geometry that cannot be built to 422 with the engine's own message. */
+export function computeChecked(bridge: BridgeDescription): OffsetTable {
+  try {
+    return computeOffsetTable(bridge);
+  } catch (err) {
+    if (err instanceof GeometryError) throw new HttpError(422, err.message);
+    throw err;
+  }
+}
+
+/** Offset table for a description posted to the compute API (400 schema, 422 geometry). */
+export function computeFromJson(json: unknown): OffsetTable {
+  return computeChecked(checkedDescription(json, '_'));
+}
+
+const cache = new Map<string, OffsetTable>();
+const CACHE_LIMIT = 200;
+
+/**
+ * Offset table of a stored bridge's latest revision. Revisions never change once written, so the
+ * table is cached by bridge and revision number.
+ */
+export async function offsetsForBridge(id: string): Promise<{ bridge: Bridge; table: OffsetTable }> {
+  await db();
+  const n = Number(id);
+  const bridge = Number.isInteger(n) && n > 0 ? await Bridge.findByPk(n) : null;
+  if (!bridge) throw new HttpError(404, 'There is no bridge with that id.');
+  const key = `${bridge.id}:${bridge.createdAt.getTime()}:${bridge.currentRevision}`;
+  let table = cache.get(key);
+  if (!table) {
+    table = computeChecked(await getRevisionDescription(bridge.id, bridge.currentRevision));
+    if (cache.size >= CACHE_LIMIT) cache.delete(cache.keys().next().value as string);
+    cache.set(key, table);
+  }
+  return { bridge, table };
+}

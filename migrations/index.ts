@@ -1,0 +1,14 @@
+import type { QueryInterface } from 'sequelize';
+import * as m0001 from './0001-initial';
+
+export type Migration = {
+  name: string;
+  up: (params: { context: QueryInterface }) => Promise<void>;
+  down: (params: { context: QueryInterface }) => Promise<void>;
+};
+
+/**
+ * Every migration in order. Listed by hand (not globbed) so the bundled server and the CLI run the
+ * same set. Append new ones at the end; never edit or reorder one that has shipped.
+ */
+export const migrations: Migration[] = [{ name: '0001-initial', ...m0001 }];
