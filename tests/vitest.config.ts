@@ -11,7 +11,7 @@ export default defineConfig({
     projects: [
       {
         resolve: { alias },
-        test: { name: 'unit', root, include: ['tests/geometry/**/*.test.ts', 'tests/lib/**/*.test.ts'], environment: 'node' },
+        test: { name: 'unit', root, include: ['tests/geometry/**/*.test.ts', 'tests/lib/**/*.test.ts', 'tests/scene/**/*.test.ts'], environment: 'node' },
       },
       {
         resolve: { alias },
