@@ -1,4 +1,4 @@
-import { computeOffsetTable, GeometryError, type BridgeDescription, type OffsetTable } from '@/lib/geometry';
+import { computeOffsetTable, GeometryError, offsetTableToCsv, type BridgeDescription, type OffsetTable } from '@/lib/geometry';
 import { HttpError } from '@/lib/api/errors';
 import { Bridge } from '@/models';
 import { db } from '@/lib/db/connection';
@@ -40,4 +40,22 @@ export async function offsetsForBridge(id: string): Promise<{ bridge: Bridge; ta
     cache.set(key, table);
   }
   return { bridge, table };
+}
+
+const STYLES = ['decimal-feet', 'feet-inches', 'metric'] as const;
+
+/**
+ * CSV of a stored bridge's offset table in display units. `style` is decimal-feet (default),
+ * feet-inches or metric; anything else is refused with 400.
+ */
+export async function offsetsCsvForBridge(id: string, style: string | null): Promise<{ filename: string; csv: string }> {
+  if (style !== null && !(STYLES as readonly string[]).includes(style)) {
+    throw new HttpError(400, `Unknown style "${style}"; use ${STYLES.join(', ')}.`, { style: [`Use ${STYLES.join(', ')}.`] });
+  }
+  const { bridge, table } = await offsetsForBridge(id);
+  const safeName = bridge.name.replace(/[^A-Za-z0-9._-]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 80) || 'bridge';
+  return {
+    filename: `${safeName}-rev${bridge.currentRevision}-offsets.csv`,
+    csv: offsetTableToCsv(table, { style: (style ?? 'decimal-feet') as (typeof STYLES)[number] }),
+  };
 }
