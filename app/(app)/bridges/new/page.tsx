@@ -1,0 +1,26 @@
+import type { Metadata } from 'next';
+import NewBridgeForm from '@/components/NewBridgeForm';
+import PageHeader from '@/components/PageHeader';
+import RoleNotice from '@/components/RoleNotice';
+import { requireUser } from '@/components/server-session';
+import { roleAllows } from '@/lib/auth/roles';
+
+export const metadata: Metadata = { title: 'New bridge' };
+
+export default async function NewBridgePage() {
+  const user = await requireUser();
+  if (!roleAllows(user.role, ['engineer'])) {
+    return (
+      <RoleNotice
+        title="Your role cannot create bridges"
+        message="Engineers and administrators create bridges. Ask an engineer on your project to add the bridge you need."
+      />
+    );
+  }
+  return (
+    <>
+      <PageHeader title="New bridge" subtitle="Give the bridge a name and its geometry. You can rename it later." />
+      <NewBridgeForm />
+    </>
+  );
+}
