@@ -1,0 +1,68 @@
+/**
+ * CSV export of an offset table in display units (pure: table in, text out), one row per girder
+ * point, header row with units in the column names.
+ */
+import { formatFeet, formatFeetInches, formatMetres, formatOffset, formatStation, type DisplayStyle } from './format';
+import type { OffsetTable } from './types';
+
+/** CSV options. `style` applies to feet bridges; metric bridges always show metres. */
+export interface CsvOptions {
+  style?: DisplayStyle;
+}
+
+function cell(text: string): string {
+  return /[",\n\r]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
+}
+
+/**
+ * Offset table → CSV text ("\n" line ends, trailing newline). Columns: span, girder, side, point,
+ * station (display text), offset (LT/RT), edge width, edge drop, form target, top of girder, buildup,
+ * drop from girder top. Elevations (form target, top of girder) stay in decimal feet or metres in every
+ * style because they are read against a level; widths and drops follow the style (feet-inches to the
+ * nearest 1/8"). Empty cells where a value does not apply (interior girders, no survey).
+ */
+export function offsetTableToCsv(table: OffsetTable, options: CsvOptions = {}): string {
+  const metric = table.units === 'm' || options.style === 'metric';
+  const style: DisplayStyle = metric ? 'metric' : (options.style ?? 'decimal-feet');
+  const elevationUnit = metric ? 'm' : 'ft';
+  const lengthUnit = metric ? 'm' : style === 'feet-inches' ? 'ft_in' : 'ft';
+  const length = (v: number | null) =>
+    v === null ? '' : metric ? formatMetres(v) : style === 'feet-inches' ? formatFeetInches(v) : formatFeet(v);
+  const elevation = (v: number | null) => (v === null ? '' : metric ? formatMetres(v) : formatFeet(v));
+  const header = [
+    'span',
+    'girder',
+    'side',
+    'point',
+    'station',
+    'offset',
+    `edge_width_${lengthUnit}`,
+    `edge_drop_${lengthUnit}`,
+    `form_target_${elevationUnit}`,
+    `top_of_girder_${elevationUnit}`,
+    `buildup_${lengthUnit}`,
+    `drop_from_girder_top_${lengthUnit}`,
+  ];
+  const lines = [header.join(',')];
+  for (const p of table.points) {
+    lines.push(
+      [
+        String(p.span),
+        p.girder,
+        p.side,
+        String(p.point),
+        formatStation(p.station, table.units),
+        formatOffset(p.offset, table.units, style),
+        length(p.edge_width),
+        length(p.edge_drop),
+        elevation(p.form_target),
+        elevation(p.top_of_girder),
+        length(p.buildup),
+        length(p.drop_from_girder_top),
+      ]
+        .map(cell)
+        .join(','),
+    );
+  }
+  return lines.join('\n') + '\n';
+}

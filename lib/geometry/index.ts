@@ -1,0 +1,56 @@
+/**
+ * Public surface of the Chordline geometry engine: pure TypeScript, no I/O. Lengths in the bridge's
+ * unit ("ft" or "m"), angles in degrees at the input, offsets positive to the right looking
+ * up-station, bearings clockwise from north.
+ */
+export { computeOffsetTable } from './compute';
+export type { OffsetTable, OffsetPoint, ChordOffsetSet, ChordOffsetPoint, SpanSummary, PointSide } from './types';
+export {
+  bridgeDescriptionSchema,
+  defaultFormSettlement,
+  DEFAULT_CHORD_SPACES,
+  DEFAULT_POINTS_PER_SPAN,
+  type BridgeDescription,
+  type BridgeDescriptionInput,
+} from './schema';
+export { parseBridge, validateGeometry, type ParseBridgeResult } from './validate';
+export { GeometryError, type GeometryIssue } from './errors';
+export {
+  formatFeet,
+  formatFeetInches,
+  formatLength,
+  formatMetres,
+  formatOffset,
+  formatStation,
+  type DisplayStyle,
+} from './format';
+export {
+  thermalBow,
+  thermalBowInches,
+  STEEL_EXPANSION_PER_F,
+  CONCRETE_EXPANSION_PER_F,
+  STEEL_EXPANSION_PER_C,
+  CONCRETE_EXPANSION_PER_C,
+} from './thermal';
+export { offsetTableToCsv, type CsvOptions } from './csv';
+export {
+  Alignment,
+  createAlignment,
+  directionOf,
+  rightNormalOf,
+  pointOnSkewedLine,
+  skewedLineBearing,
+  distanceAlongRayToOffset,
+  SolveError,
+  type AlignmentInput,
+  type AlignmentElementInput,
+  type AlignmentPoint,
+  type PlanPoint,
+  type StationOffset,
+} from './alignment';
+export { Profile, createProfile, type PviInput, type VerticalCurve } from './profile';
+export { DeckSurface, crossSlopeAt, gutterOffsets, sideOfOffset, type CrossSlopeInput, type DeckSide } from './crossSection';
+export { bentLinePoint, girderPoints, exteriorSides, type GirderPoint, type LocatedPoint } from './framing';
+export { chordEdgePoint, curvedEdgePoint, overhangElevations, outwardNormal, type EdgePoint } from './overhang';
+export { chordOffsetSet, chordOffsetAt, edgeMiddleOrdinate } from './chordOffsets';
+export { createBridgeModel, type BridgeModel } from './table';
