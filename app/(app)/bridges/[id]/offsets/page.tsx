@@ -1,0 +1,61 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { notFound } from 'next/navigation';
+import OffsetTables from '@/components/OffsetTables';
+import SafetyCaution from '@/components/SafetyCaution';
+import { requireUser } from '@/components/server-session';
+import { HttpError } from '@/lib/api/errors';
+import { getBridge } from '@/lib/services/bridges';
+
+type Params = Promise<{ id: string }>;
+
+export const metadata: Metadata = { title: 'Offset table' };
+
+async function load(id: string) {
+  try {
+    return await getBridge(id);
+  } catch (err) {
+    if (err instanceof HttpError && err.status === 404) notFound();
+    throw err;
+  }
+}
+
+export default async function OffsetsPage({ params }: { params: Params }) {
+  await requireUser();
+  const { id } = await params;
+  const bridge = await load(id);
+  const decimals = bridge.units === 'm' ? '0.001 m' : '0.01 ft';
+  return (
+    <>
+      <nav aria-label="Breadcrumb" className="no-print mb-2 text-sm">
+        <Link href="/bridges" className="text-brand-700 hover:underline">
+          Bridges
+        </Link>
+        <span className="text-concrete-500"> / </span>
+        <Link href={`/bridges/${bridge.id}`} className="text-brand-700 hover:underline">
+          {bridge.name}
+        </Link>
+        <span className="text-concrete-500"> / Offset table</span>
+      </nav>
+      <div className="mb-4 flex flex-wrap items-end justify-between gap-4">
+        <div>
+          <h1 className="text-2xl font-bold text-concrete-900">Offset table: {bridge.name}</h1>
+          <p className="mt-1 text-concrete-600">
+            Revision <span className="tabular font-semibold text-concrete-800">{bridge.revision}</span> · lengths and elevations in {bridge.units}, shown
+            to {decimals} · offsets left (LT) or right (RT) of the alignment
+          </p>
+        </div>
+        <a href={`/api/bridges/${bridge.id}/offsets.csv`} className="btn-secondary no-print" download>
+          Download CSV
+        </a>
+      </div>
+      <SafetyCaution className="mb-6" />
+      <p className="mb-6 max-w-3xl text-sm text-concrete-700">
+        Edge width is the horizontal distance from the girder centreline to the deck edge, square to the girder; on straight girders measure it from a string line between the girder&apos;s end centres, not from the girder. Edge drop runs from the bottom
+        of slab over the girder to the bottom outside edge of the overhang. The form target includes the form settlement allowance. Buildup and
+        drop from girder top appear where the top of girder has been surveyed; set the form from the girder, not from the deck forms.
+      </p>
+      <OffsetTables bridgeId={bridge.id} />
+    </>
+  );
+}

@@ -1,0 +1,66 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import DeleteBridgeButton from '@/components/DeleteBridgeButton';
+import GeometrySummary from '@/components/GeometrySummary';
+import RenameBridgeForm from '@/components/RenameBridgeForm';
+import RevisionHistory from '@/components/RevisionHistory';
+import { requireUser } from '@/components/server-session';
+import { dateTimeText } from '@/components/station-text';
+import { roleAllows } from '@/lib/auth/roles';
+import { loadBridge } from './load-bridge';
+
+type Params = Promise<{ id: string }>;
+
+export async function generateMetadata({ params }: { params: Params }): Promise<Metadata> {
+  const { id } = await params;
+  try {
+    const { bridge } = await loadBridge(id);
+    return { title: bridge.name };
+  } catch {
+    return { title: 'Bridge' };
+  }
+}
+
+export default async function BridgePage({ params }: { params: Params }) {
+  const user = await requireUser();
+  const { id } = await params;
+  const { bridge, revisions } = await loadBridge(id);
+  const unitName = bridge.units === 'm' ? 'metres (m)' : 'feet (ft)';
+
+  return (
+    <>
+      <nav aria-label="Breadcrumb" className="mb-2 text-sm">
+        <Link href="/bridges" className="text-brand-700 hover:underline">
+          Bridges
+        </Link>
+        <span className="text-concrete-500"> / {bridge.name}</span>
+      </nav>
+      <div className="mb-6 flex flex-wrap items-start justify-between gap-4">
+        <div>
+          <h1 className="text-2xl font-bold text-concrete-900">{bridge.name}</h1>
+          <p className="mt-1 text-concrete-600">
+            Units: {unitName} · Current revision <span className="tabular font-semibold text-concrete-800">{bridge.revision}</span> · Updated{' '}
+            {dateTimeText(bridge.updatedAt)}
+          </p>
+        </div>
+        <div className="flex flex-wrap items-start gap-2">
+          <Link href={`/bridges/${bridge.id}/offsets`} className="btn-primary">
+            Offset table
+          </Link>
+          <a href={`/api/bridges/${bridge.id}/offsets.csv`} className="btn-secondary" download>
+            Download CSV
+          </a>
+          {roleAllows(user.role, ['engineer']) ? <RenameBridgeForm bridgeId={bridge.id} name={bridge.name} /> : null}
+          {user.role === 'admin' ? <DeleteBridgeButton bridgeId={bridge.id} name={bridge.name} /> : null}
+        </div>
+      </div>
+
+      <h2 className="mb-3 text-lg font-bold text-concrete-900">Geometry of revision {bridge.revision}</h2>
+      <GeometrySummary description={bridge.description} />
+
+      <div className="mt-8">
+        <RevisionHistory revisions={revisions} current={bridge.revision} />
+      </div>
+    </>
+  );
+}
