@@ -1,0 +1,53 @@
+'use client';
+
+import useSWR from 'swr';
+import AddUserForm from './AddUserForm';
+import { fetcher, type ApiError } from './api-client';
+import type { PublicUserRow } from './public-user';
+import UserRow from './UserRow';
+
+/** The administrator's user list (GET /api/admin/users) and the form to add one. */
+export default function UserAdmin({ selfId }: { selfId: number }) {
+  const { data, error, isLoading, mutate } = useSWR<PublicUserRow[], ApiError>('/api/admin/users', fetcher);
+  return (
+    <div className="space-y-6">
+      {error ? (
+        <div role="alert" className="card p-6">
+          <p className="text-fail-600">{error.message}</p>
+          <button type="button" className="btn-secondary mt-3" onClick={() => void mutate()}>
+            Try again
+          </button>
+        </div>
+      ) : isLoading || !data ? (
+        <p role="status" className="text-concrete-600">
+          Loading users…
+        </p>
+      ) : (
+        <div className="card overflow-x-auto">
+          <table className="w-full text-left text-sm">
+            <caption className="sr-only">Users</caption>
+            <thead className="border-b border-concrete-200 bg-concrete-100 text-concrete-700">
+              <tr>
+                <th scope="col" className="px-4 py-3 font-semibold">
+                  User
+                </th>
+                <th scope="col" className="px-4 py-3 font-semibold">
+                  Role
+                </th>
+                <th scope="col" className="px-4 py-3 font-semibold">
+                  Password
+                </th>
+              </tr>
+            </thead>
+            <tbody>
+              {data.map((u) => (
+                <UserRow key={u.id} user={u} isSelf={u.id === selfId} />
+              ))}
+            </tbody>
+          </table>
+        </div>
+      )}
+      <AddUserForm />
+    </div>
+  );
+}
