@@ -1,0 +1,143 @@
+import { describe, it, expect } from 'vitest';
+import { bridgeDescriptionSchema, computeOffsetTable, GeometryError, parseBridge, validateGeometry, type BridgeDescription } from '@/lib/geometry';
+import { arcBridge, straightBridge } from './helpers';
+
+function messages(bridge: BridgeDescription): string {
+  return validateGeometry(bridge).map((i) => i.message).join('\n');
+}
+
+describe('schema', () => {
+  it('accepts the contract example and keeps unknown extra fields', () => {
+    // Data contract (bridge-format.md): "add new optional fields freely".
+    const input = { ...straightBridge(), survey_note: 'shot 2 May', deck: { ...straightBridge().deck, rail_type: 'F-shape' } };
+    const parsed = bridgeDescriptionSchema.parse(input) as Record<string, unknown>;
+    expect(parsed.survey_note).toBe('shot 2 May');
+    expect((parsed.deck as Record<string, unknown>).rail_type).toBe('F-shape');
+  });
+
+  it('rejects NaN and Infinity, unknown element types and units, naming the field', () => {
+    const bad = straightBridge();
+    const r1 = parseBridge({ ...bad, deck: { ...bad.deck, slab_thickness: Infinity } });
+    expect(r1.ok).toBe(false);
+    if (!r1.ok && r1.kind === 'schema') expect(Object.keys(r1.fields)).toContain('deck.slab_thickness');
+    const r2 = parseBridge({ ...bad, alignment: { ...bad.alignment, start_x: NaN } });
+    expect(r2.ok === false && r2.kind === 'schema').toBe(true);
+    const r3 = parseBridge({ ...bad, alignment: { ...bad.alignment, elements: [{ type: 'spiral', length: 10 }] } });
+    expect(r3.ok === false && r3.kind === 'schema' && r3.message).toMatch(/line|arc/);
+    const r4 = parseBridge({ ...bad, units: 'furlongs' });
+    expect(r4.ok === false && r4.kind === 'schema' && r4.fields.units?.[0]).toMatch(/ft/);
+    const r5 = parseBridge('not a bridge');
+    expect(r5.ok === false && r5.kind === 'schema' && Object.keys(r5.fields)).toEqual(['_']);
+  });
+
+  it('rejects zero-length elements and a zero radius', () => {
+    const b = straightBridge();
+    const r = parseBridge({ ...b, alignment: { ...b.alignment, elements: [{ type: 'line', length: 0 }, { type: 'arc', length: 10, radius: 0, direction: 'left' }] } });
+    expect(r.ok).toBe(false);
+    if (!r.ok && r.kind === 'schema') {
+      expect(Object.keys(r.fields)).toEqual(expect.arrayContaining(['alignment.elements.0.length', 'alignment.elements.1.radius']));
+    }
+  });
+
+  it('keeps points_per_span within 1..10000', () => {
+    for (const n of [0, 10001, 2.5]) {
+      const r = parseBridge(straightBridge({ points_per_span: n }));
+      expect(r.ok === false && r.kind === 'schema' && Object.keys(r.fields)).toEqual(['points_per_span']);
+    }
+    expect(parseBridge(straightBridge({ points_per_span: 10000 })).ok).toBe(true);
+  });
+});
+
+describe('geometric checks', () => {
+  it('passes a sound bridge', () => {
+    expect(validateGeometry(straightBridge())).toEqual([]);
+    expect(parseBridge(straightBridge()).ok).toBe(true);
+  });
+
+  it('finds non-finite numbers even without the schema', () => {
+    const b = straightBridge();
+    const issues = validateGeometry({ ...b, profile: { pvis: [{ station: 0, elevation: NaN }, { station: 500, elevation: 105 }] } });
+    expect(issues[0].path).toBe('profile.pvis.0.elevation');
+  });
+
+  it('names zero-length elements and a radius not larger than an inside offset', () => {
+    const b = straightBridge();
+    expect(messages({ ...b, alignment: { ...b.alignment, elements: [{ type: 'line', length: 0 }, { type: 'line', length: 500 }] } })).toMatch(/Alignment element 1: the length must be greater than zero/);
+    // A 15 ft radius to the right is smaller than the 20 ft right edge offset on its inside.
+    const tight = messages({ ...b, alignment: { ...b.alignment, elements: [{ type: 'line', length: 500 }, { type: 'arc', length: 10, radius: 15, direction: 'right' }] } });
+    expect(tight).toMatch(/right edge offset 20\.00 ft is on the inside of the curve and not smaller than the radius 15\.00 ft/);
+    expect(tight).toMatch(/Girder G3: the offset 16\.00 ft at bent 1/);
+  });
+
+  it('refuses a bent beyond the alignment and bents out of order', () => {
+    const b = straightBridge();
+    expect(messages({ ...b, bents: [b.bents[0], { name: 'Bent 2', station: 520, skew_deg: 0 }] })).toMatch(/Bent 2 at 5\+20\.00 is off the alignment, which runs from 0\+00\.00 to 5\+00\.00/);
+    expect(messages({ ...b, bents: [b.bents[1], b.bents[0]] })).toMatch(/Bent 1 at 1\+00\.00 must be up-station of Bent 2 at 2\+00\.00/);
+  });
+
+  it('counts offsets against bents and spots duplicate girder names', () => {
+    const b = straightBridge();
+    const m = messages({ ...b, girders: [{ name: 'G1', layout: 'chord', offsets: [-16, -16, -16] }, { name: 'G1', layout: 'chord', offsets: [16, 16] }] });
+    expect(m).toMatch(/Girder G1 has 3 offsets but the bridge has 2 bents/);
+    expect(m).toMatch(/Girder name G1 is used twice/);
+  });
+
+  it('names the span, girder and point of a girder at or beyond the deck edge', () => {
+    const b = straightBridge({ girders: [{ name: 'G1', layout: 'chord', offsets: [-16, -20.3] }, { name: 'G2', layout: 'chord', offsets: [16, 16] }] });
+    const issues = validateGeometry(b);
+    expect(issues.length).toBeGreaterThan(0);
+    // The girder runs from 16 ft to 20.3 ft left: it crosses the 20 ft edge at 93 % of the span.
+    expect(issues[0]).toMatchObject({ span: 1, girder: 'G1', point: 10 });
+    expect(issues[0].message).toBe('Span 1, girder G1, point 10: the girder point is at or beyond the left deck edge (edge width -0.30 ft)');
+    expect(() => computeOffsetTable(b)).toThrow(GeometryError);
+    const r = parseBridge(b);
+    expect(r.ok === false && r.kind).toBe('geometry');
+  });
+
+  it('refuses overlapping vertical curves, a curve on an end PVI, and PVIs out of order', () => {
+    const b = straightBridge();
+    const overlap = messages({ ...b, profile: { pvis: [{ station: 0, elevation: 100 }, { station: 200, elevation: 104, curve_length: 200 }, { station: 350, elevation: 101, curve_length: 150 }, { station: 600, elevation: 103 }] } });
+    expect(overlap).toMatch(/vertical curves at PVI 2 \(2\+00\.00\) and PVI 3 \(3\+50\.00\) overlap/);
+    expect(messages({ ...b, profile: { pvis: [{ station: 0, elevation: 100, curve_length: 50 }, { station: 500, elevation: 104 }] } })).toMatch(/PVI 1: the first PVI cannot carry a vertical curve/);
+    expect(messages({ ...b, profile: { pvis: [{ station: 300, elevation: 100 }, { station: 200, elevation: 104 }] } })).toMatch(/PVI 2 at 2\+00\.00 must be up-station of PVI 1/);
+  });
+
+  it('refuses cross-slope stations out of order and crossing deck edges', () => {
+    const b = straightBridge();
+    expect(messages({ ...b, cross_slopes: [{ station: 200, left: -0.02, right: -0.02 }, { station: 200, left: 0.02, right: -0.02 }] })).toMatch(/Cross slope 2 at 2\+00\.00 must be up-station/);
+    expect(messages({ ...b, deck: { ...b.deck, left_edge_offset: 20, right_edge_offset: -20 } })).toMatch(/left edge offset/);
+  });
+
+  it('checks top-of-girder references', () => {
+    const m = messages(straightBridge({ top_of_girder: [{ girder: 'G9', span: 3, point: 11, elevation: 100 }] }));
+    expect(m).toMatch(/no girder named G9/);
+    expect(m).toMatch(/span 3 does not exist/);
+    expect(m).toMatch(/point 11 does not exist/);
+  });
+});
+
+describe('large and awkward input', () => {
+  it('10,000 points per span completes and agrees with tenth points', () => {
+    // Girder point k of n = 10 is point 1000·k of n = 10,000 (same fraction of the span).
+    const coarse = computeOffsetTable(arcBridge({ radius: 900, direction: 'right', spans: [110, 130], skews: [5, -10, 15], n: 10, m: 10 }));
+    const fine = computeOffsetTable(arcBridge({ radius: 900, direction: 'right', spans: [110, 130], skews: [5, -10, 15], n: 10000, m: 10000 }));
+    expect(fine.points.length).toBe(2 * 2 * 10001);
+    for (const p of coarse.points) {
+      const q = fine.points.find((r) => r.span === p.span && r.girder === p.girder && r.side === p.side && r.point === p.point * 1000);
+      expect(q).toBeDefined();
+      for (const key of ['x', 'y', 'station', 'offset', 'edge_width', 'edge_drop', 'form_target'] as const) {
+        expect(Math.abs((q?.[key] as number) - (p[key] as number))).toBeLessThan(1e-9);
+      }
+    }
+    for (const set of coarse.chord_offsets) {
+      const f = fine.chord_offsets.find((c) => c.span === set.span && c.side === set.side);
+      expect(Math.abs((f?.offsets[5000].offset ?? NaN) - set.offsets[5].offset)).toBeLessThan(1e-9);
+    }
+  }, 60000);
+
+  it('bent lines crossing inside the deck are refused', () => {
+    // Two bents 20 ft apart with opposite 40° skews meet inside a 40 ft deck.
+    const b = straightBridge({ bents: [{ name: 'Bent 1', station: 100, skew_deg: 40 }, { name: 'Bent 2', station: 120, skew_deg: -40 }] });
+    expect(messages(b)).toMatch(/not up-station/);
+  });
+});
