@@ -5,7 +5,10 @@
 import { formatFeet, formatFeetInches, formatMetres, formatOffset, formatStation, type DisplayStyle } from './format';
 import type { OffsetTable } from './types';
 
-/** CSV options. `style` applies to feet bridges; metric bridges always show metres. */
+/**
+ * CSV options. `style` chooses decimal feet or feet-inches for a feet bridge; metric follows the
+ * units (a metric bridge always shows metres; 'metric' on a feet bridge gives decimal feet).
+ */
 export interface CsvOptions {
   style?: DisplayStyle;
 }
@@ -22,8 +25,8 @@ function cell(text: string): string {
  * nearest 1/8"). Empty cells where a value does not apply (interior girders, no survey).
  */
 export function offsetTableToCsv(table: OffsetTable, options: CsvOptions = {}): string {
-  const metric = table.units === 'm' || options.style === 'metric';
-  const style: DisplayStyle = metric ? 'metric' : (options.style ?? 'decimal-feet');
+  const metric = table.units === 'm';
+  const style: DisplayStyle = metric ? 'metric' : options.style === 'feet-inches' ? 'feet-inches' : 'decimal-feet';
   const elevationUnit = metric ? 'm' : 'ft';
   const lengthUnit = metric ? 'm' : style === 'feet-inches' ? 'ft_in' : 'ft';
   const length = (v: number | null) =>

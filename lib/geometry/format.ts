@@ -7,7 +7,11 @@ import { Decimal } from 'decimal.js';
 
 const Dec = Decimal.clone({ precision: 40, rounding: Decimal.ROUND_HALF_UP });
 
-/** How lengths are shown: decimal feet, feet-inches to 1/8", or metres (metric bridges always). */
+/**
+ * How lengths are shown: decimal feet or feet-inches to 1/8" for a feet bridge. Metric follows the
+ * bridge's units: a metric bridge always shows metres, and 'metric' on a feet bridge shows decimal
+ * feet (the style never relabels a number in another unit).
+ */
 export type DisplayStyle = 'decimal-feet' | 'feet-inches' | 'metric';
 
 function fixed(value: number, places: number): string {
@@ -50,7 +54,7 @@ export function formatFeetInches(feet: number): string {
  * @param value length in the bridge's unit.
  */
 export function formatLength(value: number, units: 'ft' | 'm', style: DisplayStyle = 'decimal-feet'): string {
-  if (units === 'm' || style === 'metric') return `${formatMetres(value)} m`;
+  if (units === 'm') return `${formatMetres(value)} m`;
   if (style === 'feet-inches') return formatFeetInches(value);
   return `${formatFeet(value)} ft`;
 }
@@ -81,7 +85,7 @@ export function formatStation(station: number, units: 'ft' | 'm'): string {
 export function formatOffset(offset: number, units: 'ft' | 'm', style: DisplayStyle = 'decimal-feet'): string {
   const magnitude = Math.abs(offset);
   const text =
-    units === 'm' || style === 'metric'
+    units === 'm'
       ? formatMetres(magnitude)
       : style === 'feet-inches'
         ? formatFeetInches(magnitude)

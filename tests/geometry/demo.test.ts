@@ -1,0 +1,50 @@
+import { describe, it, expect } from 'vitest';
+import { demoBridges } from '@/lib/demo/bridges';
+import { bridgeDescriptionSchema, computeOffsetTable, offsetTableToCsv, validateGeometry } from '@/lib/geometry';
+
+describe('demo bridges', () => {
+  it('are two, pass the schema and compute without geometry issues', () => {
+    expect(demoBridges).toHaveLength(2);
+    for (const b of demoBridges) {
+      expect(bridgeDescriptionSchema.safeParse(b).success).toBe(true);
+      expect(validateGeometry(b)).toEqual([]);
+    }
+  });
+
+  it('have overhangs a real deck would have (about 2.5 to 4.5 ft)', () => {
+    // Common practice: overhangs of roughly 2.5–4.5 ft from the exterior girder line.
+    for (const b of demoBridges) {
+      const t = computeOffsetTable(b);
+      for (const p of t.points.filter((q) => q.side !== 'interior')) {
+        expect(p.edge_width as number).toBeGreaterThan(2.5);
+        expect(p.edge_width as number).toBeLessThan(4.5);
+      }
+    }
+  });
+
+  it('the precast bridge shows the chord effect; the steel one keeps a constant overhang', () => {
+    const [precast, steel] = demoBridges.map((b) => computeOffsetTable(b));
+    expect(demoBridges[0].girders.every((g) => g.layout === 'chord')).toBe(true);
+    expect(demoBridges[0].girders).toHaveLength(5);
+    expect(demoBridges[0].bents).toHaveLength(4);
+    for (const s of precast.span_summaries) expect(s.max_edge_width - s.min_edge_width).toBeGreaterThan(0.5);
+    expect(demoBridges[1].girders.every((g) => g.layout === 'curved')).toBe(true);
+    for (const s of steel.span_summaries) expect(s.max_edge_width - s.min_edge_width).toBeLessThan(1e-9);
+    // Surveyed tops of girder give buildups on span 1 of the precast bridge.
+    expect(precast.points.filter((p) => p.buildup !== null && p.side !== 'interior').length).toBeGreaterThanOrEqual(4);
+  });
+
+  it('export to CSV in every style', () => {
+    const t = computeOffsetTable(demoBridges[0]);
+    for (const style of ['decimal-feet', 'feet-inches', 'metric'] as const) {
+      const csv = offsetTableToCsv(t, { style });
+      expect(csv.trim().split('\n')).toHaveLength(t.points.length + 1);
+    }
+    expect(offsetTableToCsv(t, { style: 'feet-inches' }).split('\n')[0]).toContain('edge_width_ft_in');
+    // Metric follows the units: a feet bridge is never labelled in metres.
+    expect(offsetTableToCsv(t, { style: 'metric' }).split('\n')[0]).toContain('edge_width_ft');
+    const metric = offsetTableToCsv({ ...t, units: 'm' }, { style: 'feet-inches' }).split('\n');
+    expect(metric[0]).toContain('edge_width_m');
+    expect(metric[1]).toMatch(/^1,G1,left,0,1\+196\.849,18\.200 LT,2\.803,/);
+  });
+});
