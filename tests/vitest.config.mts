@@ -1,0 +1,45 @@
+import { defineConfig } from 'vitest/config';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+
+const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
+const alias = { '@': root };
+
+export default defineConfig({
+  root,
+  resolve: { alias },
+  test: {
+    projects: [
+      {
+        resolve: { alias },
+        test: { name: 'unit', root, include: ['tests/geometry/**/*.test.ts', 'tests/lib/**/*.test.ts', 'tests/scene/**/*.test.ts'], environment: 'node' },
+      },
+      {
+        resolve: { alias },
+        test: {
+          name: 'api',
+          root,
+          include: ['tests/api/**/*.test.ts'],
+          environment: 'node',
+          // Each file gets its own SQLite database in a temp folder (see tests/api/helpers.ts).
+          setupFiles: ['tests/api/setup.ts'],
+          testTimeout: 30000,
+          hookTimeout: 60000,
+        },
+      },
+      {
+        resolve: { alias },
+        test: {
+          name: 'e2e',
+          root,
+          include: ['tests/e2e/**/*.test.ts'],
+          environment: 'node',
+          globalSetup: ['tests/e2e/global-setup.ts'],
+          testTimeout: 120000,
+          hookTimeout: 120000,
+          fileParallelism: false,
+        },
+      },
+    ],
+  },
+});
