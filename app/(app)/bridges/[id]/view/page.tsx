@@ -1,0 +1,49 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { notFound } from 'next/navigation';
+import PageHeader from '@/components/PageHeader';
+import SafetyCaution from '@/components/SafetyCaution';
+import { requireUser } from '@/components/server-session';
+import { HttpError } from '@/lib/api/errors';
+import { sceneDataForBridge } from '@/lib/scene-data/bridge';
+import LazyBridgeViewer from '@/scene/LazyBridgeViewer';
+import EdgeWidthSummary from '@/scene/EdgeWidthSummary';
+
+export const metadata: Metadata = { title: '3D view' };
+
+export default async function BridgeViewPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ stats?: string }> }) {
+  await requireUser();
+  const { id } = await params;
+  const { stats } = await searchParams;
+  let data;
+  try {
+    data = await sceneDataForBridge(id);
+  } catch (err) {
+    if (err instanceof HttpError && err.status === 404) notFound();
+    throw err;
+  }
+  const offsetsHref = `/bridges/${data.id}/offsets`;
+  return (
+    <>
+      <PageHeader
+        title={`${data.name}: 3D view`}
+        subtitle={`Revision ${data.revision} · drag to turn, scroll to zoom, right-drag to pan · lengths in ${data.table.units === 'm' ? 'metres' : 'feet'}`}
+        actions={
+          <>
+            <Link href={`/bridges/${data.id}`} className="btn-secondary">
+              Bridge details
+            </Link>
+            <Link href={offsetsHref} className="btn-secondary">
+              Offset table
+            </Link>
+          </>
+        }
+      />
+      <div className="space-y-6">
+        <LazyBridgeViewer description={data.description} table={data.table} name={data.name} showStats={stats === '1'} offsetsHref={offsetsHref} />
+        <EdgeWidthSummary table={data.table} />
+        <SafetyCaution />
+      </div>
+    </>
+  );
+}

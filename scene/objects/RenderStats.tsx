@@ -1,0 +1,33 @@
+'use client';
+
+import { useFrame } from '@react-three/fiber';
+import { useRef, type RefObject } from 'react';
+
+/**
+ * Keeps the overlay's data attributes current from the renderer's counters: draw calls and
+ * triangles of the last frame, and frames rendered so far. Writes only when a number changed.
+ */
+export default function RenderStats({ target }: { target: RefObject<HTMLElement | null> }) {
+  const last = useRef({ calls: -1, triangles: -1, frames: 0 });
+  useFrame(({ gl }) => {
+    const el = target.current;
+    const s = last.current;
+    s.frames += 1;
+    if (!el) return;
+    // info.render holds the previous frame's totals here (it is reset when a frame starts).
+    const calls = gl.info.render.calls;
+    const triangles = gl.info.render.triangles;
+    if (calls !== s.calls) {
+      s.calls = calls;
+      el.setAttribute('data-draw-calls', String(calls));
+    }
+    if (triangles !== s.triangles) {
+      s.triangles = triangles;
+      el.setAttribute('data-triangles', String(triangles));
+    }
+    el.setAttribute('data-frames', String(s.frames));
+    // The visible text is refreshed now and then; the attributes above are the exact figures.
+    if (s.frames % 20 === 1) el.textContent = `${calls} draw calls · ${triangles} triangles · ${s.frames} frames`;
+  });
+  return null;
+}
