@@ -135,7 +135,7 @@ function elementStationOffset(e: Element, x: number, y: number): StationOffset {
     return { station: e.startStation + dx * s + dy * c, offset: dx * c - dy * s, bearing: e.bearing0 };
   }
   const d = arcParameter(e, x, y);
-  const dist = Math.hypot(x - e.cx, y - e.cy);
+  const dist = Math.sqrt((x - e.cx) * (x - e.cx) + (y - e.cy) * (y - e.cy));
   // Right turn: centre on the right, so going right brings the point nearer the centre.
   const offset = e.turn > 0 ? e.radius - dist : dist - e.radius;
   return { station: e.startStation + d, offset, bearing: e.bearing0 + (e.turn * d) / e.radius };
@@ -148,19 +148,24 @@ function distanceToElement(e: Element, x: number, y: number): number {
     const dx = x - e.x0;
     const dy = y - e.y0;
     const t = Math.min(Math.max(dx * s + dy * c, 0), e.length);
-    return Math.hypot(dx - t * s, dy - t * c);
+    const ex = dx - t * s;
+    const ey = dy - t * c;
+    return Math.sqrt(ex * ex + ey * ey);
   }
   const d = arcParameter(e, x, y);
-  if (d >= 0 && d <= e.length) return Math.abs(Math.hypot(x - e.cx, y - e.cy) - e.radius);
+  const rx = x - e.cx;
+  const ry = y - e.cy;
+  if (d >= 0 && d <= e.length) return Math.abs(Math.sqrt(rx * rx + ry * ry) - e.radius);
   const a = elementPoint(e, 0);
   const b = elementPoint(e, e.length);
-  return Math.min(Math.hypot(x - a.x, y - a.y), Math.hypot(x - b.x, y - b.y));
+  return Math.sqrt(Math.min((x - a.x) ** 2 + (y - a.y) ** 2, (x - b.x) ** 2 + (y - b.y) ** 2));
 }
 
-function boxDistance(n: { minX: number; minY: number; maxX: number; maxY: number }, x: number, y: number): number {
+/** Squared distance from a point to a box (0 inside); squared to keep square roots out of the search. */
+function boxDistanceSq(n: { minX: number; minY: number; maxX: number; maxY: number }, x: number, y: number): number {
   const dx = x < n.minX ? n.minX - x : x > n.maxX ? x - n.maxX : 0;
   const dy = y < n.minY ? n.minY - y : y > n.maxY ? y - n.maxY : 0;
-  return Math.hypot(dx, dy);
+  return dx * dx + dy * dy;
 }
 
 function buildTree(elements: Element[], lo: number, hi: number): BoxNode {
@@ -196,6 +201,9 @@ export class Alignment {
   private readonly tree: BoxNode | null;
   private readonly start: AlignmentPoint;
   private readonly end: AlignmentPoint;
+  // Search scratch: a reusable stack (depth ≤ 2·log2 n + 2) and the last element found, as a hint.
+  private readonly stack: BoxNode[] = [];
+  private lastElement = -1;
 
   constructor(input: AlignmentInput) {
     this.startStation = input.start_station;
@@ -340,12 +348,24 @@ export class Alignment {
       }
     }
     let bestElement = -1;
+    // Successive queries are usually near each other: the last element found gives a tight bound first.
+    const hint = this.lastElement;
+    if (hint >= 0) {
+      const d = distanceToElement(this.elements[hint], x, y);
+      if (d < bestDist) {
+        bestDist = d;
+        bestElement = hint;
+      }
+    }
     // Nearest-element search: visit nearer boxes first and prune boxes farther than the best so far.
-    const stack: BoxNode[] = [this.tree];
-    while (stack.length > 0) {
-      const node = stack.pop() as BoxNode;
-      if (boxDistance(node, x, y) >= bestDist) continue;
+    const stack = this.stack;
+    let top = 0;
+    stack[top++] = this.tree;
+    while (top > 0) {
+      const node = stack[--top];
+      if (boxDistanceSq(node, x, y) >= bestDist * bestDist) continue;
       if (node.element >= 0) {
+        if (node.element === hint) continue;
         const d = distanceToElement(this.elements[node.element], x, y);
         if (d < bestDist) {
           bestDist = d;
@@ -355,9 +375,15 @@ export class Alignment {
       }
       const l = node.left as BoxNode;
       const r = node.right as BoxNode;
-      if (boxDistance(l, x, y) < boxDistance(r, x, y)) stack.push(r, l);
-      else stack.push(l, r);
+      if (boxDistanceSq(l, x, y) < boxDistanceSq(r, x, y)) {
+        stack[top++] = r;
+        stack[top++] = l;
+      } else {
+        stack[top++] = l;
+        stack[top++] = r;
+      }
     }
+    if (bestElement >= 0) this.lastElement = bestElement;
     if (bestElement >= 0) return elementStationOffset(this.elements[bestElement], x, y);
     return best as StationOffset;
   }
