@@ -120,5 +120,5 @@ const quarryLane: BridgeDescription = {
   chord_spaces: 10,
 };
 
-/** The demonstration bridges, in the order the demo seed stores them. */
+/** The demonstration bridges: [0] the precast chorded bridge, [1] the curved steel bridge. */
 export const demoBridges: BridgeDescription[] = [marlowCreek, quarryLane];

@@ -53,12 +53,12 @@ export interface StationOffset {
   bearing: number;
 }
 
-/** Unit vector of an azimuth (clockwise from north). */
+/** Unit vector (x east, y north) of an azimuth given in radians clockwise from north; any angle. */
 export function directionOf(bearing: number): PlanPoint {
   return { x: Math.sin(bearing), y: Math.cos(bearing) };
 }
 
-/** Unit vector pointing to the RIGHT of travel along an azimuth. */
+/** Unit vector (x east, y north) to the RIGHT of travel along an azimuth in radians clockwise from north. */
 export function rightNormalOf(bearing: number): PlanPoint {
   return { x: Math.cos(bearing), y: -Math.sin(bearing) };
 }

@@ -119,6 +119,8 @@ describe('station and offset', () => {
   it('inverts station/offset to 1e-9 on both sides of the curve and across joins (property)', () => {
     fc.assert(
       fc.property(fc.double({ min: 960, max: 1760, noNaN: true }), fc.double({ min: -300, max: 300, noNaN: true }), (s, o) => {
+        // The inverse is defined as the exact inverse of station/offset → point (data contract,
+        // "Top of deck at a plan point Q: find its station s and offset o by the inverse").
         // Offsets on the inside of the curve must stay short of the radius (950 ft).
         const p = al.pointAt(s, o);
         const back = al.stationOffset(p.x, p.y);
@@ -130,6 +132,7 @@ describe('station and offset', () => {
   });
 
   it('inverts exactly at element joins', () => {
+    // Round trip as above, at the PC and PT where two elements meet (tangent-continuous joins).
     for (const s of [1120, 1520]) {
       for (const o of [-25, 0, 25]) {
         const p = al.pointAt(s, o);
@@ -148,6 +151,7 @@ describe('station and offset', () => {
       else elements.push({ type: 'arc', length: 20 + (i % 5), radius: 400 + 10 * (i % 11), direction: i % 2 === 0 ? 'left' : 'right' });
     }
     const long = createAlignment({ start_station: 0, start_x: 0, start_y: 0, start_bearing_deg: 10, elements });
+    // Round trip (inverse of station/offset → point) on 600 elements.
     expect(long.elementCount).toBe(600);
     fc.assert(
       fc.property(fc.double({ min: 0, max: long.endStation, noNaN: true }), fc.double({ min: -60, max: 60, noNaN: true }), (s, o) => {
@@ -172,6 +176,7 @@ describe('station and offset', () => {
         { type: 'arc', length: 0, radius: 100, direction: 'left' },
       ],
     });
+    // Data contract: stations run continuously along the elements; a zero-length one adds nothing.
     expect(a.endStation).toBeCloseTo(50, 12);
     const p = a.pointAt(25, -2);
     // Due east, left is north.

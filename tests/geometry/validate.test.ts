@@ -50,6 +50,7 @@ describe('schema', () => {
 
 describe('geometric checks', () => {
   it('passes a sound bridge', () => {
+    // Hand-checked straight bridge: 4 ft overhangs, nothing out of order.
     expect(validateGeometry(straightBridge())).toEqual([]);
     expect(parseBridge(straightBridge()).ok).toBe(true);
   });
@@ -70,12 +71,14 @@ describe('geometric checks', () => {
   });
 
   it('refuses a bent beyond the alignment and bents out of order', () => {
+    // Data contract: bents in up-station order; the bridge lies on the described alignment.
     const b = straightBridge();
     expect(messages({ ...b, bents: [b.bents[0], { name: 'Bent 2', station: 520, skew_deg: 0 }] })).toMatch(/Bent 2 at 5\+20\.00 is off the alignment, which runs from 0\+00\.00 to 5\+00\.00/);
     expect(messages({ ...b, bents: [b.bents[1], b.bents[0]] })).toMatch(/Bent 1 at 1\+00\.00 must be up-station of Bent 2 at 2\+00\.00/);
   });
 
   it('counts offsets against bents and spots duplicate girder names', () => {
+    // Data contract: a girder's offsets have one value per bent.
     const b = straightBridge();
     const m = messages({ ...b, girders: [{ name: 'G1', layout: 'chord', offsets: [-16, -16, -16] }, { name: 'G1', layout: 'chord', offsets: [16, 16] }] });
     expect(m).toMatch(/Girder G1 has 3 offsets but the bridge has 2 bents/);
@@ -95,6 +98,8 @@ describe('geometric checks', () => {
   });
 
   it('refuses overlapping vertical curves, a curve on an end PVI, and PVIs out of order', () => {
+    // Data contract: PVIs in station order; the first and last PVI carry no curve; a curve runs
+    // from s − L/2 to s + L/2, so 200 + 100 > 350 − 75 overlaps.
     const b = straightBridge();
     const overlap = messages({ ...b, profile: { pvis: [{ station: 0, elevation: 100 }, { station: 200, elevation: 104, curve_length: 200 }, { station: 350, elevation: 101, curve_length: 150 }, { station: 600, elevation: 103 }] } });
     expect(overlap).toMatch(/vertical curves at PVI 2 \(2\+00\.00\) and PVI 3 \(3\+50\.00\) overlap/);
@@ -103,12 +108,14 @@ describe('geometric checks', () => {
   });
 
   it('refuses cross-slope stations out of order and crossing deck edges', () => {
+    // Data contract: cross slopes linear between listed stations (which must increase); left edge negative.
     const b = straightBridge();
     expect(messages({ ...b, cross_slopes: [{ station: 200, left: -0.02, right: -0.02 }, { station: 200, left: 0.02, right: -0.02 }] })).toMatch(/Cross slope 2 at 2\+00\.00 must be up-station/);
     expect(messages({ ...b, deck: { ...b.deck, left_edge_offset: 20, right_edge_offset: -20 } })).toMatch(/left edge offset/);
   });
 
   it('checks top-of-girder references', () => {
+    // Data contract: surveyed elevations at girder points, which exist only for listed girders, spans 1..bents−1, points 0..n.
     const m = messages(straightBridge({ top_of_girder: [{ girder: 'G9', span: 3, point: 11, elevation: 100 }] }));
     expect(m).toMatch(/no girder named G9/);
     expect(m).toMatch(/span 3 does not exist/);
