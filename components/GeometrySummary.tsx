@@ -1,11 +1,12 @@
 import type { BridgeDescription } from '@/lib/geometry/schema';
 import SummaryTable from './SummaryTable';
-import { lengthText, offsetText, slopeText, stationText, type Units } from './station-text';
+import { enteredLengthText, lengthText, offsetText, slopeText, stationText, type Units } from './station-text';
 
 /** Plain-language summary of a stored description: alignment, profile, section, bents, spans, girders. */
 export default function GeometrySummary({ description }: { description: BridgeDescription }) {
   const units = description.units as Units;
   const len = (v: number | undefined) => lengthText(v, units);
+  const entered = (v: number | undefined) => enteredLengthText(v, units);
   const sta = (v: number) => stationText(v, units);
 
   let station = description.alignment.start_station;
@@ -31,11 +32,11 @@ export default function GeometrySummary({ description }: { description: BridgeDe
   const section: React.ReactNode[][] = [
     ['Left deck edge', offsetText(deck.left_edge_offset, units, true)],
     ['Right deck edge', offsetText(deck.right_edge_offset, units, true)],
-    ['Slab thickness over girders', len(deck.slab_thickness)],
-    ['Edge thickness', len(deck.edge_thickness)],
-    ['Left barrier width', len(deck.left_barrier_width)],
-    ['Right barrier width', len(deck.right_barrier_width)],
-    [`Form settlement allowance${deck.form_settlement === undefined ? ' (default)' : ''}`, len(settlement)],
+    ['Slab thickness over girders', entered(deck.slab_thickness)],
+    ['Edge thickness', entered(deck.edge_thickness)],
+    ['Left barrier width', entered(deck.left_barrier_width)],
+    ['Right barrier width', entered(deck.right_barrier_width)],
+    [`Form settlement allowance${deck.form_settlement === undefined ? ' (default)' : ''}`, entered(settlement)],
     ['Girder points per span', `${description.points_per_span ?? 10} divisions (${(description.points_per_span ?? 10) + 1} points)`],
     ['Chord offset spaces per span', `${description.chord_spaces ?? 20} spaces`],
   ];
@@ -53,7 +54,7 @@ export default function GeometrySummary({ description }: { description: BridgeDe
         />
       </div>
       <SummaryTable title="Bents" headers={['Bent', 'Station', 'Skew']} rows={bents} />
-      <SummaryTable title="Spans" headers={['Span', 'Between', 'From', 'To', `Length along alignment (${units})`]} rows={spans} numericFrom={2} />
+      <SummaryTable title="Spans (lengths along the alignment)" headers={['Span', 'Between', 'From', 'To', `Length (${units})`]} rows={spans} numericFrom={2} />
       <div className="lg:col-span-2">
         <SummaryTable title="Girders (offset at each bent, in order)" headers={['Girder', 'Layout', `Offsets (${units})`]} rows={girders} numericFrom={2} />
       </div>

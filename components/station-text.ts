@@ -18,6 +18,18 @@ export function lengthText(value: number | null | undefined, units: Units, withU
 }
 
 /**
+ * A value as it was entered in the description, with its unit: at least the display decimals and up
+ * to four more significant ones (0.708 ft stays "0.708 ft", 21 ft reads "21.00 ft").
+ */
+export function enteredLengthText(value: number | null | undefined, units: Units): string {
+  if (value === null || value === undefined || !Number.isFinite(value)) return '—';
+  const min = decimalsFor(units);
+  let text = value.toFixed(Math.max(min, 4));
+  while (text.includes('.') && text.split('.')[1].length > min && text.endsWith('0')) text = text.slice(0, -1);
+  return `${text} ${units}`;
+}
+
+/**
  * Station text: 1234.56 ft → "12+34.56", 1234.567 m → "1+234.567". Negative stations keep a leading
  * minus on the whole value ("-0+12.50").
  */
