@@ -45,6 +45,15 @@ describe('demo bridges', () => {
     expect(offsetTableToCsv(t, { style: 'metric' }).split('\n')[0]).toContain('edge_width_ft');
     const metric = offsetTableToCsv({ ...t, units: 'm' }, { style: 'feet-inches' }).split('\n');
     expect(metric[0]).toContain('edge_width_m');
-    expect(metric[1]).toMatch(/^1,G1,left,0,1\+196\.849,18\.200 LT,2\.803,/);
+    // Metric rows: station in 1000 m blocks to 1 mm, offsets LT/RT to 1 mm (data contract display rules).
+    const cells = metric[1].split(',');
+    const first = t.points[0];
+    expect(cells.slice(0, 4)).toEqual(['1', first.girder, first.side, '0']);
+    expect(cells[4]).toMatch(/^\d+\+\d{3}\.\d{3}$/);
+    const [major, minor] = cells[4].split('+').map(Number);
+    expect(Math.abs(major * 1000 + minor - first.station)).toBeLessThanOrEqual(0.0005 + 1e-9);
+    expect(cells[5]).toMatch(first.offset < 0 ? / LT$/ : / RT$/);
+    expect(Math.abs(Number(cells[6]) - (first.edge_width as number))).toBeLessThanOrEqual(0.0005 + 1e-9);
+    expect(cells[6]).toMatch(/^\d+\.\d{3}$/);
   });
 });

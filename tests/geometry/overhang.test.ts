@@ -128,6 +128,27 @@ describe('chorded girders on a curve', () => {
     for (const s of t.span_summaries) expect(s.fastest_change).toBeNull();
   });
 
+  it('curved layout interpolates station and offset between the bent-line points', () => {
+    // Data contract: "curved": station and offset interpolated linearly between Pa's and Pb's; the
+    // edge point lies along the alignment normal, so the width is the offset difference.
+    const b = arcBridge({ radius: 700, direction: 'left', spans: [140], skews: [20, -15], layout: 'curved', girderOffsets: [-16, 14] });
+    b.girders[0].offsets = [-16, -14.5];
+    const t = computeOffsetTable(b);
+    const left = rows(t.points, 'left');
+    const pa = left[0];
+    const pb = left[left.length - 1];
+    expect(pa.offset).toBeCloseTo(-16, 9);
+    expect(pb.offset).toBeCloseTo(-14.5, 9);
+    // The 20° skew puts the left end of bent 1 down-station of the bent's station.
+    expect(pa.station).toBeLessThan(b.bents[0].station);
+    for (const p of left) {
+      expect(Math.abs(p.station - (pa.station + p.fraction * (pb.station - pa.station)))).toBeLessThan(1e-9);
+      expect(Math.abs(p.offset - (-16 + p.fraction * 1.5))).toBeLessThan(1e-9);
+      expect(Math.abs((p.edge_width as number) - (p.offset + 20))).toBeLessThan(1e-9);
+      expect(Math.abs((p.edge_station as number) - p.station)).toBeLessThan(1e-9);
+    }
+  });
+
   it('chord of 100 ft on R = 500 ft: middle ordinate 2.5063 ft', () => {
     // domain.md published check values (computed): exact 2.5063 ft, approximation c²/8R = 2.500 ft.
     // Outside edge of a 480 ft curve to the right, 20 ft out, is a 500 ft arc; bents square, placed so
