@@ -148,3 +148,53 @@ describe('large and awkward input', () => {
     expect(messages(b)).toMatch(/not up-station/);
   });
 });
+
+describe('hostile input never crashes the checks', () => {
+  it('parseBridge answers ok or a located problem for wild numbers (property)', async () => {
+    const fc = (await import('fast-check')).default;
+    const wild = fc.oneof(
+      fc.double({ noNaN: false }),
+      fc.constantFrom(0, -0, 1e-300, -1e300, 1e300, Number.MAX_VALUE, Number.NaN, Infinity, -Infinity),
+      fc.double({ min: -100, max: 100, noNaN: true }),
+    );
+    fc.assert(
+      fc.property(fc.record({ radius: wild, length: wild, skew: wild, station: wild, offset: wild, edge: wild, slope: wild, curve: wild }), (w) => {
+        const b = straightBridge({
+          alignment: {
+            start_station: 0,
+            start_x: 0,
+            start_y: 0,
+            start_bearing_deg: 0,
+            elements: [
+              { type: 'line', length: 150 },
+              { type: 'arc', length: w.length, radius: w.radius, direction: 'right' },
+              { type: 'line', length: 300 },
+            ],
+          },
+          profile: { pvis: [{ station: 0, elevation: 100 }, { station: 150, elevation: 101, curve_length: w.curve }, { station: 900, elevation: 99 }] },
+          cross_slopes: [{ station: 0, left: w.slope, right: -0.02 }],
+          bents: [
+            { name: 'Bent 1', station: 120, skew_deg: w.skew },
+            { name: 'Bent 2', station: w.station, skew_deg: 0 },
+          ],
+          girders: [
+            { name: 'G1', layout: 'chord', offsets: [w.offset, -16] },
+            { name: 'G2', layout: 'curved', offsets: [16, 16] },
+          ],
+          deck: { ...straightBridge().deck, left_edge_offset: w.edge },
+        });
+        // JSON cannot carry NaN or Infinity; hand the object over as an API would receive it parsed.
+        const r = parseBridge(b);
+        if (r.ok) {
+          // A description that passes must compute.
+          const t = computeOffsetTable(r.bridge);
+          for (const p of t.points) for (const v of [p.x, p.y, p.station, p.offset, p.top_of_deck, p.edge_width ?? 0, p.edge_drop ?? 0]) expect(Number.isFinite(v)).toBe(true);
+        } else {
+          expect(r.message.length).toBeGreaterThan(0);
+          if (r.kind === 'geometry') for (const issue of r.issues) expect(issue.path.length).toBeGreaterThan(0);
+        }
+      }),
+      { numRuns: 300 },
+    );
+  }, 60000);
+});
