@@ -6,7 +6,7 @@ import type { OffsetPoint, OffsetTable } from '@/lib/geometry';
 import { overhangRuns } from './builders/runs';
 import { sceneY, type SceneFrame } from './builders/frame';
 
-export type ViewName = 'plan' | 'edge' | 'crew' | 'orbit' | 'string' | 'section' | 'span';
+export type ViewName = 'plan' | 'edge' | 'crew' | 'orbit' | 'string' | 'section' | 'span' | 'side';
 
 export interface CameraPose {
   position: [number, number, number];
@@ -142,6 +142,22 @@ export function cameraPose(
         position: [mid[0] + tx * 14 * u + (ex / l) * 10 * u, mid[1] - 1.5 * u, mid[2] + tz * 14 * u + (ez / l) * 10 * u],
         target: mid,
       };
+    }
+    case 'side': {
+      // From outside the `side` edge, level with the deck, square to the middle of `span`.
+      if (!runs.length) return cameraPose('orbit', table, frame, units);
+      const r = runOf(opts.span ?? 1);
+      const a = r.rows[0];
+      const b = r.rows[r.rows.length - 1];
+      const m = r.rows[Math.floor(r.rows.length / 2)];
+      const pm = scenePt(frame, m.edge_x as number, m.edge_y as number, m.edge_bottom as number);
+      const pg = scenePt(frame, m.x, m.y, m.bottom_of_slab);
+      const len = Math.hypot(a.x - b.x, a.y - b.y);
+      const ox = pm[0] - pg[0];
+      const oz = pm[2] - pg[2];
+      const l = Math.hypot(ox, oz) || 1;
+      const d = (len * 0.62) / Math.tan((25 * Math.PI) / 180);
+      return { position: [pm[0] + (ox / l) * d, pm[1] + 2 * u, pm[2] + (oz / l) * d], target: [pm[0], pm[1] - 2 * u, pm[2]] };
     }
     case 'span': {
       if (!runs.length) return cameraPose('plan', table, frame, units);

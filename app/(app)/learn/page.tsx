@@ -1,0 +1,23 @@
+import type { Metadata } from 'next';
+import PageHeader from '@/components/PageHeader';
+import SafetyCaution from '@/components/SafetyCaution';
+import { requireUser } from '@/components/server-session';
+import Walkthrough from '@/scene/Walkthrough';
+
+export const metadata: Metadata = { title: 'Learn' };
+
+export default async function LearnPage() {
+  await requireUser();
+  return (
+    <>
+      <PageHeader
+        title="Why overhang forms look the way they do"
+        subtitle="Five short steps on a sandbox bridge. Move the sliders and the numbers and the picture are worked out again."
+      />
+      <div className="space-y-6">
+        <Walkthrough />
+        <SafetyCaution />
+      </div>
+    </>
+  );
+}
