@@ -2,7 +2,7 @@ import path from 'node:path';
 
 /** Folder for the SQLite file, uploads, the local outbox and generated secrets. Read at call time so tests can point it at a temp folder. */
 export function dataDir(): string {
-  return path.resolve(process.env.DATA_DIR || './data');
+  return path.resolve(/*turbopackIgnore: true*/ process.env.DATA_DIR || './data');
 }
 
 /** True when DATABASE_URL selects PostgreSQL instead of the SQLite file in the data folder. */
