@@ -8,9 +8,12 @@ export default async function AppLayout({ children }: { children: React.ReactNod
   const user = await requireUser();
   return (
     <SessionProvider>
-      <div className="min-h-screen md:pl-60">
+      <a href="#main" className="sr-only focus:not-sr-only focus:fixed focus:left-2 focus:top-2 focus:z-50 focus:rounded-md focus:bg-white focus:px-3 focus:py-2 focus:text-brand-700">
+        Skip to content
+      </a>
+      <div className="min-h-screen md:flex">
         <AppRail user={user} />
-        <main id="main" className="mx-auto max-w-6xl px-4 py-6 md:px-8 md:py-8">
+        <main id="main" className="mx-auto w-full min-w-0 max-w-6xl flex-1 px-4 py-6 md:px-8 md:py-8">
           {children}
         </main>
       </div>
