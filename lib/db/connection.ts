@@ -44,11 +44,22 @@ async function connect(): Promise<Sequelize> {
     await sequelize.query('PRAGMA foreign_keys=ON;');
   }
   await migrate(sequelize);
-  initModels(sequelize);
   return sequelize;
 }
 
 const holder = globalThis as unknown as { __chordlineDb?: { key: string; ready: Promise<Sequelize> } };
+
+// The connection is shared process-wide, but the server bundles each carry their own copy of the
+// model classes, so every copy of this module binds its own models to the shared connection.
+let boundTo: Sequelize | null = null;
+
+function bind(sequelize: Sequelize): Sequelize {
+  if (boundTo !== sequelize) {
+    initModels(sequelize);
+    boundTo = sequelize;
+  }
+  return sequelize;
+}
 
 /**
  * The shared connection, migrated and with models bound. Keyed by the store location so a test that
@@ -63,12 +74,13 @@ export function db(): Promise<Sequelize> {
       if (holder.__chordlineDb?.ready === ready) holder.__chordlineDb = undefined;
     });
   }
-  return holder.__chordlineDb.ready;
+  return holder.__chordlineDb.ready.then(bind);
 }
 
 /** Closes the shared connection (CLI and tests). */
 export async function closeDb(): Promise<void> {
   const current = holder.__chordlineDb;
   holder.__chordlineDb = undefined;
+  boundTo = null;
   if (current) await (await current.ready).close();
 }

@@ -1,0 +1,63 @@
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import type { Browser } from 'playwright-core';
+import { launchChromium, signIn, trackPageErrors } from './browser';
+
+const baseUrl = inject('baseUrl');
+let browser: Browser;
+
+beforeAll(async () => {
+  browser = await launchChromium();
+});
+
+afterAll(async () => {
+  await browser?.close();
+});
+
+describe('foundation in a real browser', () => {
+  it('an engineer signs in, creates a bridge from the starter and sees it listed', async () => {
+    const page = await browser.newPage({ viewport: { width: 1280, height: 860 } });
+    const errors = trackPageErrors(page);
+    await signIn(page, baseUrl, 'engineer@example.com');
+    await page.getByRole('link', { name: /new bridge/i }).first().click();
+    await page.waitForURL(/\/bridges\/new/);
+    const name = `Browser test bridge ${Date.now()}`;
+    await page.getByLabel('Bridge name').fill(name);
+    await page.getByRole('button', { name: /create bridge/i }).click();
+    await page.waitForURL(/\/bridges\/\d+$/);
+    await page.getByRole('heading', { name }).waitFor();
+    await page.goto(`${baseUrl}/bridges`);
+    await page.getByRole('link', { name }).waitFor();
+    expect(await page.getByRole('link', { name }).count()).toBe(1);
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
+  it('every demo account signs in and its session carries its role', async () => {
+    for (const role of ['admin', 'engineer', 'inspector', 'crew']) {
+      const context = await browser.newContext();
+      const page = await context.newPage();
+      await signIn(page, baseUrl, `${role}@example.com`);
+      const session = await page.evaluate(async () => (await fetch('/api/auth/session')).json());
+      expect(session.user.role).toBe(role);
+      // What a role may not do is not offered on the page.
+      const offersNew = await page.getByRole('link', { name: /new bridge/i }).count();
+      expect(offersNew > 0).toBe(role === 'engineer' || role === 'admin');
+      await context.close();
+    }
+  });
+
+  it('a wrong password gets one plain message that does not say which part was wrong', async () => {
+    const page = await browser.newPage();
+    await page.goto(`${baseUrl}/signin`);
+    await page.getByLabel(/e-?mail/i).fill('inspector@example.com');
+    await page.getByLabel(/password/i).fill('not-the-password');
+    await page.getByRole('button', { name: /sign in/i }).click();
+    const alert = page.getByRole('alert');
+    await alert.waitFor();
+    const text = (await alert.textContent()) ?? '';
+    expect(text).toMatch(/do not match/i);
+    expect(text).not.toMatch(/unknown|no such|wrong password/i);
+    expect(page.url()).toMatch(/\/signin/);
+    await page.close();
+  });
+});
