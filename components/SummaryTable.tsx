@@ -24,7 +24,7 @@ export default function SummaryTable({
             <thead className="text-concrete-600">
               <tr>
                 {headers.map((h, i) => (
-                  <th key={h} scope="col" className={`px-4 py-2 font-semibold ${i >= numericFrom ? 'text-right' : 'text-left'}`}>
+                  <th key={h} scope="col" className={`whitespace-nowrap px-4 py-2 font-semibold ${i >= numericFrom ? 'text-right' : 'text-left'}`}>
                     {h}
                   </th>
                 ))}

@@ -47,6 +47,9 @@ export default async function BridgePage({ params }: { params: Params }) {
           <Link href={`/bridges/${bridge.id}/offsets`} className="btn-primary">
             Offset table
           </Link>
+          <Link href={`/bridges/${bridge.id}/view`} className="btn-secondary">
+            3D view
+          </Link>
           <a href={`/api/bridges/${bridge.id}/offsets.csv`} className="btn-secondary" download>
             Download CSV
           </a>
