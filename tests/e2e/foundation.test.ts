@@ -52,7 +52,7 @@ describe('foundation in a real browser', () => {
     await page.getByLabel(/e-?mail/i).fill('inspector@example.com');
     await page.getByLabel(/password/i).fill('not-the-password');
     await page.getByRole('button', { name: /sign in/i }).click();
-    const alert = page.getByRole('alert');
+    const alert = page.locator('#signin-message');
     await alert.waitFor();
     const text = (await alert.textContent()) ?? '';
     expect(text).toMatch(/do not match/i);
