@@ -45,6 +45,8 @@ export interface BridgeSceneProps {
   verticalBow?: number;
   /** Extra line work (a straightedge, a drifted form line). */
   overlays?: readonly SceneOverlay[];
+  /** Draw the deck slab's top (off: the forms and girders before the pour). */
+  showDeck?: boolean;
   /** Whole-station label spacing (bridge units); 0 hides them. */
   stationEvery?: number;
   label: string;
@@ -52,7 +54,7 @@ export interface BridgeSceneProps {
 
 /** The 3D bridge: every part built by a pure builder from the engine's numbers; see builders/frame.ts. */
 export default function BridgeScene(props: BridgeSceneProps) {
-  const { desc, table, frame, widthRange, bracketSpacing, pose, poseVersion, pickable, selected, onSelect, statsRef, sweep = 0, verticalBow = 0, overlays = [], label } = props;
+  const { desc, table, frame, widthRange, bracketSpacing, pose, poseVersion, pickable, selected, onSelect, statsRef, sweep = 0, verticalBow = 0, overlays = [], label, showDeck = true } = props;
   const units = table.units;
   const u = units === 'm' ? 0.3048 : 1;
   const model = useMemo(() => createBridgeModel(desc), [desc]);
@@ -111,7 +113,9 @@ export default function BridgeScene(props: BridgeSceneProps) {
 
   return (
     <Canvas
-      frameloop="demand"
+      // Draw on demand (camera moves, changes); with the stats overlay on, every frame, so the
+      // counters describe steady rendering.
+      frameloop={statsRef ? 'always' : 'demand'}
       dpr={[1, 1.5]}
       camera={{ fov: 50, near: 0.3 * u, far: 60000 * u, position: pose.position }}
       gl={{ antialias: true, preserveDrawingBuffer: true }}
@@ -123,9 +127,9 @@ export default function BridgeScene(props: BridgeSceneProps) {
       <directionalLight position={[300, 500, 200]} intensity={1.6} />
       <directionalLight position={[-200, 150, -300]} intensity={0.35} />
       <Ground y={bents.groundY} />
-      <BufferMesh positions={deckTop.positions} indices={deckTop.indices} color="#d6d1c6" recessed />
+      {showDeck ? <BufferMesh positions={deckTop.positions} indices={deckTop.indices} color="#d6d1c6" recessed /> : null}
       <BufferMesh positions={underside.positions} indices={underside.indices} color="#b59a6d" recessed />
-      <BufferMesh positions={band.positions} indices={band.indices} colors={band.colors} roughness={0.7} raised />
+      {showDeck ? <BufferMesh positions={band.positions} indices={band.indices} colors={band.colors} roughness={0.7} raised /> : null}
       <BufferMesh positions={girders.positions} indices={girders.indices} color="#8d969b" roughness={0.55} metalness={0.3} />
       <Segments positions={formEdge} color="#ffffff" />
       <Segments positions={strings} color="#e0442b" />

@@ -40,6 +40,7 @@ export default function BridgeViewer({ description, table, name, showStats = fal
   const [spacing, setSpacing] = useState(defaultBracketSpacing(units));
   const [view, setView] = useState<{ name: ViewName; version: number }>({ name: 'orbit', version: 0 });
   const [selected, setSelected] = useState<number | null>(null);
+  const [showDeck, setShowDeck] = useState(true);
   const statsRef = useRef<HTMLDivElement>(null);
 
   const alt = useMemo((): { table: OffsetTable; desc: BridgeDescription } | { error: string } => {
@@ -83,6 +84,7 @@ export default function BridgeViewer({ description, table, name, showStats = fal
           selected={selected}
           onSelect={setSelected}
           statsRef={showStats ? statsRef : undefined}
+          showDeck={showDeck}
           label={`3D model of ${name}: girders, deck, overhang brackets and handrail`}
         />
         <div className="pointer-events-none absolute left-3 top-3 rounded bg-white/85 px-2 py-1 text-xs font-semibold text-concrete-800">
@@ -141,6 +143,10 @@ export default function BridgeViewer({ description, table, name, showStats = fal
               />
             </label>
           </div>
+          <label className="flex items-center gap-2 text-sm">
+            <input type="checkbox" checked={showDeck} onChange={(e) => setShowDeck(e.target.checked)} className="accent-brand-600" />
+            Show the deck slab (clear it to see the girders, string lines and forms as before the pour)
+          </label>
           <fieldset>
             <legend className="field-label">Girder framing (same deck)</legend>
             <div className="mt-1 flex flex-wrap gap-4 text-sm">

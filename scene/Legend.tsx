@@ -2,7 +2,7 @@ import { formatLength } from '@/lib/geometry';
 import { rampCss } from './builders/ramp';
 
 /** Colour legend for edge width, in the bridge's units, plus what each line colour means. */
-export default function Legend({ range, units }: { range: [number, number]; units: 'ft' | 'm' }) {
+export default function Legend({ range, units, points = true }: { range: [number, number]; units: 'ft' | 'm'; points?: boolean }) {
   const mid = (range[0] + range[1]) / 2;
   return (
     <div className="space-y-3 text-sm" data-testid="edge-legend">
@@ -25,9 +25,11 @@ export default function Legend({ range, units }: { range: [number, number]; unit
         <li className="flex items-center gap-2">
           <span className="inline-block h-0.5 w-6 bg-brand-700" aria-hidden="true" /> Alignment at profile grade
         </li>
-        <li className="flex items-center gap-2">
-          <span className="inline-block h-3 w-3 rounded-full bg-concrete-900" aria-hidden="true" /> Girder point (click for its numbers)
-        </li>
+        {points ? (
+          <li className="flex items-center gap-2">
+            <span className="inline-block h-3 w-3 rounded-full bg-concrete-900" aria-hidden="true" /> Girder point (click for its numbers)
+          </li>
+        ) : null}
       </ul>
     </div>
   );

@@ -34,12 +34,14 @@ interface Step {
   sweep?: boolean;
   thermal?: boolean;
   straightedge?: boolean;
+  /** Hide the slab: the forms and girders as the crew sees them before the pour. */
+  noDeck?: boolean;
 }
 
 const STEPS: Step[] = [
   { title: 'Where the edge width changes, and why', view: 'span', exaggeration: 1 },
   { title: 'Why the forms kink at every bent', view: 'edge', exaggeration: 1 },
-  { title: 'Measure from a string line, not the girder', view: 'string', exaggeration: 1, sweep: true },
+  { title: 'Measure from a string line, not the girder', view: 'string', exaggeration: 1, sweep: true, noDeck: true },
   { title: 'Why absolute elevations drift with the sun', view: 'side', exaggeration: 1, thermal: true },
   { title: 'Never extend the deck forms with a straightedge', view: 'section', exaggeration: 10, straightedge: true },
 ];
@@ -258,11 +260,13 @@ export default function Walkthrough() {
           sweep={step.sweep ? (sweepLimitIn / 12) * SWEEP_DRAWN : 0}
           verticalBow={step.thermal ? (bowIn / 12) * THERMAL_DRAWN : 0}
           overlays={overlays}
+          showDeck={!step.noDeck}
           stationEvery={0}
           label="Training bridge in 3D"
         />
         <div className="pointer-events-none absolute left-3 top-3 rounded bg-white/85 px-2 py-1 text-xs font-semibold text-concrete-800">
           Step {stepIndex + 1} of {STEPS.length} · {exaggeration > 1 ? `elevations ×${exaggeration}` : 'true scale'}
+          {step.noDeck ? ' · before the pour (no slab)' : ''}
         </div>
       </div>
 
@@ -344,7 +348,7 @@ export default function Walkthrough() {
       <div className="grid gap-4 lg:grid-cols-[1fr_22rem]">
         <EdgeWidthSummary table={table} caption="Edge width per span, sandbox bridge (from the engine)" />
         <div className="card p-4">
-          <Legend range={range} units="ft" />
+          <Legend range={range} units="ft" points={false} />
         </div>
       </div>
     </div>

@@ -81,8 +81,8 @@ export function cameraPose(
       return { position: [cx, cy + h, cz + h * 0.002], target: [cx, cy, cz] };
     }
     case 'orbit': {
-      const d = extent * 0.75;
-      return { position: [cx + d * 0.55, cy + d * 0.55, cz + d * 0.85], target: [cx, cy - 4 * u, cz] };
+      const d = extent * 0.5;
+      return { position: [cx + d * 0.6, cy + d * 0.42, cz + d * 0.8], target: [cx, cy - 4 * u, cz] };
     }
     case 'edge': {
       if (!runs.length) return cameraPose('orbit', table, frame, units);
