@@ -1,7 +1,9 @@
 /**
- * Display text for stations, offsets and lengths in a bridge's units. Rounding here is for display
- * only: 0.01 ft or 0.001 m.
+ * Display text for stations, offsets and lengths in a bridge's units, through the engine's format
+ * helpers (exact half-up rounding, the same text as the CSV export): 0.01 ft or 0.001 m.
  */
+import { formatFeet, formatMetres, formatOffset, formatStation } from '@/lib/geometry/format';
+
 export type Units = 'ft' | 'm';
 
 /** Decimal places shown for a length in these units. */
@@ -12,9 +14,8 @@ export function decimalsFor(units: Units): number {
 /** A length with its unit, e.g. "4.25 ft" or "1.296 m"; an em dash when there is no value. */
 export function lengthText(value: number | null | undefined, units: Units, withUnit = true): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return '—';
-  const text = value.toFixed(decimalsFor(units));
-  const clean = /^-0\.0+$/.test(text) ? text.slice(1) : text;
-  return withUnit ? `${clean} ${units}` : clean;
+  const text = units === 'm' ? formatMetres(value) : formatFeet(value);
+  return withUnit ? `${text} ${units}` : text;
 }
 
 /**
@@ -29,28 +30,19 @@ export function enteredLengthText(value: number | null | undefined, units: Units
   return `${text} ${units}`;
 }
 
-/**
- * Station text: 1234.56 ft → "12+34.56", 1234.567 m → "1+234.567". Negative stations keep a leading
- * minus on the whole value ("-0+12.50").
- */
+/** Station text: 1234.56 ft → "12+34.56", 1234.567 m → "1+234.567"; negative with a leading minus. */
 export function stationText(value: number, units: Units): string {
   if (!Number.isFinite(value)) return '—';
-  const decimals = decimalsFor(units);
-  const group = units === 'm' ? 3 : 2;
-  const fixed = Math.abs(value).toFixed(decimals);
-  const [whole, frac] = fixed.split('.');
-  const head = whole.length > group ? whole.slice(0, whole.length - group) : '0';
-  const tail = whole.slice(-group).padStart(group, '0');
-  const negative = value < 0 && Number(fixed) !== 0;
-  return `${negative ? '-' : ''}${head}+${tail}.${frac}`;
+  return formatStation(value, units);
 }
 
-/** An offset from the alignment as "18.00 LT" / "6.00 RT" (no sign); "0.00 CL" on the centreline. */
+/** An offset from the alignment as "18.00 LT" / "6.00 RT" (no sign), optionally with the unit. */
 export function offsetText(value: number, units: Units, withUnit = false): string {
   if (!Number.isFinite(value)) return '—';
-  const magnitude = lengthText(Math.abs(value), units, withUnit);
-  if (Number(Math.abs(value).toFixed(decimalsFor(units))) === 0) return `${magnitude} CL`;
-  return `${magnitude} ${value < 0 ? 'LT' : 'RT'}`;
+  const text = formatOffset(value, units);
+  if (!withUnit) return text;
+  const [magnitude, side] = text.split(' ');
+  return side ? `${magnitude} ${units} ${side}` : `${magnitude} ${units}`;
 }
 
 /** A slope given as rise/run shown as a percentage with its sign, e.g. -0.02 → "-2.00 %". */
