@@ -1,5 +1,6 @@
 import type { QueryInterface } from 'sequelize';
 import * as m0001 from './0001-initial';
+import * as m0002 from './0002-field-work';
 
 export type Migration = {
   name: string;
@@ -12,3 +13,8 @@ export type Migration = {
  * same set. Append new ones at the end; never edit or reorder one that has shipped.
  */
 export const migrations: Migration[] = [{ name: '0001-initial', ...m0001 }];
+migrations.push({ name: '0002-field-work', ...m0002 });
+
+// Top-of-girder survey imports (issue 4, part B).
+import * as m0003 from './0003-girder-survey';
+migrations.push({ name: '0003-girder-survey', ...m0003 });
