@@ -43,7 +43,7 @@ const STEPS: Step[] = [
   { title: 'Why the forms kink at every bent', view: 'edge', exaggeration: 1 },
   { title: 'Measure from a string line, not the girder', view: 'string', exaggeration: 1, sweep: true, noDeck: true },
   { title: 'Why absolute elevations drift with the sun', view: 'side', exaggeration: 1, thermal: true },
-  { title: 'Never extend the deck forms with a straightedge', view: 'section', exaggeration: 10, straightedge: true },
+  { title: 'Never extend the deck forms with a straightedge', view: 'section', exaggeration: 10, straightedge: true, noDeck: true },
 ];
 
 /** Drawn-size factors for effects too small to see true size. */
@@ -103,7 +103,10 @@ export default function Walkthrough() {
 
   const frame: SceneFrame = useMemo(() => frameForTable(table, exaggeration), [table, exaggeration]);
   const range = useMemo(() => edgeWidthRange(table), [table]);
-  const pose = useMemo(() => cameraPose(step.view, table, frame, 'ft', { span: SPAN, side: OUTSIDE }), [step.view, table, frame]);
+  const pose = useMemo(
+    () => cameraPose(step.view, table, frame, 'ft', { span: step.view === 'section' || step.view === 'string' ? 1 : SPAN, side: OUTSIDE }),
+    [step.view, table, frame],
+  );
 
   const go = (i: number) => {
     const k = Math.max(0, Math.min(STEPS.length - 1, i));
@@ -143,16 +146,17 @@ export default function Walkthrough() {
   // The straightedge: the deck form's grade from the next girder in, carried out past the exterior
   // girder with a 1/4 in error where it rests on the exterior girder.
   const straight = useMemo(() => {
-    const mid = outRows[Math.floor(outRows.length / 2)];
+    // At the start of span 1, where the section view looks.
+    const mid = rowsOf(table, OUTSIDE, 1)[0];
     if (!mid) return null;
-    const inner = table.points.find((p) => p.span === SPAN && p.girder === 'G2' && p.point === mid.point);
+    const inner = table.points.find((p) => p.span === 1 && p.girder === 'G2' && p.point === mid.point);
     if (!inner || mid.edge_width === null || mid.form_target === null || mid.edge_x === null || mid.edge_y === null) return null;
     const bay = Math.hypot(mid.x - inner.x, mid.y - inner.y);
     const error = 0.25 / 12;
     const slope = (mid.bottom_of_slab + error - inner.bottom_of_slab) / bay;
     const atEdge = mid.bottom_of_slab + error + slope * mid.edge_width;
     return { bay, error, atEdge, target: mid.form_target, magnified: (error * (bay + mid.edge_width)) / bay, mid, inner };
-  }, [outRows, table]);
+  }, [table]);
 
   const overlays: SceneOverlay[] = useMemo(() => {
     if (!step.straightedge || !straight) return [];
@@ -234,7 +238,7 @@ export default function Walkthrough() {
           <strong className="tabular">{inches(straight.magnified * 12)}</strong>, and the straightedge (amber) puts the form edge at{' '}
           <strong className="tabular">{formatLength(straight.atEdge, 'ft')}</strong> where the table says <strong className="tabular">{formatLength(straight.target, 'ft')}</strong>: off by{' '}
           <strong className="tabular">{inches(Math.abs(straight.atEdge - straight.target) * 12)}</strong>. Always go back to the girder: the buildup and the drop from girder top.
-          (Elevations drawn 10×.)
+          (Elevations drawn 10×, the slab left off so the forms show.)
         </p>
       ) : null}
     </>,

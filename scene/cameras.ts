@@ -36,7 +36,7 @@ function scenePt(f: SceneFrame, x: number, y: number, z: number): [number, numbe
  * edge: on the walkway outside the `side` edge at the first bent, eye level, looking along the edge.
  * crew: on the walkway at bent `bent` (1-based; the middle bent by default), looking along the
  * brackets into the next span. string: along the exterior girder's top flange at a bent, to see the
- * string line. section: across the deck at midspan of `span`, to see the overhang in section.
+ * string line. section: off the start of `span`, looking along it at the overhang in section.
  * span: above the outside overhang of `span`, looking down on it.
  */
 export function cameraPose(
@@ -81,8 +81,24 @@ export function cameraPose(
       return { position: [cx, cy + h, cz + h * 0.002], target: [cx, cy, cz] };
     }
     case 'orbit': {
-      const d = extent * 0.5;
-      return { position: [cx + d * 0.6, cy + d * 0.42, cz + d * 0.8], target: [cx, cy - 4 * u, cz] };
+      // Three-quarter view from the right of the bridge's main axis, the whole length in frame.
+      const first = table.points[0];
+      const last = table.points[table.points.length - 1];
+      const a = scenePt(frame, first.x, first.y, first.top_of_deck);
+      const b = scenePt(frame, last.x, last.y, last.top_of_deck);
+      let ax = b[0] - a[0];
+      let az = b[2] - a[2];
+      const len = Math.max(Math.hypot(ax, az), 40 * u);
+      ax /= len;
+      az /= len;
+      // Right of the axis in the scene's horizontal plane (x east, z south): (−az, ax).
+      const px = -az;
+      const pz = ax;
+      const d = len * 0.62;
+      return {
+        position: [cx + px * d - ax * d * 0.35, cy + d * 0.45, cz + pz * d - az * d * 0.35],
+        target: [cx, cy - 4 * u, cz],
+      };
     }
     case 'edge': {
       if (!runs.length) return cameraPose('orbit', table, frame, units);
@@ -126,21 +142,23 @@ export function cameraPose(
       return { position: [pa[0] + (dx / l) * 10 * u, pa[1] + 4 * u, pa[2] + (dz / l) * 10 * u], target: [pm[0], pm[1], pm[2]] };
     }
     case 'section': {
+      // Off the end of `span` (its point 0), looking up-station at the cross-section of the exterior
+      // girder and its overhang, a little above the form.
       if (!runs.length) return cameraPose('orbit', table, frame, units);
       const r = runOf(opts.span ?? 1);
-      const m = r.rows[Math.floor(r.rows.length / 2)];
+      const m = r.rows[0];
+      const n = r.rows[Math.min(r.rows.length - 1, 3)];
       const g = scenePt(frame, m.x, m.y, m.bottom_of_slab);
       const e = scenePt(frame, m.edge_x as number, m.edge_y as number, m.edge_bottom as number);
-      // Look along the girder from a little off the deck, square-ish to the overhang, slightly below.
-      const ex = e[0] - g[0];
-      const ez = e[2] - g[2];
-      const l = Math.hypot(ex, ez) || 1;
-      const tx = -ez / l;
-      const tz = ex / l;
-      const mid: [number, number, number] = [(g[0] + e[0]) / 2, (g[1] + e[1]) / 2, (g[2] + e[2]) / 2];
+      const gn = scenePt(frame, n.x, n.y, n.bottom_of_slab);
+      const bx = g[0] - gn[0];
+      const bz = g[2] - gn[2];
+      const bl = Math.hypot(bx, bz) || 1;
+      // Aim a little inside the exterior girder so the next girder in is in view too.
+      const target: [number, number, number] = [g[0] + (g[0] - e[0]) * 0.6, (g[1] + e[1]) / 2, g[2] + (g[2] - e[2]) * 0.6];
       return {
-        position: [mid[0] + tx * 14 * u + (ex / l) * 10 * u, mid[1] - 1.5 * u, mid[2] + tz * 14 * u + (ez / l) * 10 * u],
-        target: mid,
+        position: [target[0] + (bx / bl) * 26 * u, target[1] + 2.5 * u, target[2] + (bz / bl) * 26 * u],
+        target,
       };
     }
     case 'side': {
