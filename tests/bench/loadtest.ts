@@ -1,0 +1,119 @@
+/**
+ * Load benchmark (not a test): `npm run loadtest`.
+ * Builds the app when needed, serves the production server on loopback with a fresh data folder, signs
+ * in as the demo engineer, then drives GET /api/health (the framework's floor) and POST /api/compute
+ * with the three-span demo bridge in the same run, and prints requests per second, p50/p99 latency,
+ * errors and the compute/health ratio. Target: compute ≥ 0.5 × health, no errors, no non-2xx.
+ */
+import { spawn, execFileSync } from 'node:child_process';
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import net from 'node:net';
+import autocannon from 'autocannon';
+import { demoBridges } from '../../lib/demo/bridges';
+
+const root = path.resolve(__dirname, '../..');
+const distDir = '.next-loadtest';
+const seconds = Number(process.env.LOADTEST_SECONDS ?? 10);
+const connections = Number(process.env.LOADTEST_CONNECTIONS ?? 10);
+
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const srv = net.createServer().listen(0, '127.0.0.1', () => {
+      const { port } = srv.address() as net.AddressInfo;
+      srv.close(() => resolve(port));
+    });
+    srv.on('error', reject);
+  });
+}
+
+async function waitFor(url: string, ms: number) {
+  const until = Date.now() + ms;
+  while (Date.now() < until) {
+    try {
+      if ((await fetch(url)).ok) return;
+    } catch {}
+    await new Promise((r) => setTimeout(r, 250));
+  }
+  throw new Error(`no answer from ${url}`);
+}
+
+/** Signs in through next-auth's credentials flow and returns the session cookie. */
+async function signIn(base: string): Promise<string> {
+  const csrfRes = await fetch(`${base}/api/auth/csrf`);
+  const { csrfToken } = (await csrfRes.json()) as { csrfToken: string };
+  const csrfCookie = (csrfRes.headers.getSetCookie?.() ?? []).map((c) => c.split(';')[0]).join('; ');
+  const res = await fetch(`${base}/api/auth/callback/credentials`, {
+    method: 'POST',
+    redirect: 'manual',
+    headers: { 'content-type': 'application/x-www-form-urlencoded', cookie: csrfCookie },
+    body: new URLSearchParams({ csrfToken, email: 'engineer@example.com', password: 'chordline-demo' }),
+  });
+  const session = (res.headers.getSetCookie?.() ?? []).map((c) => c.split(';')[0]).find((c) => c.includes('session-token'));
+  if (!session) throw new Error('sign-in failed');
+  return session;
+}
+
+function run(opts: autocannon.Options): Promise<autocannon.Result> {
+  return new Promise((resolve, reject) => autocannon(opts, (err, result) => (err ? reject(err) : resolve(result))));
+}
+
+function line(name: string, r: autocannon.Result) {
+  const non2xx = r.non2xx;
+  console.log(
+    `${name.padEnd(22)} ${r.requests.average.toFixed(0).padStart(7)} req/s   p50 ${String(r.latency.p50).padStart(4)} ms   p99 ${String(r.latency.p99).padStart(4)} ms   errors ${r.errors}   non-2xx ${non2xx}   timeouts ${r.timeouts}`,
+  );
+}
+
+async function main() {
+  if (!fs.existsSync(path.join(root, distDir, 'BUILD_ID')) || process.env.LOADTEST_REBUILD === '1') {
+    execFileSync('npx', ['next', 'build'], { cwd: root, env: { ...process.env, NEXT_DIST_DIR: distDir }, stdio: 'inherit' });
+  }
+  const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'chordline-load-'));
+  const env = { ...process.env, DATA_DIR: dataDir, NEXT_DIST_DIR: distDir, NODE_ENV: 'production' as const };
+  delete (env as Record<string, string | undefined>).CHORDLINE_NO_DEMO;
+  execFileSync('npx', ['tsx', 'lib/cli/prepare.ts'], { cwd: root, env, stdio: 'inherit' });
+  const port = await freePort();
+  const base = `http://127.0.0.1:${port}`;
+  const server = spawn('npx', ['next', 'start', '-p', String(port), '-H', '127.0.0.1'], {
+    cwd: root,
+    env: { ...env, NEXTAUTH_URL: base },
+    stdio: 'ignore',
+    detached: true,
+  });
+  try {
+    await waitFor(`${base}/api/health`, 60000);
+    const cookie = await signIn(base);
+    const body = JSON.stringify(demoBridges[0]);
+    // Warm both routes so neither pays first-request compilation of its chunks.
+    await run({ url: `${base}/api/health`, duration: 2, connections });
+    await run({ url: `${base}/api/compute`, method: 'POST', headers: { cookie, 'content-type': 'application/json' }, body, duration: 2, connections });
+    const health = await run({ url: `${base}/api/health`, duration: seconds, connections });
+    const compute = await run({
+      url: `${base}/api/compute`,
+      method: 'POST',
+      headers: { cookie, 'content-type': 'application/json' },
+      body,
+      duration: seconds,
+      connections,
+    });
+    console.log(`\nLoad benchmark: ${connections} connections, ${seconds} s per route, ${os.cpus().length} cores`);
+    line('GET  /api/health', health);
+    line('POST /api/compute', compute);
+    const ratio = compute.requests.average / health.requests.average;
+    const clean = health.errors + compute.errors + health.non2xx + compute.non2xx + health.timeouts + compute.timeouts === 0;
+    console.log(`compute / health = ${ratio.toFixed(2)} (target ≥ 0.50)   ${clean ? 'no errors' : 'ERRORS SEEN'}`);
+    process.exitCode = ratio >= 0.5 && clean ? 0 : 1;
+  } finally {
+    try {
+      process.kill(-server.pid!, 'SIGTERM');
+    } catch {}
+    fs.rmSync(dataDir, { recursive: true, force: true });
+  }
+}
+
+main().catch((err) => {
+  console.error(`[chordline] load benchmark failed: ${err instanceof Error ? err.message : String(err)}`);
+  process.exit(1);
+});
