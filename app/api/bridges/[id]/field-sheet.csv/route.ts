@@ -1,0 +1,9 @@
+import { withRole } from '@/lib/api/with-role';
+import { fieldSheetCsvForBridge, spanParam } from '@/lib/services/field-sheet';
+
+export const GET = withRole<{ id: string }>('signed-in', undefined, async ({ req, params }) => {
+  const { filename, csv } = await fieldSheetCsvForBridge(params.id, spanParam(req.nextUrl.searchParams.get('span')));
+  return new Response(csv, {
+    headers: { 'Content-Type': 'text/csv; charset=utf-8', 'Content-Disposition': `attachment; filename="${filename}"`, 'X-Content-Type-Options': 'nosniff' },
+  });
+});

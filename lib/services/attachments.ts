@@ -1,0 +1,156 @@
+import type { NextRequest } from 'next/server';
+import { z } from 'zod';
+import { HttpError, invalidInput } from '@/lib/api/errors';
+import type { SessionUser } from '@/lib/auth/session';
+import { db } from '@/lib/db/connection';
+import { filePart, readMultipart } from '@/lib/uploads/multipart';
+import { sniffType } from '@/lib/uploads/sniff';
+import { neutraliseName, readUpload, removeUpload, saveUpload } from '@/lib/uploads/store';
+import { Attachment, FieldCheck, User } from '@/models';
+import { audit } from './audit';
+import { findBridgeById } from './tolerances';
+
+export type AttachmentJson = {
+  id: number;
+  bridge_id: number;
+  check_id: number | null;
+  name: string;
+  content_type: string;
+  size: number;
+  caption: string;
+  url: string;
+  by: string | null;
+  created_at: string;
+};
+
+function toJson(a: Attachment, by: string | null): AttachmentJson {
+  return {
+    id: a.id,
+    bridge_id: a.bridgeId,
+    check_id: a.checkId,
+    name: a.originalName,
+    content_type: a.contentType,
+    size: a.size,
+    caption: a.caption,
+    url: `/api/attachments/${a.id}`,
+    by,
+    created_at: a.createdAt.toISOString(),
+  };
+}
+
+/** The text fields sent beside the file. */
+const uploadFieldsSchema = z.object({
+  check_id: z
+    .string()
+    .trim()
+    .regex(/^\d+$/, 'check_id must be the number of a check of this bridge.')
+    .transform(Number)
+    .optional(),
+  caption: z.string().trim().max(300, 'Keep the caption under 300 characters.').optional().default(''),
+});
+
+/**
+ * Stores a photo (JPEG, PNG, WebP) or a PDF for a bridge, optionally for one of its checks. The type
+ * comes from the bytes (415 otherwise), the size limit is 10 MB (413), the stored name is generated and
+ * the user's name is kept only as neutralised text.
+ */
+export async function uploadAttachment(user: SessionUser, bridgeId: string, req: NextRequest): Promise<AttachmentJson> {
+  const bridge = await findBridgeById(bridgeId);
+  const form = await readMultipart(req);
+  const file = filePart(form);
+  const text = (k: string) => {
+    const v = form.get(k);
+    return typeof v === 'string' && v !== '' ? v : undefined;
+  };
+  const fields = uploadFieldsSchema.safeParse({ check_id: text('check_id'), caption: text('caption') });
+  if (!fields.success) throw invalidInput(fields.error);
+  const bytes = new Uint8Array(await file.arrayBuffer());
+  const type = sniffType(bytes);
+  if (!type) {
+    throw new HttpError(415, 'Only photos (JPEG, PNG or WebP) and PDF files can be attached; this file is none of those, whatever its name says.', {
+      file: ['Choose a JPEG, PNG or WebP photo, or a PDF.'],
+    });
+  }
+  if (fields.data.check_id !== undefined) {
+    const check = await FieldCheck.findOne({ where: { id: fields.data.check_id, bridgeId: bridge.id } });
+    if (!check) throw new HttpError(400, 'That check does not belong to this bridge.', { check_id: ['Choose a check of this bridge.'] });
+  }
+  const storedName = await saveUpload(bytes, type.ext);
+  const sequelize = await db();
+  try {
+    const row = await sequelize.transaction(async (transaction) => {
+      const a = await Attachment.create(
+        {
+          bridgeId: bridge.id,
+          checkId: fields.data.check_id ?? null,
+          userId: user.id,
+          storedName,
+          originalName: neutraliseName(file.name || 'upload'),
+          contentType: type.contentType,
+          size: bytes.byteLength,
+          caption: fields.data.caption,
+        },
+        { transaction },
+      );
+      await audit(
+        user.id,
+        'attachment.create',
+        'bridge',
+        bridge.id,
+        { attachment: a.id, check: a.checkId, name: a.originalName, content_type: a.contentType, size: a.size },
+        transaction,
+      );
+      return a;
+    });
+    return toJson(row, user.name);
+  } catch (err) {
+    await removeUpload(storedName);
+    throw err;
+  }
+}
+
+/** Every attachment of a bridge, newest first. */
+export async function listAttachments(bridgeId: string): Promise<AttachmentJson[]> {
+  const bridge = await findBridgeById(bridgeId);
+  const rows = await Attachment.findAll({
+    where: { bridgeId: bridge.id },
+    include: [{ model: User, as: 'user', attributes: ['name'] }],
+    order: [['id', 'DESC']],
+  });
+  return rows.map((a) => toJson(a, (a as Attachment & { user?: User | null }).user?.name ?? null));
+}
+
+/** RFC 6266 Content-Disposition with an ASCII fallback and the UTF-8 name. */
+export function contentDisposition(kind: 'inline' | 'attachment', name: string): string {
+  const ascii = name.replace(/[^\x20-\x7e]/g, '_').replace(/["\\]/g, '_');
+  return `${kind}; filename="${ascii}"; filename*=UTF-8''${encodeURIComponent(name)}`;
+}
+
+/**
+ * The stored file as a response: the sniffed content type, nosniff, images inline and PDFs as a
+ * download, a sandboxing CSP, private caching.
+ */
+export async function attachmentResponse(id: string): Promise<Response> {
+  await db();
+  const n = Number(id);
+  const a = Number.isInteger(n) && n > 0 ? await Attachment.findByPk(n) : null;
+  if (!a) throw new HttpError(404, 'There is no attachment with that id.');
+  let bytes: Buffer;
+  try {
+    bytes = await readUpload(a.storedName);
+  } catch {
+    throw new HttpError(404, 'The file of this attachment is missing from the server.');
+  }
+  const image = a.contentType.startsWith('image/');
+  return new Response(new Uint8Array(bytes), {
+    status: 200,
+    headers: {
+      'Content-Type': a.contentType,
+      'Content-Length': String(bytes.byteLength),
+      'X-Content-Type-Options': 'nosniff',
+      'Content-Disposition': contentDisposition(image ? 'inline' : 'attachment', a.originalName),
+      'Content-Security-Policy': "default-src 'none'; sandbox",
+      'Cache-Control': 'private, max-age=3600',
+    },
+  });
+}

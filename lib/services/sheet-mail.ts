@@ -1,0 +1,61 @@
+import { z } from 'zod';
+import type { SessionUser } from '@/lib/auth/session';
+import { db } from '@/lib/db/connection';
+import { formatFeet, formatFeetInches, formatMetres } from '@/lib/geometry';
+import { sendMail, type MailResult } from '@/lib/mail/send';
+import { audit } from './audit';
+import { fieldSheetCsv, loadFieldSheet, safeFileName, type FieldSheet } from './field-sheet';
+
+/** Body of POST /api/bridges/:id/send-sheet. */
+export const sendSheetSchema = z.object({
+  to: z
+    .array(z.email({ error: 'This is not an e-mail address.' }).max(254), { error: 'Give the recipients as a list of e-mail addresses.' })
+    .min(1, 'Give at least one e-mail address.')
+    .max(10, 'Send to at most 10 addresses at a time.'),
+  span: z.number({ error: 'Span must be a span number (1, 2, …).' }).int('Span must be a whole number.').positive('Span numbers start at 1.').nullable().optional(),
+});
+
+const width = (v: number, units: 'ft' | 'm') => (units === 'm' ? `${formatMetres(v)} m` : `${formatFeetInches(v)} (${formatFeet(v)} ft)`);
+
+/** Plain-text summary for the e-mail body: what the sheet covers, the rods rule and the caution. */
+export function sheetSummary(sheet: FieldSheet, sender: string): string {
+  const u = sheet.units;
+  const len = (v: number) => (u === 'm' ? `${formatMetres(v)} m` : `${formatFeet(v)} ft`);
+  const lines = [
+    `Field sheet for ${sheet.bridge.name}, computed from geometry revision ${sheet.revision}.`,
+    sheet.span ? `Span ${sheet.span}.` : `All spans (${sheet.spans.join(', ')}).`,
+    `Sent by ${sender} from Chordline.`,
+    '',
+  ];
+  for (const g of sheet.groups) {
+    const widths = g.rows.map((r) => r.edge_width);
+    const surveyed = g.rows.filter((r) => r.reading !== null).length;
+    lines.push(
+      `Span ${g.span}, ${g.girder} (${g.side} overhang): ${g.rows.length} brackets, edge width ${width(Math.min(...widths), u)} to ${width(Math.max(...widths), u)}; level-bar readings at ${surveyed} surveyed ${surveyed === 1 ? 'point' : 'points'}.`,
+    );
+  }
+  lines.push(
+    '',
+    `The attached CSV lists every bracket: station, edge width, level-bar reading and rods, form target, and blank columns for the measurements. Base rod length ${len(sheet.base_rod_length)}.`,
+    sheet.rod_definition,
+    '',
+    `CAUTION: ${sheet.caution}`,
+  );
+  return lines.join('\n') + '\n';
+}
+
+/** Sends the field sheet (CSV attached, summary in the body) and records it in the audit log. */
+export async function sendSheet(user: SessionUser, bridgeId: string, input: z.infer<typeof sendSheetSchema>): Promise<{ via: MailResult['via']; to: string[]; subject: string; outbox_id: number | null }> {
+  const span = input.span ?? null;
+  const sheet = await loadFieldSheet(bridgeId, span);
+  const to = [...new Set(input.to.map((a) => a.trim()))];
+  const subject = `Field sheet: ${sheet.bridge.name.replace(/[\r\n]+/g, ' ')}${span ? `, span ${span}` : ''} (revision ${sheet.revision})`;
+  const filename = `${safeFileName(sheet.bridge.name)}-rev${sheet.revision}-field-sheet${span ? `-span${span}` : ''}.csv`;
+  const result = await sendMail(
+    { to, subject, text: sheetSummary(sheet, user.name), attachments: [{ filename, contentType: 'text/csv; charset=utf-8', content: fieldSheetCsv(sheet) }] },
+    user.id,
+  );
+  await db();
+  await audit(user.id, 'sheet.send', 'bridge', sheet.bridge.id, { to, span, revision: sheet.revision, via: result.via, outbox: result.outboxId });
+  return { via: result.via, to, subject, outbox_id: result.outboxId };
+}
