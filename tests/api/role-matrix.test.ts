@@ -14,6 +14,17 @@ import * as user from '@/app/api/admin/users/[id]/route';
 import { createBridge, getBridge } from '@/lib/services/bridges';
 import { call, cookieOf, EVERYONE, makeUsers, type TestUser, type Who } from './helpers';
 import type { Role } from '@/lib/auth/roles';
+// Field work (issue 6).
+import * as fieldChecks from '@/app/api/bridges/[id]/checks/route';
+import * as fieldAttachments from '@/app/api/bridges/[id]/attachments/route';
+import * as fieldAttachment from '@/app/api/attachments/[id]/route';
+import * as fieldSendSheet from '@/app/api/bridges/[id]/send-sheet/route';
+import * as fieldSheetCsv from '@/app/api/bridges/[id]/field-sheet.csv/route';
+import * as fieldSignoffs from '@/app/api/bridges/[id]/signoffs/route';
+import * as fieldTolerances from '@/app/api/bridges/[id]/tolerances/route';
+import * as fieldAudit from '@/app/api/bridges/[id]/audit/route';
+import * as fieldOutbox from '@/app/api/admin/outbox/route';
+import { callRaw as fieldCallRaw, multipartRequest as fieldMultipart, PNG_1X1 as FIELD_PNG } from './field-helpers';
 
 type Expect = Record<Who, number>;
 const row = (anonymous: number, crew: number, inspector: number, engineer: number, admin: number): Expect => ({
@@ -80,6 +91,51 @@ const matrix: Record<string, Case> = {
     expect: row(401, 403, 403, 403, 200),
     setup: async () => ({ params: { id: String(people.crew.id) }, body: { name: 'Cal Renamed' } }),
   },
+  // Field work (issue 6): inspectors record, crew reads; the upload goes as real multipart.
+  'GET /api/bridges/[id]/checks': { handler: fieldChecks.GET, expect: READ, setup: async () => ({ params: { id: await newBridge() } }) },
+  'POST /api/bridges/[id]/checks': {
+    handler: fieldChecks.POST,
+    expect: row(401, 403, 201, 403, 201),
+    setup: async () => ({ params: { id: await newBridge() }, body: { span: 1, girder: 'G1', point: 3, measured_edge_width: 4.5 } }),
+  },
+  'GET /api/bridges/[id]/attachments': { handler: fieldAttachments.GET, expect: READ, setup: async () => ({ params: { id: await newBridge() } }) },
+  'POST /api/bridges/[id]/attachments': {
+    handler: async (req: Request, ctx: { params: Promise<Record<string, string>> }) =>
+      fieldAttachments.POST(await fieldMultipart(req.url, req.headers.get('cookie') ?? undefined, { bytes: FIELD_PNG, name: 'matrix.png', type: 'image/png' }), ctx as never),
+    expect: row(401, 403, 201, 403, 201),
+    setup: async () => ({ params: { id: await newBridge() } }),
+  },
+  'GET /api/attachments/[id]': {
+    handler: fieldAttachment.GET,
+    expect: READ,
+    setup: async () => {
+      const id = await newBridge();
+      const req = await fieldMultipart(`/api/bridges/${id}/attachments`, people.inspector.cookie, { bytes: FIELD_PNG, name: 'matrix.png', type: 'image/png' });
+      const res = await fieldCallRaw(fieldAttachments.POST, req, { id });
+      return { params: { id: String(res.json.id) } };
+    },
+  },
+  'POST /api/bridges/[id]/send-sheet': {
+    handler: fieldSendSheet.POST,
+    expect: row(401, 403, 202, 403, 202),
+    setup: async () => ({ params: { id: await newBridge() }, body: { to: ['matrix@example.com'], span: 1 } }),
+  },
+  'GET /api/bridges/[id]/field-sheet.csv': { handler: fieldSheetCsv.GET, expect: READ, setup: async () => ({ params: { id: await newBridge() } }) },
+  'GET /api/bridges/[id]/signoffs': { handler: fieldSignoffs.GET, expect: READ, setup: async () => ({ params: { id: await newBridge() } }) },
+  // Nothing checked yet on a new bridge: the role passes and the sign-off is refused as incomplete.
+  'POST /api/bridges/[id]/signoffs': {
+    handler: fieldSignoffs.POST,
+    expect: row(401, 403, 409, 403, 409),
+    setup: async () => ({ params: { id: await newBridge() }, body: { span: 1 } }),
+  },
+  'GET /api/bridges/[id]/tolerances': { handler: fieldTolerances.GET, expect: READ, setup: async () => ({ params: { id: await newBridge() } }) },
+  'PATCH /api/bridges/[id]/tolerances': {
+    handler: fieldTolerances.PATCH,
+    expect: row(401, 403, 403, 200, 200),
+    setup: async () => ({ params: { id: await newBridge() }, body: { width_tolerance: 0.02 } }),
+  },
+  'GET /api/bridges/[id]/audit': { handler: fieldAudit.GET, expect: READ, setup: async () => ({ params: { id: await newBridge() } }) },
+  'GET /api/admin/outbox': { handler: fieldOutbox.GET, expect: row(401, 403, 403, 403, 200) },
 };
 
 beforeAll(async () => {
