@@ -14,3 +14,7 @@ export type Migration = {
  */
 export const migrations: Migration[] = [{ name: '0001-initial', ...m0001 }];
 migrations.push({ name: '0002-field-work', ...m0002 });
+
+// Top-of-girder survey imports (issue 4, part B).
+import * as m0003 from './0003-girder-survey';
+migrations.push({ name: '0003-girder-survey', ...m0003 });

@@ -7,9 +7,12 @@ import { FieldCheck } from './FieldCheck';
 import { Attachment } from './Attachment';
 import { SignOff } from './SignOff';
 import { OutboxMessage } from './OutboxMessage';
+import { GirderSurvey } from './GirderSurvey';
+import { SurveyImport } from './SurveyImport';
 
 export { User, Bridge, GeometryRevision, AuditEvent };
 export { FieldCheck, Attachment, SignOff, OutboxMessage };
+export { GirderSurvey, SurveyImport };
 
 /** Binds every model to the connection and declares the associations. Call once per connection. */
 export function initModels(sequelize: Sequelize): void {
@@ -32,4 +35,10 @@ export function initModels(sequelize: Sequelize): void {
   FieldCheck.hasMany(Attachment, { foreignKey: 'checkId', as: 'photos' });
   Attachment.belongsTo(User, { foreignKey: 'userId', as: 'user' });
   SignOff.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+
+  // Top-of-girder survey (issue 4, part B).
+  SurveyImport.initModel(sequelize);
+  GirderSurvey.initModel(sequelize);
+  SurveyImport.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+  GirderSurvey.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 }

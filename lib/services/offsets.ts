@@ -2,8 +2,9 @@ import { computeOffsetTable, GeometryError, offsetTableToCsv, type BridgeDescrip
 import { HttpError } from '@/lib/api/errors';
 import { Bridge } from '@/models';
 import { db } from '@/lib/db/connection';
-import { checkedDescription } from './description';
+import { schemaCheckedDescription } from './description';
 import { getRevisionDescription } from './bridges';
+import { storedSurvey, withSurvey } from './survey';
 
 /** Runs the engine, mapping geometry that cannot be built to 422 with the engine's own message. */
 export function computeChecked(bridge: BridgeDescription): OffsetTable {
@@ -17,25 +18,28 @@ export function computeChecked(bridge: BridgeDescription): OffsetTable {
 
 /** Offset table for a description posted to the compute API (400 schema, 422 geometry). */
 export function computeFromJson(json: unknown): OffsetTable {
-  return computeChecked(checkedDescription(json, '_'));
+  return computeChecked(schemaCheckedDescription(json, '_'));
 }
 
 const cache = new Map<string, OffsetTable>();
 const CACHE_LIMIT = 200;
 
 /**
- * Offset table of a stored bridge's latest revision. Revisions never change once written, so the
- * table is cached by bridge and revision number.
+ * Offset table of a stored bridge's latest revision, with the stored top-of-girder survey merged over
+ * the description's own `top_of_girder` (the survey wins per point). Revisions never change once
+ * written and every survey import bumps the survey stamp, so the table is cached by bridge, revision
+ * and survey stamp.
  */
 export async function offsetsForBridge(id: string): Promise<{ bridge: Bridge; table: OffsetTable }> {
   await db();
   const n = Number(id);
   const bridge = Number.isInteger(n) && n > 0 ? await Bridge.findByPk(n) : null;
   if (!bridge) throw new HttpError(404, 'There is no bridge with that id.');
-  const key = `${bridge.id}:${bridge.createdAt.getTime()}:${bridge.currentRevision}`;
+  const survey = await storedSurvey(bridge.id);
+  const key = `${bridge.id}:${bridge.createdAt.getTime()}:${bridge.currentRevision}:${survey.stamp}`;
   let table = cache.get(key);
   if (!table) {
-    table = computeChecked(await getRevisionDescription(bridge.id, bridge.currentRevision));
+    table = computeChecked(withSurvey(await getRevisionDescription(bridge.id, bridge.currentRevision), survey.entries));
     if (cache.size >= CACHE_LIMIT) cache.delete(cache.keys().next().value as string);
     cache.set(key, table);
   }

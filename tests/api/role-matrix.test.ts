@@ -25,6 +25,8 @@ import * as fieldTolerances from '@/app/api/bridges/[id]/tolerances/route';
 import * as fieldAudit from '@/app/api/bridges/[id]/audit/route';
 import * as fieldOutbox from '@/app/api/admin/outbox/route';
 import { callRaw as fieldCallRaw, multipartRequest as fieldMultipart, PNG_1X1 as FIELD_PNG } from './field-helpers';
+import * as surveyRoute from '@/app/api/bridges/[id]/survey/route';
+import * as surveyPreview from '@/app/api/bridges/[id]/survey/preview/route';
 
 type Expect = Record<Who, number>;
 const row = (anonymous: number, crew: number, inspector: number, engineer: number, admin: number): Expect => ({
@@ -90,6 +92,18 @@ const matrix: Record<string, Case> = {
     handler: user.PATCH,
     expect: row(401, 403, 403, 403, 200),
     setup: async () => ({ params: { id: String(people.crew.id) }, body: { name: 'Cal Renamed' } }),
+  },
+  // Top-of-girder survey (issue 4, part B): engineer and inspector import; everyone signed in reads.
+  'GET /api/bridges/[id]/survey': { handler: surveyRoute.GET, expect: READ, setup: async () => ({ params: { id: await newBridge() } }) },
+  'POST /api/bridges/[id]/survey': {
+    handler: surveyRoute.POST,
+    expect: row(401, 403, 201, 201, 201),
+    setup: async () => ({ params: { id: await newBridge() }, body: { csv: 'girder,span,point,elevation\nG1,1,1,253.00\n' } }),
+  },
+  'POST /api/bridges/[id]/survey/preview': {
+    handler: surveyPreview.POST,
+    expect: row(401, 403, 200, 200, 200),
+    setup: async () => ({ params: { id: await newBridge() }, body: { csv: 'G1,1,1,253.00' } }),
   },
   // Field work (issue 6): inspectors record, crew reads; the upload goes as real multipart.
   'GET /api/bridges/[id]/checks': { handler: fieldChecks.GET, expect: READ, setup: async () => ({ params: { id: await newBridge() } }) },

@@ -1,0 +1,258 @@
+/**
+ * Top-of-girder survey: preview (checks every row, writes nothing), commit (stores the rows in one
+ * transaction, replacing earlier values of the same points while keeping them as history) and the
+ * stored values that the offset table merges over the description's own `top_of_girder`.
+ */
+import { Op } from 'sequelize';
+import { z } from 'zod';
+import { Bridge, GirderSurvey, SurveyImport, User } from '@/models';
+import { db } from '@/lib/db/connection';
+import { HttpError } from '@/lib/api/errors';
+import type { SessionUser } from '@/lib/auth/session';
+import { DEFAULT_POINTS_PER_SPAN, type BridgeDescription } from '@/lib/geometry';
+import { parseSurveyCsv, type SurveyCsvReport, type SurveyFraming } from '@/lib/import/survey-csv';
+import { getRevisionDescription } from './bridges';
+import { audit } from './audit';
+
+/** Largest survey CSV text accepted, in characters (the JSON body limit is 1 MB). */
+export const MAX_SURVEY_CSV_CHARS = 900_000;
+
+export const surveyUploadSchema = z.object({
+  csv: z
+    .string({ error: 'Send the CSV text in "csv".' })
+    .min(1, 'The file is empty.')
+    .max(MAX_SURVEY_CSV_CHARS, `The file is larger than ${Math.round(MAX_SURVEY_CSV_CHARS / 1000)} kB; split it.`),
+  filename: z.string().trim().max(200, 'Keep the file name under 200 characters.').optional().default(''),
+  /** The revision the preview was checked against; a commit on a newer revision is refused (409). */
+  revision: z.number({ error: 'revision must be the revision number you previewed.' }).int().positive().optional(),
+});
+export type SurveyUpload = z.infer<typeof surveyUploadSchema>;
+
+export type SurveyPreviewRow = {
+  line: number;
+  girder: string;
+  span: number | null;
+  point: number | null;
+  elevation: number | null;
+  problems: string[];
+  /** The stored value this row would replace, or null when the point has none yet. */
+  replaces: number | null;
+};
+
+export type SurveyPreview = {
+  bridge_id: number;
+  revision: number;
+  units: 'ft' | 'm';
+  header: boolean;
+  file_problems: string[];
+  rows: SurveyPreviewRow[];
+  summary: { rows: number; good: number; bad: number; replacing: number };
+};
+
+export type SurveyValue = {
+  girder: string;
+  span: number;
+  point: number;
+  elevation: number;
+  imported_by: string | null;
+  imported_at: string;
+  /** False when the point no longer exists on the current revision (it is then left out of the table). */
+  on_current_revision: boolean;
+  /** Earlier values of the same point, newest first. */
+  history: { elevation: number; imported_by: string | null; imported_at: string; replaced_at: string }[];
+};
+
+export type SurveyImportSummary = { id: number; filename: string; revision: number; rows: number; replaced: number; imported_by: string | null; imported_at: string };
+
+export type SurveyListing = { bridge_id: number; revision: number; units: 'ft' | 'm'; values: SurveyValue[]; imports: SurveyImportSummary[] };
+
+const keyOf = (girder: string, span: number, point: number) => `${girder}\u0000${span}\u0000${point}`;
+
+async function findBridge(id: string | number): Promise<Bridge> {
+  await db();
+  const n = Number(id);
+  const bridge = Number.isInteger(n) && n > 0 ? await Bridge.findByPk(n) : null;
+  if (!bridge) throw new HttpError(404, 'There is no bridge with that id.');
+  return bridge;
+}
+
+/** Girders, span count and points per span of a description: what survey rows are checked against. */
+export function framingOf(description: BridgeDescription): SurveyFraming {
+  return {
+    girders: description.girders.map((g) => g.name),
+    spanCount: description.bents.length - 1,
+    pointsPerSpan: description.points_per_span ?? DEFAULT_POINTS_PER_SPAN,
+  };
+}
+
+function fits(framing: SurveyFraming, v: { girder: string; span: number; point: number }): boolean {
+  return framing.girders.includes(v.girder) && v.span >= 1 && v.span <= framing.spanCount && v.point >= 0 && v.point <= framing.pointsPerSpan;
+}
+
+async function currentRows(bridgeId: number): Promise<GirderSurvey[]> {
+  return GirderSurvey.findAll({ where: { bridgeId, replacedAt: { [Op.is]: null } }, order: [['id', 'ASC']] });
+}
+
+async function check(bridge: Bridge, csv: string): Promise<{ report: SurveyCsvReport; preview: SurveyPreview }> {
+  const description = await getRevisionDescription(bridge.id, bridge.currentRevision);
+  const report = parseSurveyCsv(csv, framingOf(description));
+  const stored = new Map((await currentRows(bridge.id)).map((r) => [keyOf(r.girder, r.span, r.point), r.elevation]));
+  const rows: SurveyPreviewRow[] = report.rows.map((r) => ({
+    ...r,
+    replaces: r.span !== null && r.point !== null ? (stored.get(keyOf(r.girder, r.span, r.point)) ?? null) : null,
+  }));
+  return {
+    report,
+    preview: {
+      bridge_id: bridge.id,
+      revision: bridge.currentRevision,
+      units: bridge.units,
+      header: report.header,
+      file_problems: report.fileProblems,
+      rows,
+      summary: { rows: rows.length, good: report.good, bad: report.bad, replacing: rows.filter((r) => r.problems.length === 0 && r.replaces !== null).length },
+    },
+  };
+}
+
+/** Checks a survey CSV against the bridge's latest revision and reports every row. Writes nothing. */
+export async function previewSurvey(id: string, input: SurveyUpload): Promise<SurveyPreview> {
+  const bridge = await findBridge(id);
+  return (await check(bridge, input.csv)).preview;
+}
+
+/** The report's problems as API field errors: one entry per bad line ("line.7"), plus "csv" for the file. */
+function reportFields(preview: SurveyPreview): Record<string, string[]> {
+  const fields: Record<string, string[]> = {};
+  if (preview.file_problems.length) fields.csv = [...preview.file_problems];
+  for (const r of preview.rows) if (r.problems.length) fields[`line.${r.line}`] = r.problems;
+  return fields;
+}
+
+/**
+ * Stores a survey CSV when every row is good (400 with one field error per bad line otherwise, and
+ * nothing written). A point already surveyed gets the new value; the old row stays as history,
+ * stamped with the time it was replaced. One transaction; one audit event.
+ */
+export async function commitSurvey(user: SessionUser, id: string, input: SurveyUpload): Promise<{ import_id: number; stored: number; replaced: number; revision: number }> {
+  const bridge = await findBridge(id);
+  if (input.revision !== undefined && input.revision !== bridge.currentRevision) {
+    throw new HttpError(409, `The rows were checked against revision ${input.revision}, but the bridge is now at revision ${bridge.currentRevision}. Check the file again.`);
+  }
+  const { report, preview } = await check(bridge, input.csv);
+  if (preview.summary.bad > 0 || preview.file_problems.length > 0 || preview.rows.length === 0) {
+    const count = preview.summary.bad;
+    const message =
+      count > 0
+        ? `${count} of ${preview.summary.rows} rows have problems; nothing was stored. Correct them and import the file again.`
+        : `${preview.file_problems[0] ?? 'The file holds no survey rows.'} Nothing was stored.`;
+    throw new HttpError(400, message, reportFields(preview));
+  }
+  const sequelize = await db();
+  return sequelize.transaction(async (transaction) => {
+    const now = new Date();
+    const record = await SurveyImport.create(
+      { bridgeId: bridge.id, userId: user.id, filename: input.filename, revision: bridge.currentRevision, rowCount: report.rows.length, replacedCount: 0 },
+      { transaction },
+    );
+    let replaced = 0;
+    for (const r of report.rows) {
+      const [count] = await GirderSurvey.update(
+        { replacedAt: now },
+        { where: { bridgeId: bridge.id, girder: r.girder, span: r.span!, point: r.point!, replacedAt: { [Op.is]: null } }, transaction },
+      );
+      replaced += count > 0 ? 1 : 0;
+    }
+    await GirderSurvey.bulkCreate(
+      report.rows.map((r) => ({ bridgeId: bridge.id, importId: record.id, girder: r.girder, span: r.span!, point: r.point!, elevation: r.elevation!, userId: user.id })),
+      { transaction },
+    );
+    record.replacedCount = replaced;
+    await record.save({ transaction });
+    await audit(
+      user.id,
+      'survey.import',
+      'bridge',
+      bridge.id,
+      { import_id: record.id, filename: input.filename, revision: bridge.currentRevision, rows: report.rows.length, replaced },
+      transaction,
+    );
+    return { import_id: record.id, stored: report.rows.length, replaced, revision: bridge.currentRevision };
+  });
+}
+
+/** Stored values (current with their history) and the import log of a bridge, for the survey page and API. */
+export async function listSurvey(id: string | number): Promise<SurveyListing> {
+  const bridge = await findBridge(id);
+  const framing = framingOf(await getRevisionDescription(bridge.id, bridge.currentRevision));
+  const [rows, imports] = await Promise.all([
+    GirderSurvey.findAll({ where: { bridgeId: bridge.id }, include: [{ model: User, as: 'user', attributes: ['name'] }], order: [['id', 'DESC']] }),
+    SurveyImport.findAll({ where: { bridgeId: bridge.id }, include: [{ model: User, as: 'user', attributes: ['name'] }], order: [['id', 'DESC']] }),
+  ]);
+  const nameOf = (r: GirderSurvey | SurveyImport) => (r as unknown as { user?: User | null }).user?.name ?? null;
+  const values = new Map<string, SurveyValue>();
+  for (const r of rows.filter((x) => x.replacedAt === null)) {
+    values.set(keyOf(r.girder, r.span, r.point), {
+      girder: r.girder,
+      span: r.span,
+      point: r.point,
+      elevation: r.elevation,
+      imported_by: nameOf(r),
+      imported_at: r.createdAt.toISOString(),
+      on_current_revision: fits(framing, r),
+      history: [],
+    });
+  }
+  for (const r of rows.filter((x) => x.replacedAt !== null)) {
+    values.get(keyOf(r.girder, r.span, r.point))?.history.push({
+      elevation: r.elevation,
+      imported_by: nameOf(r),
+      imported_at: r.createdAt.toISOString(),
+      replaced_at: (r.replacedAt as Date).toISOString(),
+    });
+  }
+  const girderOrder = new Map(framing.girders.map((g, i) => [g, i]));
+  const sorted = [...values.values()].sort(
+    (a, b) => a.span - b.span || (girderOrder.get(a.girder) ?? 1e9) - (girderOrder.get(b.girder) ?? 1e9) || a.girder.localeCompare(b.girder) || a.point - b.point,
+  );
+  return {
+    bridge_id: bridge.id,
+    revision: bridge.currentRevision,
+    units: bridge.units,
+    values: sorted,
+    imports: imports.map((i) => ({
+      id: i.id,
+      filename: i.filename,
+      revision: i.revision,
+      rows: i.rowCount,
+      replaced: i.replacedCount,
+      imported_by: nameOf(i),
+      imported_at: i.createdAt.toISOString(),
+    })),
+  };
+}
+
+type SurveyEntry = { girder: string; span: number; point: number; elevation: number };
+
+/**
+ * The current surveyed value of every point of a bridge, and a stamp that changes whenever an import
+ * is committed (for cache keys).
+ */
+export async function storedSurvey(bridgeId: number): Promise<{ stamp: string; entries: SurveyEntry[] }> {
+  const rows = await currentRows(bridgeId);
+  const latest = rows.reduce((m, r) => Math.max(m, r.importId), 0);
+  return { stamp: `${latest}:${rows.length}`, entries: rows.map((r) => ({ girder: r.girder, span: r.span, point: r.point, elevation: r.elevation })) };
+}
+
+/**
+ * The description with the stored survey merged over its own `top_of_girder` (the survey wins per
+ * point). Points of girders or spans the description no longer has are left out.
+ */
+export function withSurvey(description: BridgeDescription, entries: SurveyEntry[]): BridgeDescription {
+  const framing = framingOf(description);
+  const usable = entries.filter((e) => fits(framing, e));
+  if (usable.length === 0) return description;
+  const surveyed = new Set(usable.map((e) => keyOf(e.girder, e.span, e.point)));
+  const own = (description.top_of_girder ?? []).filter((t) => !surveyed.has(keyOf(t.girder, t.span, t.point)));
+  return { ...description, top_of_girder: [...own, ...usable] };
+}
