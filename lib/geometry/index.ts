@@ -13,7 +13,7 @@ export {
   type BridgeDescription,
   type BridgeDescriptionInput,
 } from './schema';
-export { parseBridge, validateGeometry, type ParseBridgeResult } from './validate';
+export { parseBridge, parseBridgeSchema, validateGeometry, MAX_GIRDER_POINTS, MAX_CHORD_POINTS, type ParseBridgeResult } from './validate';
 export { GeometryError, type GeometryIssue } from './errors';
 export {
   formatFeet,

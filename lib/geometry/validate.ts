@@ -5,7 +5,7 @@
 import type { GeometryIssue } from './errors';
 import { GeometryError } from './errors';
 import { formatLength, formatStation } from './format';
-import { bridgeDescriptionSchema, DEFAULT_POINTS_PER_SPAN, type BridgeDescription } from './schema';
+import { bridgeDescriptionSchema, DEFAULT_CHORD_SPACES, DEFAULT_POINTS_PER_SPAN, type BridgeDescription } from './schema';
 import { buildOffsetTable } from './table';
 import type { OffsetTable } from './types';
 
@@ -149,6 +149,16 @@ export function checkDescription(bridge: BridgeDescription): GeometryIssue[] {
   if (!Number.isInteger(n) || n < 1 || n > 10000) issues.push({ path: 'points_per_span', message: `Points per span must be a whole number from 1 to 10000 (found ${n})` });
   const m = bridge.chord_spaces;
   if (m !== undefined && (!Number.isInteger(m) || m < 1 || m > 10000)) issues.push({ path: 'chord_spaces', message: `Chord spaces must be a whole number from 1 to 10000 (found ${m})` });
+  // Bound the work one description can ask for, so hostile input cannot tie up the server.
+  const spans = Math.max(0, bents.length - 1);
+  const girderPoints = bridge.girders.length * spans * (Number.isInteger(n) ? n + 1 : 0);
+  if (girderPoints > MAX_GIRDER_POINTS) {
+    issues.push({ path: 'points_per_span', message: `This description asks for ${girderPoints} girder points (girders × spans × points); the limit is ${MAX_GIRDER_POINTS}. Use fewer points per span.` });
+  }
+  const chordPoints = 2 * spans * ((m ?? DEFAULT_CHORD_SPACES) + 1);
+  if (chordPoints > MAX_CHORD_POINTS) {
+    issues.push({ path: 'chord_spaces', message: `This description asks for ${chordPoints} chord offsets (2 edges × spans × divisions); the limit is ${MAX_CHORD_POINTS}. Use fewer chord spaces.` });
+  }
   const form = d.form_settlement;
   if (form !== undefined && form < 0) issues.push({ path: 'deck.form_settlement', message: 'The form settlement allowance must not be negative' });
 
@@ -168,6 +178,11 @@ export function checkDescription(bridge: BridgeDescription): GeometryIssue[] {
 
   return issues;
 }
+
+/** Most girder points one description may ask for (girders × spans × (points per span + 1)). */
+export const MAX_GIRDER_POINTS = 250_000;
+/** Most chord-offset points one description may ask for (2 edges × spans × (chord spaces + 1)). */
+export const MAX_CHORD_POINTS = 250_000;
 
 /** The description checked and, when fit, the table computed in the same pass. */
 export function checkAndCompute(bridge: BridgeDescription): { issues: GeometryIssue[]; table: OffsetTable | null } {
@@ -197,6 +212,18 @@ export type ParseBridgeResult =
  * path such as "bents.1.station", "_" for the document as a whole), then the geometric checks.
  */
 export function parseBridge(json: unknown): ParseBridgeResult {
+  const schema = parseBridgeSchema(json);
+  if (!schema.ok) return schema;
+  const issues = validateGeometry(schema.bridge);
+  if (issues.length > 0) return { ok: false, kind: 'geometry', issues, message: new GeometryError(issues).message };
+  return schema;
+}
+
+/**
+ * The schema step of {@link parseBridge} alone, for callers that compute next anyway
+ * ({@link computeOffsetTable} runs the geometric checks itself and throws GeometryError).
+ */
+export function parseBridgeSchema(json: unknown): Extract<ParseBridgeResult, { kind: 'schema' }> | { ok: true; bridge: BridgeDescription } {
   const parsed = bridgeDescriptionSchema.safeParse(json);
   if (!parsed.success) {
     const fields: Record<string, string[]> = {};
@@ -209,7 +236,5 @@ export function parseBridge(json: unknown): ParseBridgeResult {
     const more = parsed.error.issues.length > 1 ? ` (and ${parsed.error.issues.length - 1} more problems)` : '';
     return { ok: false, kind: 'schema', fields, message: `${where}${first.message}${more}` };
   }
-  const issues = validateGeometry(parsed.data);
-  if (issues.length > 0) return { ok: false, kind: 'geometry', issues, message: new GeometryError(issues).message };
   return { ok: true, bridge: parsed.data };
 }

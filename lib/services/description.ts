@@ -1,5 +1,14 @@
-import { parseBridge, type BridgeDescription } from '@/lib/geometry';
+import { parseBridge, parseBridgeSchema, type BridgeDescription } from '@/lib/geometry';
 import { HttpError } from '@/lib/api/errors';
+
+function schemaError(result: { fields: Record<string, string[]>; message: string }, fieldPrefix: string): HttpError {
+  const fields: Record<string, string[]> = {};
+  for (const [k, v] of Object.entries(result.fields)) {
+    const key = fieldPrefix === '_' ? k : k === '_' ? fieldPrefix : `${fieldPrefix}.${k}`;
+    fields[key] = v;
+  }
+  return new HttpError(400, result.message, fields);
+}
 
 /**
  * Validates a bridge description for storage: schema problems are 400 with field errors, geometry
@@ -8,10 +17,13 @@ import { HttpError } from '@/lib/api/errors';
 export function checkedDescription(json: unknown, fieldPrefix = 'description'): BridgeDescription {
   const result = parseBridge(json);
   if (result.ok) return result.bridge;
-  if (result.kind === 'schema') {
-    const fields: Record<string, string[]> = {};
-    for (const [k, v] of Object.entries(result.fields)) fields[k === '_' ? fieldPrefix : `${fieldPrefix}.${k}`] = v;
-    throw new HttpError(400, result.message, fields);
-  }
+  if (result.kind === 'schema') throw schemaError(result, fieldPrefix);
   throw new HttpError(422, result.message);
+}
+
+/** The schema check alone (400 with field errors); the caller computes, which checks the geometry. */
+export function schemaCheckedDescription(json: unknown, fieldPrefix = 'description'): BridgeDescription {
+  const result = parseBridgeSchema(json);
+  if (result.ok) return result.bridge;
+  throw schemaError(result, fieldPrefix);
 }
