@@ -53,6 +53,11 @@ export default async function BridgePage({ params }: { params: Params }) {
           <a href={`/api/bridges/${bridge.id}/offsets.csv`} className="btn-secondary" download>
             Download CSV
           </a>
+          {roleAllows(user.role, ['engineer', 'inspector']) ? (
+            <Link href={`/bridges/${bridge.id}/survey`} className="btn-secondary">
+              Top-of-girder survey
+            </Link>
+          ) : null}
           {roleAllows(user.role, ['engineer']) ? <RenameBridgeForm bridgeId={bridge.id} name={bridge.name} /> : null}
           {user.role === 'admin' ? <DeleteBridgeButton bridgeId={bridge.id} name={bridge.name} /> : null}
         </div>
