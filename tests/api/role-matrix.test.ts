@@ -27,6 +27,8 @@ import * as fieldOutbox from '@/app/api/admin/outbox/route';
 import { callRaw as fieldCallRaw, multipartRequest as fieldMultipart, PNG_1X1 as FIELD_PNG } from './field-helpers';
 import * as surveyRoute from '@/app/api/bridges/[id]/survey/route';
 import * as surveyPreview from '@/app/api/bridges/[id]/survey/preview/route';
+// Geometry editor and LandXML import (issue 4, part A).
+import * as landxmlImport from '@/app/api/import/landxml/route';
 
 type Expect = Record<Who, number>;
 const row = (anonymous: number, crew: number, inspector: number, engineer: number, admin: number): Expect => ({
@@ -150,6 +152,19 @@ const matrix: Record<string, Case> = {
   },
   'GET /api/bridges/[id]/audit': { handler: fieldAudit.GET, expect: READ, setup: async () => ({ params: { id: await newBridge() } }) },
   'GET /api/admin/outbox': { handler: fieldOutbox.GET, expect: row(401, 403, 403, 403, 200) },
+  // The import takes a multipart upload: the session cookie is carried onto a real LandXML upload.
+  'POST /api/import/landxml': {
+    handler: async (req: { url: string; headers: Headers }, ctx: unknown) =>
+      landxmlImport.POST(
+        await fieldMultipart(req.url, req.headers.get('cookie') ?? undefined, {
+          bytes: fs.readFileSync(path.resolve(__dirname, '../fixtures/landxml/creek-road-ft.xml')),
+          name: 'creek-road-ft.xml',
+          type: 'application/xml',
+        }),
+        ctx as never,
+      ),
+    expect: row(401, 403, 403, 200, 200),
+  },
 };
 
 beforeAll(async () => {
