@@ -19,6 +19,7 @@ import GirderPoints from './objects/GirderPoints';
 import RenderStats from './objects/RenderStats';
 import CameraRig from './objects/CameraRig';
 import Ground from './objects/Ground';
+import OverlayBeams from './objects/OverlayBeams';
 
 export interface SceneOverlay {
   positions: Float32Array;
@@ -142,7 +143,7 @@ export default function BridgeScene(props: BridgeSceneProps) {
       <InstancedBoxes matrices={bents.columns} color="#a8a295" roughness={0.9} metalness={0} />
       <GirderPoints positions={pickPositions} radius={0.35 * u} selected={selected} onPick={onSelect} />
       {overlays.map((o, i) => (
-        <Segments key={i} positions={o.positions} color={o.color} />
+        <OverlayBeams key={i} positions={o.positions} color={o.color} size={0.12 * u} />
       ))}
       {desc.bents.map((b, i) => (
         <Html key={b.name + i} position={[bents.labels[i * 3], bents.labels[i * 3 + 1], bents.labels[i * 3 + 2]]} center zIndexRange={[20, 0]}>

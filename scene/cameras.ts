@@ -154,10 +154,13 @@ export function cameraPose(
       const bx = g[0] - gn[0];
       const bz = g[2] - gn[2];
       const bl = Math.hypot(bx, bz) || 1;
-      // Aim a little inside the exterior girder so the next girder in is in view too.
-      const target: [number, number, number] = [g[0] + (g[0] - e[0]) * 0.6, (g[1] + e[1]) / 2, g[2] + (g[2] - e[2]) * 0.6];
+      // Aim between the exterior girder and the edge; stand a few paces back and a step outside.
+      const target: [number, number, number] = [(g[0] * 2 + e[0]) / 3, (g[1] + e[1]) / 2, (g[2] * 2 + e[2]) / 3];
+      const ox = e[0] - g[0];
+      const oz = e[2] - g[2];
+      const ol = Math.hypot(ox, oz) || 1;
       return {
-        position: [target[0] + (bx / bl) * 26 * u, target[1] + 2.5 * u, target[2] + (bz / bl) * 26 * u],
+        position: [target[0] + (bx / bl) * 13 * u + (ox / ol) * 3 * u, target[1] + 1.5 * u, target[2] + (bz / bl) * 13 * u + (oz / ol) * 3 * u],
         target,
       };
     }
