@@ -12,6 +12,7 @@ import SignOutButton from './SignOutButton';
 export default function AppRail({ user }: { user: SessionUser }) {
   const items: NavItem[] = [{ href: '/bridges', label: 'Bridges' }];
   if (user.role === 'admin') items.push({ href: '/admin/users', label: 'Users' });
+  if (user.role === 'admin') items.push({ href: '/admin/outbox', label: 'Outbox' });
   return (
     <header className="no-print bg-brand-800 text-white md:sticky md:top-0 md:flex md:h-screen md:w-60 md:shrink-0 md:flex-col md:overflow-y-auto">
       <div className="flex flex-wrap items-center justify-between gap-3 px-4 py-3 md:flex-1 md:flex-col md:flex-nowrap md:items-stretch md:justify-start md:gap-6 md:py-6">

@@ -47,6 +47,15 @@ export default async function BridgePage({ params }: { params: Params }) {
           <Link href={`/bridges/${bridge.id}/offsets`} className="btn-primary">
             Offset table
           </Link>
+          <Link href={`/bridges/${bridge.id}/field`} className="btn-secondary">
+            Field mode
+          </Link>
+          <Link href={`/bridges/${bridge.id}/checks`} className="btn-secondary">
+            Checks
+          </Link>
+          <Link href={`/bridges/${bridge.id}/sheet`} className="btn-secondary">
+            Field sheet
+          </Link>
           <Link href={`/bridges/${bridge.id}/view`} className="btn-secondary">
             3D view
           </Link>

@@ -1,0 +1,42 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import FieldMode from '@/components/FieldMode';
+import GeometryProblem from '@/components/GeometryProblem';
+import { requireUser } from '@/components/server-session';
+import { roleAllows } from '@/lib/auth/roles';
+import { loadFieldView } from '@/lib/services/field-view';
+
+export const metadata: Metadata = { title: 'Field mode' };
+
+type Params = Promise<{ id: string }>;
+
+export default async function FieldPage({ params }: { params: Params }) {
+  const user = await requireUser();
+  const { id } = await params;
+  const view = await loadFieldView(id);
+  if (!view.ok || view.groups.length === 0) {
+    return (
+      <div className="max-w-xl">
+        <h1 className="mb-3 text-2xl font-bold text-concrete-900">Field mode: {view.bridge.name}</h1>
+        {view.ok ? (
+          <p className="card p-4 text-concrete-700">This bridge has no exterior girder points to check. Add girders to the geometry first.</p>
+        ) : (
+          <GeometryProblem message={view.problem} title="The targets cannot be computed for this revision" />
+        )}
+        <Link href={`/bridges/${view.bridge.id}`} className="btn-secondary mt-4">
+          Back to the bridge
+        </Link>
+      </div>
+    );
+  }
+  return (
+    <FieldMode
+      bridge={view.bridge}
+      units={view.settings.units}
+      groups={view.groups}
+      widthTolerance={view.settings.width_tolerance}
+      readingTolerance={view.settings.reading_tolerance}
+      canRecord={roleAllows(user.role, ['inspector'])}
+    />
+  );
+}
