@@ -81,6 +81,7 @@ describe('3D view and walkthrough', () => {
       });
       expect(Date.now() - started).toBeLessThan(60000);
       const s = await stats(page);
+      console.info(`[scene] ${b.name}: ${s.calls} draw calls, ${s.triangles} triangles, first frames after ${Date.now() - started} ms`);
       expect(s.calls, `${b.name}: draw calls`).toBeGreaterThan(5);
       expect(s.calls, `${b.name}: draw calls`).toBeLessThanOrEqual(60);
       expect(s.triangles).toBeGreaterThan(1000);
@@ -179,7 +180,7 @@ describe('3D view and walkthrough', () => {
       await p.getByTestId('no-webgl').waitFor({ timeout: 30000 });
       expect(await p.getByTestId('no-webgl').textContent()).toMatch(/WebGL/);
       expect(await p.getByTestId('edge-width-summary').locator('tbody tr').count()).toBeGreaterThan(0);
-      expect(await p.getByRole('link', { name: 'offset table' }).getAttribute('href')).toBe(`/bridges/${first.id}/offsets`);
+      expect(await p.getByTestId('no-webgl').getByRole('link', { name: 'offset table' }).getAttribute('href')).toBe(`/bridges/${first.id}/offsets`);
       expect(errs.map(String)).toEqual([]);
     } finally {
       await plain.close();
