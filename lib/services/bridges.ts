@@ -147,3 +147,26 @@ export async function createRevision(user: SessionUser, id: string, input: z.inf
   }
   return { revision: next };
 }
+
+export type RevisionDetail = RevisionSummary & { bridge_id: number; description: BridgeDescription };
+
+/** One stored revision of a bridge with its description; 404 when the bridge or the revision is missing. */
+export async function getRevision(id: string, revision: string | number): Promise<RevisionDetail> {
+  const bridge = await findBridge(id);
+  const n = Number(revision);
+  if (!Number.isInteger(n) || n <= 0) throw new HttpError(404, `Revision ${String(revision).slice(0, 20)} of this bridge does not exist.`);
+  const row = await GeometryRevision.findOne({
+    where: { bridgeId: bridge.id, revision: n },
+    include: [{ model: User, as: 'author', attributes: ['name'] }],
+  });
+  if (!row) throw new HttpError(404, `Revision ${n} of this bridge does not exist.`);
+  const author = (row as GeometryRevision & { author?: User | null }).author;
+  return {
+    bridge_id: bridge.id,
+    revision: row.revision,
+    author: author ? author.name : null,
+    note: row.note,
+    createdAt: row.createdAt.toISOString(),
+    description: JSON.parse(row.description) as BridgeDescription,
+  };
+}

@@ -4,6 +4,8 @@ import { NextRequest } from 'next/server';
 import { beforeAll, describe, expect, it } from 'vitest';
 import * as landxml from '@/app/api/import/landxml/route';
 import * as health from '@/app/api/health/route';
+import * as revisionOne from '@/app/api/bridges/[id]/revisions/[revision]/route';
+import * as revisions from '@/app/api/bridges/[id]/revisions/route';
 import { demoBridges } from '@/lib/demo/bridges';
 import { parseBridge } from '@/lib/geometry';
 import { createBridge, listBridges } from '@/lib/services/bridges';
@@ -135,5 +137,33 @@ describe('POST /api/import/landxml', () => {
     expect((await upload({ who: 'crew', file: fixture('creek-road-ft.xml') })).status).toBe(403);
     expect((await upload({ who: 'inspector', file: fixture('creek-road-ft.xml') })).status).toBe(403);
     expect((await upload({ who: 'admin', file: fixture('creek-road-ft.xml') })).status).toBe(200);
+  });
+});
+
+// The editor and history pages read single revisions through this route; its tests sit here with the
+// rest of the editor's API tests.
+
+describe('GET /api/bridges/:id/revisions/:revision', () => {
+  it('returns each stored revision with its own description, author and note', async () => {
+    const { id } = await createBridge({ id: people.engineer.id, email: '', name: '', role: 'engineer' }, { name: 'Revision reader', description: demoBridges[0] });
+    const changed = JSON.parse(JSON.stringify(demoBridges[0]));
+    changed.girders[0].offsets[1] = -18.0;
+    const saved = await call(revisions.POST, { method: 'POST', cookie: people.engineer.cookie, params: { id: String(id) }, body: { base_revision: 1, description: changed, note: 'G1 moved at Pier 2' } });
+    expect(saved.status).toBe(201);
+    const one = await call(revisionOne.GET, { cookie: people.crew.cookie, params: { id: String(id), revision: '1' } });
+    const two = await call(revisionOne.GET, { cookie: people.crew.cookie, params: { id: String(id), revision: '2' } });
+    expect(one.status).toBe(200);
+    expect(one.json.description.girders[0].offsets[1]).toBe(-18.2);
+    expect(two.json.description.girders[0].offsets[1]).toBe(-18.0);
+    expect(two.json).toMatchObject({ revision: 2, note: 'G1 moved at Pier 2', author: 'Test engineer' });
+    expect(two.text).not.toMatch(/password|authorId/i);
+  });
+
+  it('answers 404 for a revision or bridge that does not exist', async () => {
+    for (const params of [{ id: '1', revision: '99' }, { id: '1', revision: 'abc' }, { id: '99999', revision: '1' }]) {
+      const res = await call(revisionOne.GET, { cookie: people.crew.cookie, params });
+      expect(res.status).toBe(404);
+      expect(res.json.error).toMatch(/does not exist|no bridge/);
+    }
   });
 });

@@ -29,6 +29,7 @@ import * as surveyRoute from '@/app/api/bridges/[id]/survey/route';
 import * as surveyPreview from '@/app/api/bridges/[id]/survey/preview/route';
 // Geometry editor and LandXML import (issue 4, part A).
 import * as landxmlImport from '@/app/api/import/landxml/route';
+import * as revisionOne from '@/app/api/bridges/[id]/revisions/[revision]/route';
 
 type Expect = Record<Who, number>;
 const row = (anonymous: number, crew: number, inspector: number, engineer: number, admin: number): Expect => ({
@@ -165,6 +166,7 @@ const matrix: Record<string, Case> = {
       ),
     expect: row(401, 403, 403, 200, 200),
   },
+  'GET /api/bridges/[id]/revisions/[revision]': { handler: revisionOne.GET, expect: READ, setup: async () => ({ params: { id: await newBridge(), revision: '1' } }) },
 };
 
 beforeAll(async () => {
