@@ -126,7 +126,13 @@ export default function BridgeViewer({ description, table, name, showStats = fal
               <span className="field-label">
                 Vertical exaggeration: <span className="tabular">{exaggeration}×</span>
               </span>
-              <input type="range" min={1} max={50} step={1} value={exaggeration} onChange={(e) => setExaggeration(Number(e.target.value))} className="mt-2 w-full accent-brand-600" />
+              <input type="range" min={1} max={50} step={1} value={exaggeration} onChange={(e) => {
+                  setExaggeration(Number(e.target.value));
+                  // Elevations move with the exaggeration: keep the same view on the bridge.
+                  setView((s) => ({ ...s, version: s.version + 1 }));
+                }}
+                className="mt-2 w-full accent-brand-600"
+              />
             </label>
             <label className="block">
               <span className="field-label">

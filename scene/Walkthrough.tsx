@@ -340,7 +340,18 @@ export default function Walkthrough() {
               ))}
             </div>
           </fieldset>
-          <Slider label="Vertical exaggeration" value={exaggeration} text={`${exaggeration}×`} min={1} max={50} step={1} onChange={setExaggeration} />
+          <Slider
+            label="Vertical exaggeration"
+            value={exaggeration}
+            text={`${exaggeration}×`}
+            min={1}
+            max={50}
+            step={1}
+            onChange={(v) => {
+              setExaggeration(v);
+              setPoseVersion((n) => n + 1);
+            }}
+          />
           {computed.error ? (
             <p role="alert" className="rounded border border-caution-500 bg-caution-100 p-2 text-sm text-caution-700">
               The engine cannot build this deck, so the picture shows the last one that worked: {computed.error}
