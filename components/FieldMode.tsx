@@ -1,7 +1,7 @@
 'use client';
 
 import Link from 'next/link';
-import { useCallback, useId, useMemo, useState } from 'react';
+import { useCallback, useId, useMemo, useRef, useState } from 'react';
 import useSWR from 'swr';
 import { fetcher, type ApiError } from './api-client';
 import type { BracketGroup, CheckRow } from './CheckTypes';
@@ -80,6 +80,7 @@ export default function FieldMode({ bridge, units, groups, widthTolerance, readi
   const [readingText, setReadingText] = useState('');
   const [note, setNote] = useState('');
   const [inputError, setInputError] = useState<{ width?: string; reading?: string }>({});
+  const resultRef = useRef<HTMLDivElement>(null);
 
   const checksKey = `/api/bridges/${bridge.id}/checks`;
   const { data: checks, error, mutate } = useSWR<CheckRow[], ApiError>(checksKey, fetcher, { revalidateOnFocus: true, errorRetryInterval: 10000 });
@@ -146,6 +147,9 @@ export default function FieldMode({ bridge, units, groups, widthTolerance, readi
     setWidthText('');
     setReadingText('');
     setNote('');
+    // Show the verdict at once, above the boxes, even with the keyboard open.
+    (document.activeElement as HTMLElement | null)?.blur();
+    requestAnimationFrame(() => resultRef.current?.scrollIntoView({ block: 'nearest', behavior: 'smooth' }));
   }
 
   const waiting = queue.pending.length;
@@ -232,6 +236,10 @@ export default function FieldMode({ bridge, units, groups, widthTolerance, readi
           <FieldTargets row={row} units={units} />
         </section>
 
+        <div ref={resultRef} className="scroll-mt-2">
+          <FieldResult verdict={current} units={units} widthTolerance={widthTolerance} readingTolerance={readingTolerance} currentRevision={bridge.revision} />
+        </div>
+
         {canRecord ? (
           <form id={`${id}-form`} onSubmit={record} noValidate className="mt-4 space-y-3">
             <div>
@@ -244,7 +252,7 @@ export default function FieldMode({ bridge, units, groups, widthTolerance, readi
                 autoComplete="off"
                 value={widthText}
                 onChange={(e) => setWidthText(e.target.value)}
-                placeholder={units === 'm' ? '1.382' : `4.53 or 4'-6 3/8"`}
+                placeholder={units === 'm' ? 'e.g. 1.382' : `e.g. 4.53 or 4'-6 3/8"`}
                 aria-invalid={inputError.width ? true : undefined}
                 aria-describedby={inputError.width ? `${id}-width-error` : undefined}
                 className="field-input tabular h-14 text-2xl"
@@ -271,7 +279,7 @@ export default function FieldMode({ bridge, units, groups, widthTolerance, readi
                     autoComplete="off"
                     value={readingText}
                     onChange={(e) => setReadingText(e.target.value)}
-                    placeholder={units === 'm' ? '0.084' : '0.32'}
+                    placeholder={units === 'm' ? 'e.g. 0.084' : 'e.g. 0.32'}
                     aria-invalid={inputError.reading ? true : undefined}
                     aria-describedby={inputError.reading ? `${id}-reading-error` : undefined}
                     className="field-input tabular h-14 text-2xl"
@@ -297,7 +305,6 @@ export default function FieldMode({ bridge, units, groups, widthTolerance, readi
           </p>
         )}
 
-        <FieldResult verdict={current} units={units} widthTolerance={widthTolerance} readingTolerance={readingTolerance} currentRevision={bridge.revision} />
 
         {queue.refused.map((r) => (
           <div key={r.key} role="alert" className="mt-3 rounded-md border border-fail-600 bg-fail-100 p-3 text-sm">

@@ -33,6 +33,7 @@ export default function SignOffPanel({ bridgeId, units, spans, canSign }: { brid
   return (
     <div className="grid gap-3 md:grid-cols-2 xl:grid-cols-3">
       {spans.map((s) => {
+        const open = new Set(s.missing.map((m) => `${m.girder}|${m.point}`)).size;
         const current = s.signoff && !s.signoff.out_of_date;
         const tone = current ? 'border-pass-600' : s.signoff?.out_of_date ? 'border-caution-500' : 'border-concrete-200';
         return (
@@ -46,7 +47,7 @@ export default function SignOffPanel({ bridgeId, units, spans, canSign }: { brid
                   current ? 'bg-pass-100 text-pass-700' : s.signoff?.out_of_date ? 'bg-caution-100 text-caution-700' : s.ready ? 'bg-brand-50 text-brand-700' : 'bg-concrete-100 text-concrete-700'
                 }`}
               >
-                {current ? 'Signed off' : s.signoff?.out_of_date ? 'Sign-off out of date' : s.ready ? 'Ready to sign off' : `${s.missing.length} to go`}
+                {current ? 'Signed off' : s.signoff?.out_of_date ? 'Sign-off out of date' : s.ready ? 'Ready to sign off' : `${s.brackets - open} of ${s.brackets} brackets done`}
               </span>
             </div>
             <p className="mt-1 text-sm text-concrete-600">
@@ -73,10 +74,13 @@ export default function SignOffPanel({ bridgeId, units, spans, canSign }: { brid
                 </ul>
               </details>
             ) : null}
-            {canSign && !current ? (
-              <button type="button" className="btn-primary mt-3" disabled={!s.ready || busy !== null} onClick={() => void sign(s.span)}>
+            {canSign && !current && s.ready ? (
+              <button type="button" className="btn-primary mt-3" disabled={busy !== null} onClick={() => void sign(s.span)}>
                 {busy === s.span ? 'Signing off…' : `Sign off span ${s.span}`}
               </button>
+            ) : null}
+            {canSign && !current && !s.ready ? (
+              <p className="mt-3 text-sm text-concrete-600">Sign-off opens when every bracket of the span has a passing latest check.</p>
             ) : null}
             {errors[s.span] ? (
               <p role="alert" className="field-error">

@@ -1,0 +1,127 @@
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import type { Browser, Page } from 'playwright-core';
+import { launchChromium, signIn, trackPageErrors } from './browser';
+
+const baseUrl = inject('baseUrl');
+let browser: Browser;
+
+// A phone-sized viewport (390 × 844 CSS px, a common phone size), touch enabled.
+const PHONE = { viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true, deviceScaleFactor: 2 };
+
+beforeAll(async () => {
+  browser = await launchChromium();
+});
+
+afterAll(async () => {
+  await browser?.close();
+});
+
+async function openFieldMode(page: Page): Promise<string> {
+  await page.goto(`${baseUrl}/bridges`);
+  await page.getByRole('link', { name: 'Marlow Creek Overpass' }).first().click();
+  await page.waitForURL(/\/bridges\/\d+$/);
+  const id = /\/bridges\/(\d+)$/.exec(page.url())![1];
+  await page.getByRole('link', { name: 'Field mode' }).click();
+  await page.waitForURL(/\/field$/);
+  await page.getByTestId('target-width').waitFor();
+  return id;
+}
+
+/** The decimal edge-width target shown under the feet-inches one, e.g. "4.53 ft" → 4.53. */
+async function decimalTarget(page: Page): Promise<number> {
+  const text = (await page.getByTestId('target-width').locator('xpath=following-sibling::dd[1]').textContent()) ?? '';
+  const value = Number(text.replace(/[^0-9.]/g, ''));
+  expect(Number.isFinite(value) && value > 0, text).toBe(true);
+  return value;
+}
+
+describe('field mode on a phone', () => {
+  it('walks an inspector bracket by bracket: pass, fail, and an entry kept through a dropped connection', async () => {
+    const context = await browser.newContext(PHONE);
+    const page = await context.newPage();
+    const errors = trackPageErrors(page);
+    await signIn(page, baseUrl, 'inspector@example.com');
+    const id = await openFieldMode(page);
+
+    // Big type: the target numbers are at least 24 px; nothing scrolls sideways on the phone.
+    const size = await page.getByTestId('target-width').evaluate((el) => parseFloat(getComputedStyle(el).fontSize));
+    expect(size).toBeGreaterThanOrEqual(24);
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+
+    await page.getByRole('button', { name: '1', exact: true }).click();
+    await page.getByRole('button', { name: /^G1/ }).click();
+
+    // Point 0: type the shown decimal target (rounded to 0.01 ft, within the 1/4" tolerance) → PASS.
+    const width0 = await decimalTarget(page);
+    await page.getByLabel(/Measured edge width/).fill(width0.toFixed(2));
+    await page.getByRole('button', { name: 'Record' }).click();
+    await expect.poll(() => page.getByTestId('field-verdict').textContent()).toBe('PASS');
+    await expect.poll(() => page.getByTestId('field-result').textContent()).toMatch(/Saved as check #\d+/);
+
+    // Next bracket, six inches wide → FAIL.
+    await page.getByRole('button', { name: /Next/ }).click();
+    await expect.poll(() => page.locator('h2').filter({ hasText: 'Point' }).first().textContent()).toMatch(/Point\s*1/);
+    const width1 = await decimalTarget(page);
+    await page.getByLabel(/Measured edge width/).fill((width1 + 0.5).toFixed(3));
+    await page.getByRole('button', { name: 'Record' }).click();
+    await expect.poll(() => page.getByTestId('field-verdict').textContent()).toBe('FAIL');
+
+    // Connection lost: the entry shows at once, is kept on the phone, and goes when the connection returns.
+    await page.getByRole('button', { name: /Next/ }).click();
+    const width2 = await decimalTarget(page);
+    await context.setOffline(true);
+    await page.getByLabel(/Measured edge width/).fill(width2.toFixed(2));
+    await page.getByRole('button', { name: 'Record' }).click();
+    await expect.poll(() => page.getByTestId('field-verdict').textContent()).toBe('PASS');
+    await expect.poll(() => page.getByRole('status').filter({ hasText: /not sent/ }).count()).toBeGreaterThan(0);
+    const kept = await page.evaluate((bridge) => JSON.parse(localStorage.getItem(`chordline.field.pending.${bridge}`) ?? '[]'), id);
+    expect(kept).toHaveLength(1);
+    expect(kept[0]).toMatchObject({ span: 1, girder: 'G1', point: 2 });
+    await context.setOffline(false);
+    await expect.poll(() => page.getByText('All sent').count(), { timeout: 40000 }).toBe(1);
+    expect(await page.evaluate((bridge) => localStorage.getItem(`chordline.field.pending.${bridge}`), id)).toBeNull();
+
+    // The server has all three, judged the same way.
+    const checks = await page.evaluate(async (bridge) => (await fetch(`/api/bridges/${bridge}/checks`)).json(), id);
+    const mine = checks.filter((c: { span: number; girder: string; point: number }) => c.span === 1 && c.girder === 'G1' && c.point <= 2);
+    expect(mine.map((c: { point: number; pass: boolean }) => [c.point, c.pass]).sort()).toEqual([
+      [0, true],
+      [1, false],
+      [2, true],
+    ]);
+
+    // Where the top of girder was not surveyed, field mode says so instead of offering a reading box.
+    await expect.poll(() => page.getByText(/not surveyed at this point/).count()).toBe(1);
+    expect(errors).toEqual([]);
+    await context.close();
+  });
+
+  it('shows crew the targets without a Record button', async () => {
+    const context = await browser.newContext(PHONE);
+    const page = await context.newPage();
+    await signIn(page, baseUrl, 'crew@example.com');
+    await openFieldMode(page);
+    expect(await page.getByRole('button', { name: 'Record' }).count()).toBe(0);
+    expect(await page.getByText(/Read only/).count()).toBe(1);
+    await context.close();
+  });
+
+  it('prints a field sheet with the caution, the revision and blank measurement columns', async () => {
+    const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+    await signIn(page, baseUrl, 'inspector@example.com');
+    await page.goto(`${baseUrl}/bridges`);
+    await page.getByRole('link', { name: 'Marlow Creek Overpass' }).first().click();
+    await page.waitForURL(/\/bridges\/\d+$/);
+    await page.getByRole('link', { name: 'Field sheet' }).click();
+    await page.waitForURL(/\/sheet$/);
+    await page.getByRole('link', { name: 'Span 1' }).click();
+    await page.waitForURL(/span=1/);
+    expect(await page.getByRole('heading', { name: /Span 1 · G1/ }).count()).toBe(1);
+    expect(await page.getByRole('heading', { name: /Span 2/ }).count()).toBe(0);
+    expect(await page.getByText(/revision\s*1/).count()).toBeGreaterThan(0);
+    await page.emulateMedia({ media: 'print' });
+    expect(await page.getByRole('note').filter({ hasText: /geometry only/i }).isVisible()).toBe(true);
+    expect(await page.getByRole('button', { name: 'Print sheet' }).isVisible()).toBe(false);
+    await page.close();
+  });
+});

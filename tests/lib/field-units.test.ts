@@ -1,0 +1,30 @@
+import { describe, expect, it } from 'vitest';
+import { deviationText, parseLength, toleranceText } from '@/components/FieldUnits';
+
+// Feet-inches arithmetic worked by hand: 4'-6 3/8" = 4 + 6.375/12 = 4.53125 ft.
+describe('field-mode length entry', () => {
+  it('reads decimal feet and feet-inches the ways a crew writes them', () => {
+    expect(parseLength('4.53', 'ft')).toBeCloseTo(4.53, 12);
+    expect(parseLength(`4'-6 3/8"`, 'ft')).toBeCloseTo(4.53125, 12);
+    expect(parseLength(`4' 6 3/8`, 'ft')).toBeCloseTo(4.53125, 12);
+    expect(parseLength('4-6-3/8', 'ft')).toBeCloseTo(4.53125, 12);
+    expect(parseLength(`4'-6.5"`, 'ft')).toBeCloseTo(4 + 6.5 / 12, 12);
+    expect(parseLength(`4'`, 'ft')).toBeCloseTo(4, 12);
+    expect(parseLength('  ', 'ft')).toBeNull();
+    expect(parseLength('-0.12', 'ft')).toBeCloseTo(-0.12, 12);
+    expect(parseLength('1,382', 'm')).toBeCloseTo(1.382, 12);
+  });
+
+  it('turns anything else into NaN instead of guessing', () => {
+    for (const bad of ['four', `4'-13"`, '4..5', `4'-6 3/8"`.replace('3/8', '3/0x')]) expect(parseLength(bad, 'ft')).toBeNaN();
+    expect(parseLength(`1'-2"`, 'm')).toBeNaN();
+  });
+
+  it('shows deviations in inches or millimetres with their sign, tolerances with ±', () => {
+    expect(deviationText(0.5, 'ft')).toBe('+6.00 in');
+    expect(deviationText(-0.001, 'ft')).toBe('−0.01 in');
+    expect(deviationText(-0.004, 'm')).toBe('−4 mm');
+    expect(toleranceText(0.25 / 12, 'ft')).toBe('±0.25 in (0.021 ft)');
+    expect(toleranceText(0.006, 'm')).toBe('±6 mm');
+  });
+});
