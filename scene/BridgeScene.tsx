@@ -143,7 +143,7 @@ export default function BridgeScene(props: BridgeSceneProps) {
       <InstancedBoxes matrices={bents.columns} color="#a8a295" roughness={0.9} metalness={0} />
       <GirderPoints positions={pickPositions} radius={0.35 * u} selected={selected} onPick={onSelect} />
       {overlays.map((o, i) => (
-        <OverlayBeams key={i} positions={o.positions} color={o.color} size={0.12 * u} />
+        <OverlayBeams key={i} positions={o.positions} color={o.color} size={0.25 * u} />
       ))}
       {desc.bents.map((b, i) => (
         <Html key={b.name + i} position={[bents.labels[i * 3], bents.labels[i * 3 + 1], bents.labels[i * 3 + 2]]} center zIndexRange={[20, 0]}>

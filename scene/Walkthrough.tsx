@@ -161,13 +161,20 @@ export default function Walkthrough() {
   const overlays: SceneOverlay[] = useMemo(() => {
     if (!step.straightedge || !straight) return [];
     const { mid, inner, error, atEdge } = straight;
-    const p = (x: number, y: number, z: number) => [x - frame.originX, sceneY(frame, z), -(y - frame.originY)];
+    // Lying on the forms: lifted by about its own thickness (true size) so it shows above them.
+    const lift = 0.2;
+    const p = (x: number, y: number, z: number) => [x - frame.originX, sceneY(frame, z) + lift, -(y - frame.originY)];
     const ex = mid.edge_x as number;
     const ey = mid.edge_y as number;
     const a = p(inner.x, inner.y, inner.bottom_of_slab);
     const b = p(mid.x, mid.y, mid.bottom_of_slab + error);
     const c = p(ex, ey, atEdge);
-    return [{ positions: new Float32Array([...a, ...b, ...b, ...c]), color: '#d98e04' }];
+    const g = p(mid.x, mid.y, mid.bottom_of_slab);
+    const f = p(ex, ey, mid.form_target as number);
+    return [
+      { positions: new Float32Array([...a, ...b, ...b, ...c]), color: '#d98e04' },
+      { positions: new Float32Array([...g, ...f]), color: '#17695d' },
+    ];
   }, [step.straightedge, straight, frame]);
 
   const body: ReactNode[] = [
@@ -235,8 +242,8 @@ export default function Walkthrough() {
       {straight ? (
         <p>
           With the deck form just 1/4 in high at the exterior girder and the next girder {ft(straight.bay)} in, the error at the edge is already{' '}
-          <strong className="tabular">{inches(straight.magnified * 12)}</strong>, and the straightedge (amber) puts the form edge at{' '}
-          <strong className="tabular">{formatLength(straight.atEdge, 'ft')}</strong> where the table says <strong className="tabular">{formatLength(straight.target, 'ft')}</strong>: off by{' '}
+          <strong className="tabular">{inches(straight.magnified * 12)}</strong>, and the straightedge (amber bar) puts the form edge at{' '}
+          <strong className="tabular">{formatLength(straight.atEdge, 'ft')}</strong> where the table says <strong className="tabular">{formatLength(straight.target, 'ft')}</strong> (green bar): off by{' '}
           <strong className="tabular">{inches(Math.abs(straight.atEdge - straight.target) * 12)}</strong>. Always go back to the girder: the buildup and the drop from girder top.
           (Elevations drawn 10×, the slab left off so the forms show.)
         </p>
