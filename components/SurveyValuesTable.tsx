@@ -40,7 +40,12 @@ export default function SurveyValuesTable({ listing }: { listing: SurveyListing 
             <tr key={`${v.girder}-${v.span}-${v.point}`} className="border-t border-concrete-100 align-top">
               <th scope="row" className="sticky left-0 bg-white px-3 py-1.5 text-left font-semibold whitespace-nowrap text-concrete-800">
                 {v.girder} · span {v.span} · pt {v.point}
-                {!v.on_current_revision ? <span className="ml-2 rounded bg-caution-100 px-1.5 py-0.5 text-xs font-semibold text-caution-700">not on revision {listing.revision}</span> : null}
+                {v.points_per_span !== listing.points_per_span ? <span className="font-normal text-concrete-600"> of {v.points_per_span}</span> : null}
+                {v.point_on_current_revision === null ? (
+                  <span className="ml-2 rounded bg-caution-100 px-1.5 py-0.5 text-xs font-semibold text-caution-700">not a girder point of revision {listing.revision}</span>
+                ) : v.point_on_current_revision !== v.point ? (
+                  <span className="ml-2 rounded bg-concrete-100 px-1.5 py-0.5 text-xs font-semibold text-concrete-700">now point {v.point_on_current_revision}</span>
+                ) : null}
               </th>
               <td className="px-3 py-1.5 text-right font-semibold">{elev(v.elevation)}</td>
               <td className="px-3 py-1.5 whitespace-nowrap text-concrete-700">

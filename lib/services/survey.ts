@@ -3,7 +3,7 @@
  * transaction, replacing earlier values of the same points while keeping them as history) and the
  * stored values that the offset table merges over the description's own `top_of_girder`.
  */
-import { Op } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
 import { z } from 'zod';
 import { Bridge, GirderSurvey, SurveyImport, User } from '@/models';
 import { db } from '@/lib/db/connection';
@@ -56,17 +56,78 @@ export type SurveyValue = {
   elevation: number;
   imported_by: string | null;
   imported_at: string;
-  /** False when the point no longer exists on the current revision (it is then left out of the table). */
-  on_current_revision: boolean;
+  /** Points per span of the revision the value was surveyed on: `point` counts in these divisions. */
+  points_per_span: number;
+  /**
+   * The same place as a point of the current revision's division, or null when it is no longer a
+   * girder point there (the value is then left out of the table).
+   */
+  point_on_current_revision: number | null;
   /** Earlier values of the same point, newest first. */
   history: { elevation: number; imported_by: string | null; imported_at: string; replaced_at: string }[];
 };
 
 export type SurveyImportSummary = { id: number; filename: string; revision: number; rows: number; replaced: number; imported_by: string | null; imported_at: string };
 
-export type SurveyListing = { bridge_id: number; revision: number; units: 'ft' | 'm'; values: SurveyValue[]; imports: SurveyImportSummary[] };
+export type SurveyListing = {
+  bridge_id: number;
+  revision: number;
+  units: 'ft' | 'm';
+  /** Points per span of the current revision. */
+  points_per_span: number;
+  values: SurveyValue[];
+  imports: SurveyImportSummary[];
+};
 
 const keyOf = (girder: string, span: number, point: number) => `${girder}\u0000${span}\u0000${point}`;
+
+/**
+ * Where on the girder a surveyed point lies, independent of how the span is divided: girder, span and
+ * the fraction k/n along the span. A value imported at 20th point 10 is the same place as tenth point 5.
+ */
+const placeOf = (girder: string, span: number, point: number, divisions: number) => `${girder}\u0000${span}\u0000${(point / divisions).toFixed(9)}`;
+
+/** Point number of fraction k/n on a span divided into `divisions`, or null when it falls between points. */
+function pointAt(point: number, pointsAtImport: number, divisions: number): number | null {
+  const k = (point * divisions) / pointsAtImport;
+  const r = Math.round(k);
+  return Math.abs(k - r) < 1e-9 ? r : null;
+}
+
+/** A stored value with the points per span of the revision its import was checked against. */
+type Placed = { row: GirderSurvey; divisions: number };
+
+const divisionsCache = new Map<string, number>();
+
+/** Points per span of a stored revision (revisions never change, so the answer is cached). */
+async function divisionsOfRevision(bridgeId: number, revision: number): Promise<number> {
+  const key = `${bridgeId}:${revision}`;
+  let n = divisionsCache.get(key);
+  if (n === undefined) {
+    n = (await getRevisionDescription(bridgeId, revision)).points_per_span ?? DEFAULT_POINTS_PER_SPAN;
+    if (divisionsCache.size > 500) divisionsCache.clear();
+    divisionsCache.set(key, n);
+  }
+  return n;
+}
+
+/** Rows of a bridge (all, or only the current ones) with the division each was surveyed on, oldest first. */
+async function placedRows(bridgeId: number, onlyCurrent: boolean, transaction?: Transaction): Promise<Placed[]> {
+  const rows = await GirderSurvey.findAll({
+    where: onlyCurrent ? { bridgeId, replacedAt: { [Op.is]: null } } : { bridgeId },
+    include: [{ model: User, as: 'user', attributes: ['name'] }],
+    order: [['id', 'ASC']],
+    transaction,
+  });
+  const imports = await SurveyImport.findAll({ where: { bridgeId }, attributes: ['id', 'revision'], transaction });
+  const revisionOf = new Map(imports.map((i) => [i.id, i.revision]));
+  const out: Placed[] = [];
+  for (const row of rows) {
+    const revision = revisionOf.get(row.importId);
+    out.push({ row, divisions: revision === undefined ? DEFAULT_POINTS_PER_SPAN : await divisionsOfRevision(bridgeId, revision) });
+  }
+  return out;
+}
 
 async function findBridge(id: string | number): Promise<Bridge> {
   await db();
@@ -89,20 +150,19 @@ function fits(framing: SurveyFraming, v: { girder: string; span: number; point: 
   return framing.girders.includes(v.girder) && v.span >= 1 && v.span <= framing.spanCount && v.point >= 0 && v.point <= framing.pointsPerSpan;
 }
 
-async function currentRows(bridgeId: number): Promise<GirderSurvey[]> {
-  return GirderSurvey.findAll({ where: { bridgeId, replacedAt: { [Op.is]: null } }, order: [['id', 'ASC']] });
-}
-
-async function check(bridge: Bridge, csv: string): Promise<{ report: SurveyCsvReport; preview: SurveyPreview }> {
+async function check(bridge: Bridge, csv: string): Promise<{ report: SurveyCsvReport; preview: SurveyPreview; divisions: number }> {
   const description = await getRevisionDescription(bridge.id, bridge.currentRevision);
-  const report = parseSurveyCsv(csv, framingOf(description));
-  const stored = new Map((await currentRows(bridge.id)).map((r) => [keyOf(r.girder, r.span, r.point), r.elevation]));
+  const framing = framingOf(description);
+  const divisions = framing.pointsPerSpan;
+  const report = parseSurveyCsv(csv, framing);
+  const stored = new Map((await placedRows(bridge.id, true)).map(({ row: r, divisions: n }) => [placeOf(r.girder, r.span, r.point, n), r.elevation]));
   const rows: SurveyPreviewRow[] = report.rows.map((r) => ({
     ...r,
-    replaces: r.span !== null && r.point !== null ? (stored.get(keyOf(r.girder, r.span, r.point)) ?? null) : null,
+    replaces: r.span !== null && r.point !== null ? (stored.get(placeOf(r.girder, r.span, r.point, divisions)) ?? null) : null,
   }));
   return {
     report,
+    divisions,
     preview: {
       bridge_id: bridge.id,
       revision: bridge.currentRevision,
@@ -139,7 +199,7 @@ export async function commitSurvey(user: SessionUser, id: string, input: SurveyU
   if (input.revision !== undefined && input.revision !== bridge.currentRevision) {
     throw new HttpError(409, `The rows were checked against revision ${input.revision}, but the bridge is now at revision ${bridge.currentRevision}. Check the file again.`);
   }
-  const { report, preview } = await check(bridge, input.csv);
+  const { report, preview, divisions } = await check(bridge, input.csv);
   if (preview.summary.bad > 0 || preview.file_problems.length > 0 || preview.rows.length === 0) {
     const count = preview.summary.bad;
     const message =
@@ -155,14 +215,13 @@ export async function commitSurvey(user: SessionUser, id: string, input: SurveyU
       { bridgeId: bridge.id, userId: user.id, filename: input.filename, revision: bridge.currentRevision, rowCount: report.rows.length, replacedCount: 0 },
       { transaction },
     );
-    let replaced = 0;
-    for (const r of report.rows) {
-      const [count] = await GirderSurvey.update(
-        { replacedAt: now },
-        { where: { bridgeId: bridge.id, girder: r.girder, span: r.span!, point: r.point!, replacedAt: { [Op.is]: null } }, transaction },
-      );
-      replaced += count > 0 ? 1 : 0;
+    // Replace the current value at the same place on the girder, even when it was surveyed on another division of the span.
+    const incoming = new Set(report.rows.map((r) => placeOf(r.girder, r.span!, r.point!, divisions)));
+    const superseded = (await placedRows(bridge.id, true, transaction)).filter(({ row: r, divisions: n }) => incoming.has(placeOf(r.girder, r.span, r.point, n)));
+    if (superseded.length > 0) {
+      await GirderSurvey.update({ replacedAt: now }, { where: { id: superseded.map((p) => p.row.id) }, transaction });
     }
+    const replaced = new Set(superseded.map(({ row: r, divisions: n }) => placeOf(r.girder, r.span, r.point, n))).size;
     await GirderSurvey.bulkCreate(
       report.rows.map((r) => ({ bridgeId: bridge.id, importId: record.id, girder: r.girder, span: r.span!, point: r.point!, elevation: r.elevation!, userId: user.id })),
       { transaction },
@@ -185,26 +244,28 @@ export async function commitSurvey(user: SessionUser, id: string, input: SurveyU
 export async function listSurvey(id: string | number): Promise<SurveyListing> {
   const bridge = await findBridge(id);
   const framing = framingOf(await getRevisionDescription(bridge.id, bridge.currentRevision));
-  const [rows, imports] = await Promise.all([
-    GirderSurvey.findAll({ where: { bridgeId: bridge.id }, include: [{ model: User, as: 'user', attributes: ['name'] }], order: [['id', 'DESC']] }),
+  const [placed, imports] = await Promise.all([
+    placedRows(bridge.id, false),
     SurveyImport.findAll({ where: { bridgeId: bridge.id }, include: [{ model: User, as: 'user', attributes: ['name'] }], order: [['id', 'DESC']] }),
   ]);
   const nameOf = (r: GirderSurvey | SurveyImport) => (r as unknown as { user?: User | null }).user?.name ?? null;
   const values = new Map<string, SurveyValue>();
-  for (const r of rows.filter((x) => x.replacedAt === null)) {
-    values.set(keyOf(r.girder, r.span, r.point), {
+  for (const { row: r, divisions } of placed.filter((p) => p.row.replacedAt === null)) {
+    const now = pointAt(r.point, divisions, framing.pointsPerSpan);
+    values.set(placeOf(r.girder, r.span, r.point, divisions), {
       girder: r.girder,
       span: r.span,
       point: r.point,
+      points_per_span: divisions,
+      point_on_current_revision: now !== null && fits(framing, { girder: r.girder, span: r.span, point: now }) ? now : null,
       elevation: r.elevation,
       imported_by: nameOf(r),
       imported_at: r.createdAt.toISOString(),
-      on_current_revision: fits(framing, r),
       history: [],
     });
   }
-  for (const r of rows.filter((x) => x.replacedAt !== null)) {
-    values.get(keyOf(r.girder, r.span, r.point))?.history.push({
+  for (const { row: r, divisions } of [...placed].reverse().filter((p) => p.row.replacedAt !== null)) {
+    values.get(placeOf(r.girder, r.span, r.point, divisions))?.history.push({
       elevation: r.elevation,
       imported_by: nameOf(r),
       imported_at: r.createdAt.toISOString(),
@@ -213,12 +274,17 @@ export async function listSurvey(id: string | number): Promise<SurveyListing> {
   }
   const girderOrder = new Map(framing.girders.map((g, i) => [g, i]));
   const sorted = [...values.values()].sort(
-    (a, b) => a.span - b.span || (girderOrder.get(a.girder) ?? 1e9) - (girderOrder.get(b.girder) ?? 1e9) || a.girder.localeCompare(b.girder) || a.point - b.point,
+    (a, b) =>
+      a.span - b.span ||
+      (girderOrder.get(a.girder) ?? 1e9) - (girderOrder.get(b.girder) ?? 1e9) ||
+      a.girder.localeCompare(b.girder) ||
+      a.point / a.points_per_span - b.point / b.points_per_span,
   );
   return {
     bridge_id: bridge.id,
     revision: bridge.currentRevision,
     units: bridge.units,
+    points_per_span: framing.pointsPerSpan,
     values: sorted,
     imports: imports.map((i) => ({
       id: i.id,
@@ -232,27 +298,37 @@ export async function listSurvey(id: string | number): Promise<SurveyListing> {
   };
 }
 
-type SurveyEntry = { girder: string; span: number; point: number; elevation: number };
+/** A stored value and the points per span it was surveyed on. */
+export type SurveyEntry = { girder: string; span: number; point: number; pointsPerSpan: number; elevation: number };
 
 /**
- * The current surveyed value of every point of a bridge, and a stamp that changes whenever an import
- * is committed (for cache keys).
+ * The current surveyed value of every point of a bridge, oldest first, and a stamp that changes
+ * whenever an import is committed (for cache keys).
  */
 export async function storedSurvey(bridgeId: number): Promise<{ stamp: string; entries: SurveyEntry[] }> {
-  const rows = await currentRows(bridgeId);
-  const latest = rows.reduce((m, r) => Math.max(m, r.importId), 0);
-  return { stamp: `${latest}:${rows.length}`, entries: rows.map((r) => ({ girder: r.girder, span: r.span, point: r.point, elevation: r.elevation })) };
+  const placed = await placedRows(bridgeId, true);
+  const latest = placed.reduce((m, p) => Math.max(m, p.row.importId), 0);
+  return {
+    stamp: `${latest}:${placed.length}`,
+    entries: placed.map(({ row: r, divisions }) => ({ girder: r.girder, span: r.span, point: r.point, pointsPerSpan: divisions, elevation: r.elevation })),
+  };
 }
 
 /**
  * The description with the stored survey merged over its own `top_of_girder` (the survey wins per
- * point). Points of girders or spans the description no longer has are left out.
+ * point). Each value goes to the girder point at the same fraction of the span (20th point 10 is tenth
+ * point 5); values that fall between the description's points, or on girders or spans it no longer
+ * has, are left out. A later entry wins over an earlier one at the same point.
  */
 export function withSurvey(description: BridgeDescription, entries: SurveyEntry[]): BridgeDescription {
   const framing = framingOf(description);
-  const usable = entries.filter((e) => fits(framing, e));
-  if (usable.length === 0) return description;
-  const surveyed = new Set(usable.map((e) => keyOf(e.girder, e.span, e.point)));
-  const own = (description.top_of_girder ?? []).filter((t) => !surveyed.has(keyOf(t.girder, t.span, t.point)));
-  return { ...description, top_of_girder: [...own, ...usable] };
+  const byPoint = new Map<string, { girder: string; span: number; point: number; elevation: number }>();
+  for (const e of entries) {
+    const point = pointAt(e.point, e.pointsPerSpan, framing.pointsPerSpan);
+    if (point === null || !fits(framing, { girder: e.girder, span: e.span, point })) continue;
+    byPoint.set(keyOf(e.girder, e.span, point), { girder: e.girder, span: e.span, point, elevation: e.elevation });
+  }
+  if (byPoint.size === 0) return description;
+  const own = (description.top_of_girder ?? []).filter((t) => !byPoint.has(keyOf(t.girder, t.span, t.point)));
+  return { ...description, top_of_girder: [...own, ...byPoint.values()] };
 }

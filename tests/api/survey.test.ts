@@ -128,6 +128,48 @@ describe('top-of-girder survey import', () => {
     expect(list.text).not.toMatch(/password/i);
   });
 
+  it('after the span is divided differently, a stored value follows its place on the girder, or drops out between points', async () => {
+    const id = await newBridge('Survey and a newer revision');
+    const first = await call(survey.POST, { method: 'POST', cookie: people.inspector.cookie, params: { id }, body: { csv: 'G1,3,20,254.9\nG1,3,10,254.6\nG1,3,3,254.2' } });
+    expect(first.status).toBe(201);
+    const current = await getBridge(id);
+    // Tenth points instead of 20th points: 20th point 20 is tenth point 10 (the span's end), 20th point 10
+    // is tenth point 5 (midspan), and 20th point 3 lies between tenth points 1 and 2.
+    const rev = await call(revisions.POST, {
+      method: 'POST',
+      cookie: people.engineer.cookie,
+      params: { id },
+      body: {
+        base_revision: current.revision,
+        description: {
+          ...current.description,
+          points_per_span: 10,
+          top_of_girder: (current.description.top_of_girder ?? []).filter((t) => t.point <= 10),
+        },
+        note: 'tenth points',
+      },
+    });
+    expect(rev.status).toBe(201);
+    const rows = await table(id);
+    expect(rows.some((p) => p.point > 10)).toBe(false);
+    expect(at(rows, 'G1', 3, 10).top_of_girder).toBeCloseTo(254.9, 9);
+    expect(at(rows, 'G1', 3, 5).top_of_girder).toBeCloseTo(254.6, 9);
+    expect(at(rows, 'G1', 3, 1).top_of_girder).toBeNull();
+    expect(at(rows, 'G1', 3, 2).top_of_girder).toBeNull();
+    const list = await call(survey.GET, { cookie: people.crew.cookie, params: { id } });
+    const now = new Map((list.json.values as { point: number; point_on_current_revision: number | null }[]).map((v) => [v.point, v.point_on_current_revision]));
+    expect([now.get(20), now.get(10), now.get(3)]).toEqual([10, 5, null]);
+
+    // A new import at tenth point 5 replaces the value surveyed as 20th point 10: the same place.
+    const again = await call(survey.POST, { method: 'POST', cookie: people.inspector.cookie, params: { id }, body: { csv: 'G1,3,5,254.65' } });
+    expect(again.json.replaced).toBe(1);
+    expect(at(await table(id), 'G1', 3, 5).top_of_girder).toBeCloseTo(254.65, 9);
+    const relisted = await call(survey.GET, { cookie: people.crew.cookie, params: { id } });
+    const mid = (relisted.json.values as { point: number; points_per_span: number; history: { elevation: number }[] }[]).find((v) => v.point === 5)!;
+    expect(mid.points_per_span).toBe(10);
+    expect(mid.history.map((h) => h.elevation)).toEqual([254.6]);
+  });
+
   it('refuses crew, a stale revision and a body without csv, writing nothing', async () => {
     const id = await newBridge('Survey refusals');
     const crew = await call(survey.POST, { method: 'POST', cookie: people.crew.cookie, params: { id }, body: { csv: 'G1,1,1,253' } });
