@@ -1,0 +1,7 @@
+'use client';
+
+import ErrorPanel from '@/components/ErrorPanel';
+
+export default function EditError({ error, retry }: { error: unknown; retry: () => void }) {
+  return <ErrorPanel error={error} retry={retry} what="the geometry editor" />;
+}

@@ -1,0 +1,68 @@
+'use client';
+
+import EditorField from './EditorField';
+import EditorOffsetField from './EditorOffsetField';
+import EditorRow from './EditorRow';
+import EditorSection from './EditorSection';
+import { messagesAt, messagesUnder } from '@/app/(app)/bridges/[id]/edit/check-draft';
+import { moveItem, newKey, type GirderDraft, type OffsetDraft } from '@/app/(app)/bridges/[id]/edit/draft';
+import type { SectionProps } from '@/app/(app)/bridges/[id]/edit/section-props';
+
+/** Girders: a name, chord or curved layout, and the offset where the girder crosses each bent line. */
+export default function EditorGirderSection({ draft, update, check }: SectionProps) {
+  const u = draft.units;
+  const set = (girders: GirderDraft[]) => update((d) => ({ ...d, girders }));
+  const setRow = (i: number, patch: Partial<GirderDraft>) => set(draft.girders.map((g, j) => (j === i ? { ...g, ...patch } : g)));
+  const setOffset = (i: number, k: number, v: OffsetDraft) => setRow(i, { offsets: draft.girders[i].offsets.map((o, j) => (j === k ? v : o)) });
+  return (
+    <EditorSection
+      id="girders"
+      title="Girders"
+      intro="Offsets are measured square to the alignment where the girder crosses each bent line. Chord girders run straight from bent to bent; curved girders stay concentric with the alignment."
+      messages={messagesAt(check, 'girders')}
+      addLabel="Add girder"
+      onAdd={() => set([...draft.girders, { key: newKey('girder'), name: `G${draft.girders.length + 1}`, layout: draft.girders[0]?.layout ?? 'chord', offsets: draft.bents.map(() => ({ magnitude: '0', side: 'RT' as const })), rest: {} }])}
+    >
+      <ol className="space-y-2">
+        {draft.girders.map((g, i) => {
+          const p = `girders.${i}`;
+          const shown = [`${p}.name`, `${p}.layout`, ...g.offsets.map((_, k) => `${p}.offsets.${k}`)];
+          return (
+            <EditorRow
+              key={g.key}
+              title={`Girder ${g.name.trim() || i + 1}`}
+              index={i}
+              count={draft.girders.length}
+              minRows={1}
+              onMove={(to) => set(moveItem(draft.girders, i, to))}
+              onRemove={() => set(draft.girders.filter((_, j) => j !== i))}
+              messages={messagesUnder(check, p, shown)}
+            >
+              <EditorField label="Name" value={g.name} onChange={(x) => setRow(i, { name: x })} inputMode="text" width="w-24" messages={messagesAt(check, `${p}.name`)} />
+              <div className="w-28">
+                <label className="block text-xs font-semibold text-concrete-600" htmlFor={`${g.key}-layout`}>
+                  Layout
+                </label>
+                <select id={`${g.key}-layout`} className="field-input mt-1 py-1.5" value={g.layout} onChange={(e) => setRow(i, { layout: e.target.value as 'chord' | 'curved' })}>
+                  <option value="chord">Chord</option>
+                  <option value="curved">Curved</option>
+                </select>
+              </div>
+              {g.offsets.map((o, k) => (
+                <EditorOffsetField
+                  key={draft.bents[k]?.key ?? k}
+                  label={`Offset at ${draft.bents[k]?.name.trim() || `bent ${k + 1}`}`}
+                  value={o}
+                  onChange={(v) => setOffset(i, k, v)}
+                  unit={u}
+                  width="w-40"
+                  messages={messagesAt(check, `${p}.offsets.${k}`)}
+                />
+              ))}
+            </EditorRow>
+          );
+        })}
+      </ol>
+    </EditorSection>
+  );
+}
