@@ -61,7 +61,7 @@ export default function CheckHistoryTable({ checks, units, currentRevision }: { 
                   <>
                     {fieldLength(c.measured_drop_from_girder_top, units)} / {fieldLength(c.computed_drop_from_girder_top, units)}
                     <div className="text-xs">
-                      {deviationText(c.reading_deviation, units)}
+                      {deviationText(c.reading_deviation, units, 'reading')}
                       <Verdict pass={c.reading_pass} />
                     </div>
                   </>

@@ -1,5 +1,5 @@
 import { dateTimeText } from './station-text';
-import { deviationText, fieldLength, toleranceText, type Units } from './FieldUnits';
+import { deviationText, fieldLength, tapeLength, toleranceText, type Units } from './FieldUnits';
 
 /** What the screen knows about a bracket's latest measurement: from the server, or worked out on the phone. */
 export type Verdict = {
@@ -17,14 +17,14 @@ export type Verdict = {
   revision: number | null;
 };
 
-function Line({ label, measured, deviation, pass, tolerance, units }: { label: string; measured: number; deviation: number | null; pass: boolean | null; tolerance: number; units: Units }) {
+function Line({ kind, measured, deviation, pass, tolerance, units }: { kind: 'width' | 'reading'; measured: number; deviation: number | null; pass: boolean | null; tolerance: number; units: Units }) {
   return (
     <div className="flex items-baseline justify-between gap-2 border-t border-black/10 py-1 first:border-t-0">
       <span className="text-sm font-semibold">
-        {label} {fieldLength(measured, units)}
+        {kind === 'width' ? `Width ${tapeLength(measured, units)}` : `Reading ${fieldLength(measured, units)}`}
       </span>
       <span className="tabular text-2xl font-bold">
-        {deviationText(deviation, units)} <span className="text-sm font-semibold">{pass ? 'OK' : `over ${toleranceText(tolerance, units)}`}</span>
+        {deviationText(deviation, units, kind)} <span className="text-sm font-semibold">{pass ? 'OK' : `over ${toleranceText(tolerance, units, kind)}`}</span>
       </span>
     </div>
   );
@@ -47,7 +47,7 @@ export default function FieldResult({
   if (!verdict) {
     return (
       <p className="mt-4 rounded-lg border border-dashed border-concrete-300 p-3 text-sm text-concrete-600" data-testid="field-result">
-        Not checked yet. Tolerance {toleranceText(widthTolerance, units)} on the width, {toleranceText(readingTolerance, units)} on the reading.
+        Not checked yet. Tolerance {toleranceText(widthTolerance, units)} on the width, {toleranceText(readingTolerance, units, 'reading')} on the reading.
       </p>
     );
   }
@@ -65,10 +65,10 @@ export default function FieldResult({
         {verdict.pass ? 'PASS' : 'FAIL'}
       </p>
       {verdict.measuredWidth !== null ? (
-        <Line label="Width" measured={verdict.measuredWidth} deviation={verdict.widthDeviation} pass={verdict.widthPass} tolerance={widthTolerance} units={units} />
+        <Line kind="width" measured={verdict.measuredWidth} deviation={verdict.widthDeviation} pass={verdict.widthPass} tolerance={widthTolerance} units={units} />
       ) : null}
       {verdict.measuredReading !== null ? (
-        <Line label="Reading" measured={verdict.measuredReading} deviation={verdict.readingDeviation} pass={verdict.readingPass} tolerance={readingTolerance} units={units} />
+        <Line kind="reading" measured={verdict.measuredReading} deviation={verdict.readingDeviation} pass={verdict.readingPass} tolerance={readingTolerance} units={units} />
       ) : null}
       <p className={`mt-1 text-xs font-semibold ${verdict.state === 'saved' ? 'text-concrete-700' : 'text-caution-700'}`}>{status}</p>
       {old ? <p className="mt-1 text-xs font-semibold text-caution-700">Checked against revision {verdict.revision}; the geometry is now at revision {currentRevision}. Check again.</p> : null}

@@ -17,23 +17,25 @@ export function tapeLength(v: number, units: Units): string {
 }
 
 /**
- * A deviation (measured − computed) with its sign, in the unit a person checks it in: inches to
- * 1/16" on a feet bridge ("+0.20 in") and millimetres on a metric one ("−4 mm").
+ * A deviation (measured − computed) with its sign, in the unit a person checks it in: an edge width in
+ * inches ("+0.20 in") and a level-bar reading in feet to 0.001 ft ("+0.004 ft") on a feet bridge; both in
+ * millimetres on a metric one ("−4 mm").
  */
-export function deviationText(v: number | null | undefined, units: Units): string {
+export function deviationText(v: number | null | undefined, units: Units, kind: 'width' | 'reading' = 'width'): string {
   if (v === null || v === undefined || !Number.isFinite(v)) return '—';
   const sign = v > 0 ? '+' : v < 0 ? '−' : '±';
   if (units === 'm') return `${sign}${Math.abs(v * 1000).toFixed(0)} mm`;
+  if (kind === 'reading') return `${sign}${Math.abs(v).toFixed(3)} ft`;
   return `${sign}${Math.abs(v * 12).toFixed(2)} in`;
 }
 
-/** A tolerance as "±1/4 in (0.021 ft)" / "±6 mm". */
-export function toleranceText(v: number, units: Units): string {
+/** A tolerance as "±0.25 in (0.021 ft)" for a width, "±0.010 ft" for a reading, "±6 mm" in metric. */
+export function toleranceText(v: number, units: Units, kind: 'width' | 'reading' = 'width'): string {
   if (units === 'm') return `±${(v * 1000).toFixed(1).replace(/\.0$/, '')} mm`;
+  if (kind === 'reading') return `±${v.toFixed(3)} ft`;
   const inches = v * 12;
   return `±${inches.toFixed(3).replace(/0+$/, '').replace(/\.$/, '')} in (${v.toFixed(3)} ft)`;
 }
-
 /**
  * Reads a typed measurement in the bridge's units. Feet bridges take decimal feet ("4.53") or
  * feet-inches ("4'-6 3/8\"", "4' 6.5\"", "4-6-3/8"); metric bridges take metres ("1.382"). Returns

@@ -101,7 +101,7 @@ function cell(text: string): string {
 }
 
 /**
- * The field sheet as CSV: two "# " lines (bridge, revision, base rod; the caution), then a header row
+ * The field sheet as CSV: two "# " lines, each one cell (bridge, revision, base rod; the caution), then a header row
  * and one row per bracket. Lengths in display units (0.01 ft or 0.001 m; widths also in feet-inches
  * to 1/8" for feet bridges); the measured columns are left blank for the field.
  */
@@ -125,9 +125,10 @@ export function fieldSheetCsv(sheet: FieldSheet): string {
     'revision',
   ];
   const opt = (v: number | null) => (v === null ? '' : decimal(v, u));
+  // The two leading lines are single cells (quoted when they hold commas) so spreadsheets keep them whole.
   const lines = [
-    `# Chordline field sheet: ${sheet.bridge.name.replace(/[\r\n]+/g, ' ')}; revision ${sheet.revision}; base rod ${decimal(sheet.base_rod_length, u)} ${u}${sheet.span ? `; span ${sheet.span}` : ''}`,
-    `# Caution: ${sheet.caution}`,
+    cell(`# Chordline field sheet: ${sheet.bridge.name.replace(/[\r\n]+/g, ' ')}; revision ${sheet.revision}; base rod ${decimal(sheet.base_rod_length, u)} ${u}${sheet.span ? `; span ${sheet.span}` : ''}`),
+    cell(`# Caution: ${sheet.caution}`),
     header.join(','),
   ];
   for (const g of sheet.groups) {

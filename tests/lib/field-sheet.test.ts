@@ -86,8 +86,9 @@ describe('field sheet', () => {
   it('exports CSV: revision and caution lines, a header, one row per bracket, blank measurement columns', () => {
     const csv = fieldSheetCsv(sheet(1));
     const lines = csv.trimEnd().split('\n');
-    expect(lines[0]).toMatch(/^# Chordline field sheet: .*revision 3; base rod 0\.50 ft; span 1$/);
-    expect(lines[1]).toMatch(/^# Caution: Geometry only\./);
+    // Comment lines are one quoted cell each: the bridge name's comma and quotes do not split them.
+    expect(lines[0]).toBe('"# Chordline field sheet: Sheet, ""quoted"" bridge; revision 3; base rod 0.50 ft; span 1"');
+    expect(lines[1]).toMatch(/^"# Caution: Geometry only\..*"$/);
     const header = lines[2].split(',');
     expect(header).toContain('edge_width_ft_in');
     expect(header).toContain('girder_rod_ft');

@@ -26,5 +26,7 @@ describe('field-mode length entry', () => {
     expect(deviationText(-0.004, 'm')).toBe('−4 mm');
     expect(toleranceText(0.25 / 12, 'ft')).toBe('±0.25 in (0.021 ft)');
     expect(toleranceText(0.006, 'm')).toBe('±6 mm');
+    expect(deviationText(0.004, 'ft', 'reading')).toBe('+0.004 ft');
+    expect(toleranceText(0.01, 'ft', 'reading')).toBe('±0.010 ft');
   });
 });
