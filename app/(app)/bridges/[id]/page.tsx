@@ -67,6 +67,14 @@ export default async function BridgePage({ params }: { params: Params }) {
               Top-of-girder survey
             </Link>
           ) : null}
+          {roleAllows(user.role, ['engineer']) ? (
+            <Link href={`/bridges/${bridge.id}/edit`} className="btn-secondary">
+              Edit geometry
+            </Link>
+          ) : null}
+          <Link href={`/bridges/${bridge.id}/history`} className="btn-secondary">
+            History
+          </Link>
           {roleAllows(user.role, ['engineer']) ? <RenameBridgeForm bridgeId={bridge.id} name={bridge.name} /> : null}
           {user.role === 'admin' ? <DeleteBridgeButton bridgeId={bridge.id} name={bridge.name} /> : null}
         </div>

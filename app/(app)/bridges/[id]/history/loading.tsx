@@ -1,0 +1,5 @@
+import LoadingPanel from '@/components/LoadingPanel';
+
+export default function Loading() {
+  return <LoadingPanel what="the revision history" />;
+}
