@@ -36,7 +36,7 @@ export default function OffsetSortHeader({
           align === 'right' ? 'justify-end text-right' : 'justify-start text-left'
         } ${active ? 'text-brand-800' : 'text-concrete-600'}`}
       >
-        <span className="max-w-28 leading-tight">
+        <span className="max-w-32 leading-tight">
           {label}
           {unit ? <span className="font-normal"> ({unit})</span> : null}
         </span>

@@ -3,7 +3,8 @@ import os from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
-import { formatFeet, formatFeetInches } from '@/lib/geometry/format';
+import { demoBridges } from '@/lib/demo/bridges';
+import { formatFeet, formatFeetInches, formatMetres } from '@/lib/geometry/format';
 import { launchChromium, signIn, trackPageErrors } from './browser';
 
 const baseUrl = inject('baseUrl');
@@ -101,6 +102,29 @@ describe('offset tables in a real browser', () => {
       expect(text).toBe(direct);
     }
     await context.close();
+  });
+
+  it('a metric bridge always shows metres and downloads the metric CSV', async () => {
+    const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+    const errors = trackPageErrors(page);
+    await signIn(page, baseUrl, 'engineer@example.com');
+    // The demo deck's numbers read as metres: an invented metric bridge of the same shape.
+    const description = { ...demoBridges[0], units: 'm', deck: { ...demoBridges[0].deck, form_settlement: 0.005 }, top_of_girder: [] };
+    const created = await page.evaluate(
+      async (body) => (await fetch('/api/bridges', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) })).json(),
+      { name: `Metric browser bridge ${Date.now()}`, description },
+    );
+    await page.goto(`${baseUrl}/bridges/${created.id}/offsets`);
+    const name = /span 1, left overhang/i;
+    await page.getByRole('table', { name }).waitFor();
+    expect(await page.getByRole('radio').count()).toBe(0);
+    expect(await page.getByText(/this bridge is metric/i).count()).toBe(1);
+    const table = await page.evaluate(async (u) => (await fetch(u)).json(), `/api/bridges/${created.id}/offsets`);
+    const left1 = (table.points as Point[]).filter((p) => p.span === 1 && p.side === 'left').sort((a, b) => a.point - b.point);
+    expect(await column(page, name, /edge width \(m\)/i)).toEqual(left1.map((p) => formatMetres(p.edge_width!)));
+    expect(await page.getByRole('link', { name: /download csv/i }).getAttribute('href')).toBe(`/api/bridges/${created.id}/offsets.csv?style=metric`);
+    expect(errors).toEqual([]);
+    await page.close();
   });
 
   it('imports a top-of-girder survey: bad rows are reported and stored nowhere, a good file changes the buildup', async () => {
