@@ -43,7 +43,7 @@ const STEPS: Step[] = [
   { title: 'Why the forms kink at every bent', view: 'edge', exaggeration: 1 },
   { title: 'Measure from a string line, not the girder', view: 'string', exaggeration: 1, sweep: true, noDeck: true },
   { title: 'Why absolute elevations drift with the sun', view: 'side', exaggeration: 1, thermal: true },
-  { title: 'Never extend the deck forms with a straightedge', view: 'section', exaggeration: 10, straightedge: true, noDeck: true },
+  { title: 'Never extend the deck forms with a straightedge', view: 'section', exaggeration: 5, straightedge: true, noDeck: true },
 ];
 
 /** Drawn-size factors for effects too small to see true size. */
@@ -245,7 +245,7 @@ export default function Walkthrough() {
           <strong className="tabular">{inches(straight.magnified * 12)}</strong>, and the straightedge (amber bar) puts the form edge at{' '}
           <strong className="tabular">{formatLength(straight.atEdge, 'ft')}</strong> where the table says <strong className="tabular">{formatLength(straight.target, 'ft')}</strong> (green bar): off by{' '}
           <strong className="tabular">{inches(Math.abs(straight.atEdge - straight.target) * 12)}</strong>. Always go back to the girder: the buildup and the drop from girder top.
-          (Elevations drawn 10×, the slab left off so the forms show.)
+          (Elevations drawn 5×, the slab left off so the forms show.)
         </p>
       ) : null}
     </>,

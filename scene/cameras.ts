@@ -160,7 +160,7 @@ export function cameraPose(
       const oz = e[2] - g[2];
       const ol = Math.hypot(ox, oz) || 1;
       return {
-        position: [target[0] + (bx / bl) * 13 * u + (ox / ol) * 3 * u, target[1] + 1.5 * u, target[2] + (bz / bl) * 13 * u + (oz / ol) * 3 * u],
+        position: [target[0] + (bx / bl) * 9 * u + (ox / ol) * 7 * u, target[1] + 3 * u, target[2] + (bz / bl) * 9 * u + (oz / ol) * 7 * u],
         target,
       };
     }
