@@ -4,7 +4,7 @@ import type { DisplayStyle } from '@/lib/geometry/format';
 import type { SpanSummary } from '@/lib/geometry/types';
 import ChartStrip, { type ChartBent, type ChartSeries } from './ChartStrip';
 import type { OffsetPointRow } from './offset-table-types';
-import { lengthCell, lengthUnit, type Units } from './OffsetDisplay';
+import { lengthWithUnit, type Units } from './OffsetDisplay';
 import { stationText } from './station-text';
 
 // Okabe & Ito, "Color Universal Design" (2008): blue and vermillion stay apart for every common
@@ -60,9 +60,8 @@ export default function ChartOverhangStrips({
   units: Units;
   style: DisplayStyle;
 }) {
-  const unit = lengthUnit(units, style);
   const axisUnit = units;
-  const fmt = (v: number) => `${lengthCell(v, units, style)} ${unit}`;
+  const fmt = (v: number) => lengthWithUnit(v, units, style);
   const tick = (v: number) => (units === 'm' ? v.toFixed(2) : v.toFixed(2).replace(/\.?0+$/, '') || '0');
   const where = (p: OffsetPointRow) => `span ${p.span} point ${p.point}, station ${stationText(p.station, units)}`;
   const stationTick = (x: number) => stationText(x, units).replace(/\.0+$/, '');
@@ -89,6 +88,7 @@ export default function ChartOverhangStrips({
         formatX={stationTick}
         formatY={tick}
         invertY
+        markLabel="Where the edge width changes fastest in the span"
       />
     </div>
   );

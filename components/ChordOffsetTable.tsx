@@ -3,7 +3,7 @@
 import { useMemo, useState } from 'react';
 import type { DisplayStyle } from '@/lib/geometry/format';
 import type { ChordOffsetSetRow } from './offset-table-types';
-import { lengthCell, lengthUnit, type Units } from './OffsetDisplay';
+import { lengthCell, lengthUnit, lengthWithUnit, type Units } from './OffsetDisplay';
 import OffsetSortHeader, { type SortDirection } from './OffsetSortHeader';
 
 type Key = 'i' | 'distance' | 'offset';
@@ -22,7 +22,7 @@ export default function ChordOffsetTable({ set, units, style }: { set: ChordOffs
     <div className="card overflow-x-auto print:overflow-visible">
       <table className="w-full text-sm">
         <caption className="border-b border-concrete-200 bg-concrete-100 px-4 py-2 text-left font-bold text-concrete-800">
-          Span {set.span}, {set.side} edge chord: {lengthCell(set.chord_length, units, style)} {unit} in {set.spaces} spaces
+          Span {set.span}, {set.side} edge chord: {lengthWithUnit(set.chord_length, units, style)} in {set.spaces} spaces
           <span className="block text-xs font-normal text-concrete-700">Offset square to the chord; positive where the edge lies outward of the chord.</span>
         </caption>
         <thead className="bg-concrete-100">

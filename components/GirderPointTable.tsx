@@ -4,7 +4,7 @@ import { useMemo, useState } from 'react';
 import type { DisplayStyle } from '@/lib/geometry/format';
 import type { SpanSummary } from '@/lib/geometry/types';
 import type { OffsetPointRow } from './offset-table-types';
-import { elevationCell, lengthCell, lengthUnit, offsetCell, type Units } from './OffsetDisplay';
+import { elevationCell, lengthCell, lengthUnit, lengthWithUnit, offsetCell, type Units } from './OffsetDisplay';
 import OffsetSortHeader, { type SortDirection } from './OffsetSortHeader';
 import { stationText } from './station-text';
 
@@ -81,12 +81,11 @@ export default function GirderPointTable({
           </span>
           {summary ? (
             <span className="block text-xs font-normal text-concrete-700 sm:inline sm:before:content-['_·_']">
-              Edge width {lengthCell(summary.min_edge_width, units, style)} to {lengthCell(summary.max_edge_width, units, style)} {lengthUnit(units, style)}
+              Edge width {lengthCell(summary.min_edge_width, units, style)} to {lengthWithUnit(summary.max_edge_width, units, style)}
               {fast ? (
                 <>
                   {' '}
-                  · changes fastest between points {fast.from_point} and {fast.to_point} ({lengthCell(Math.abs(fast.width_change), units, style)}{' '}
-                  {lengthUnit(units, style)})
+                  · changes fastest between points {fast.from_point} and {fast.to_point} ({lengthWithUnit(Math.abs(fast.width_change), units, style)})
                 </>
               ) : null}
             </span>

@@ -37,3 +37,10 @@ export function offsetCell(value: number, units: Units, style: DisplayStyle): st
   if (!Number.isFinite(value)) return '—';
   return formatOffset(value, units, effectiveStyle(units, style));
 }
+
+/** A length with its unit where the text carries none: "3.82 ft", "1.165 m", or feet-inches as is (`3'-9 3/4"`). */
+export function lengthWithUnit(value: number | null | undefined, units: Units, style: DisplayStyle): string {
+  const text = lengthCell(value, units, style);
+  if (text === '—' || effectiveStyle(units, style) === 'feet-inches') return text;
+  return `${text} ${lengthUnit(units, style)}`;
+}
