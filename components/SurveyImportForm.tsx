@@ -2,7 +2,7 @@
 
 import { useRouter } from 'next/navigation';
 import Link from 'next/link';
-import { useId, useState } from 'react';
+import { useEffect, useId, useState } from 'react';
 import { mutate } from 'swr';
 import { ApiError, sendJson } from './api-client';
 import SurveyPreviewTable, { type SurveyPreviewJson } from './SurveyPreviewTable';
@@ -24,6 +24,9 @@ export default function SurveyImportForm({ bridgeId, units }: { bridgeId: number
   const [error, setError] = useState<string | null>(null);
   const [stored, setStored] = useState<Stored | null>(null);
   const [busy, setBusy] = useState<'checking' | 'storing' | null>(null);
+  // The file input works only once the page is interactive; until then it is shown disabled.
+  const [ready, setReady] = useState(false);
+  useEffect(() => setReady(true), []);
 
   async function check(name: string, text: string) {
     setBusy('checking');
@@ -97,7 +100,7 @@ export default function SurveyImportForm({ bridgeId, units }: { bridgeId: number
           type="file"
           accept=".csv,text/csv,text/plain"
           onChange={(e) => void onFile(e)}
-          disabled={busy !== null}
+          disabled={!ready || busy !== null}
           className="mt-1 block w-full max-w-md text-sm file:mr-3 file:min-h-11 file:rounded-md file:border file:border-concrete-300 file:bg-white file:px-4 file:py-2 file:font-semibold file:text-concrete-800 hover:file:bg-concrete-100"
         />
       </div>

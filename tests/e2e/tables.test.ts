@@ -136,6 +136,7 @@ describe('offset tables in a real browser', () => {
     expect(before.buildup).toBeNull();
     await page.goto(`${baseUrl}/bridges/${id}/survey`);
     const input = page.getByLabel(/survey csv file/i);
+    await expect.poll(() => input.isEnabled()).toBe(true);
     await input.setInputFiles({ name: 'bad.csv', mimeType: 'text/csv', buffer: Buffer.from('girder,span,point,elevation\nG1,3,6,254.10\nG9,3,6,254.10\n') });
     await page.getByText(/1 with problems/i).waitFor();
     await page.getByText(/unknown girder "G9"/i).waitFor();
