@@ -4,6 +4,7 @@ import * as checks from '@/app/api/bridges/[id]/checks/route';
 import * as tolerances from '@/app/api/bridges/[id]/tolerances/route';
 import * as audit from '@/app/api/bridges/[id]/audit/route';
 import * as revisions from '@/app/api/bridges/[id]/revisions/route';
+import * as bridgeRoute from '@/app/api/bridges/[id]/route';
 import { FieldCheck } from '@/models';
 import { call, makeUsers, type TestUser } from './helpers';
 import { demoBridge, engineRow } from './field-helpers';
@@ -186,5 +187,17 @@ describe('tolerances per bridge', () => {
     const reset = await call(tolerances.PATCH, { method: 'PATCH', cookie: people.engineer.cookie, params: { id }, body: { width_tolerance: null } });
     expect(reset.json.width_tolerance).toBeCloseTo(QUARTER_INCH_FT, 12);
     expect(reset.json.is_default.width_tolerance).toBe(true);
+  });
+});
+
+describe('deleting a bridge', () => {
+  it('takes its checks with it (the field tables cascade with the bridge)', async () => {
+    const id = await demoBridge(people.engineer);
+    const row = engineRow(1, 'G1', 0);
+    expect((await post('inspector', { span: 1, girder: 'G1', point: 0, measured_edge_width: row.edge_width! }, id)).status).toBe(201);
+    expect((await post('inspector', { span: 1, girder: 'G1', point: 0, measured_edge_width: row.edge_width! }, id)).status).toBe(201);
+    const res = await call(bridgeRoute.DELETE, { method: 'DELETE', cookie: people.admin.cookie, params: { id } });
+    expect(res.status, res.text).toBeLessThan(300);
+    expect(await FieldCheck.count({ where: { bridgeId: Number(id) } })).toBe(0);
   });
 });
