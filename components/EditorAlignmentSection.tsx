@@ -2,6 +2,7 @@
 
 import EditorField from './EditorField';
 import EditorRow from './EditorRow';
+import EditorSelect from './EditorSelect';
 import EditorSection from './EditorSection';
 import { messagesAt, messagesUnder } from '@/app/(app)/bridges/[id]/edit/check-draft';
 import { moveItem, newKey, type ElementDraft } from '@/app/(app)/bridges/[id]/edit/draft';
@@ -44,28 +45,28 @@ export default function EditorAlignmentSection({ draft, update, check }: Section
               onRemove={() => setA({ elements: a.elements.filter((_, j) => j !== i) })}
               messages={messagesUnder(check, p, shown)}
             >
-              <div className="w-28">
-                <label className="block text-xs font-semibold text-concrete-600" htmlFor={`${e.key}-type`}>
-                  Type
-                </label>
-                <select id={`${e.key}-type`} className="field-input mt-1 py-1.5" value={e.type} onChange={(ev) => setEl(i, { type: ev.target.value as 'line' | 'arc', radius: e.radius || '1000' })}>
-                  <option value="line">Tangent</option>
-                  <option value="arc">Arc</option>
-                </select>
-              </div>
+              <EditorSelect
+                label="Type"
+                value={e.type}
+                onChange={(v) => setEl(i, { type: v, radius: e.radius || '1000' })}
+                options={[
+                  { value: 'line', label: 'Tangent' },
+                  { value: 'arc', label: 'Arc' },
+                ]}
+              />
               <EditorField label="Length" value={e.length} onChange={(v) => setEl(i, { length: v })} unit={u} messages={messagesAt(check, `${p}.length`)} />
               {e.type === 'arc' ? (
                 <>
                   <EditorField label="Radius" value={e.radius} onChange={(v) => setEl(i, { radius: v })} unit={u} messages={messagesAt(check, `${p}.radius`)} />
-                  <div className="w-28">
-                    <label className="block text-xs font-semibold text-concrete-600" htmlFor={`${e.key}-dir`}>
-                      Turns
-                    </label>
-                    <select id={`${e.key}-dir`} className="field-input mt-1 py-1.5" value={e.direction} onChange={(ev) => setEl(i, { direction: ev.target.value as 'left' | 'right' })}>
-                      <option value="right">Right</option>
-                      <option value="left">Left</option>
-                    </select>
-                  </div>
+                  <EditorSelect
+                    label="Turns"
+                    value={e.direction}
+                    onChange={(v) => setEl(i, { direction: v })}
+                    options={[
+                      { value: 'right', label: 'Right' },
+                      { value: 'left', label: 'Left' },
+                    ]}
+                  />
                 </>
               ) : null}
             </EditorRow>

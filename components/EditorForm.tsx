@@ -51,12 +51,14 @@ export default function EditorForm({ bridgeId, revision, description }: { bridge
     setSave((s) => (s.kind === 'saved' || s.kind === 'error' ? { kind: 'idle' } : s));
   }, []);
 
+  // Warn before leaving with unsaved changes, except after a stale save: then reloading is the way on.
+  const guard = dirty && save.kind !== 'stale';
   useEffect(() => {
-    if (!dirty) return;
+    if (!guard) return;
     const warn = (e: BeforeUnloadEvent) => e.preventDefault();
     window.addEventListener('beforeunload', warn);
     return () => window.removeEventListener('beforeunload', warn);
-  }, [dirty]);
+  }, [guard]);
 
   function applyImport(item: ImportedAlignment, fileName: string) {
     update((d) => ({ ...d, alignment: { ...alignmentToDraft(item.alignment, d.units), rest: d.alignment.rest }, pvis: item.profile ? pvisToDraft(item.profile.pvis, d.units) : d.pvis }));
@@ -100,6 +102,9 @@ export default function EditorForm({ bridgeId, revision, description }: { bridge
               </a>
             );
           })}
+          <a href="#preview" className="rounded-full border border-brand-300 bg-brand-50 px-3 py-1 text-brand-700 lg:hidden">
+            Preview ↓
+          </a>
         </nav>
         <LandXmlImport units={draft.units} onApply={applyImport} />
         {imported ? (
@@ -121,7 +126,7 @@ export default function EditorForm({ bridgeId, revision, description }: { bridge
         <EditorPointsSection {...props} />
         <EditorSaveBar bridgeId={bridgeId} base={base} note={note} onNote={setNote} onSave={onSave} state={save} problemCount={current.problemCount} dirty={dirty} />
       </div>
-      <aside className="min-w-0 lg:sticky lg:top-4 lg:self-start" aria-label="Live preview">
+      <aside id="preview" className="min-w-0 scroll-mt-4 lg:sticky lg:top-4 lg:self-start" aria-label="Live preview">
         <EditorPreview check={check} stale={deferred !== draft} />
       </aside>
     </div>

@@ -3,6 +3,7 @@
 import EditorField from './EditorField';
 import EditorOffsetField from './EditorOffsetField';
 import EditorRow from './EditorRow';
+import EditorSelect from './EditorSelect';
 import EditorSection from './EditorSection';
 import { messagesAt, messagesUnder } from '@/app/(app)/bridges/[id]/edit/check-draft';
 import { moveItem, newKey, type GirderDraft, type OffsetDraft } from '@/app/(app)/bridges/[id]/edit/draft';
@@ -39,26 +40,28 @@ export default function EditorGirderSection({ draft, update, check }: SectionPro
               messages={messagesUnder(check, p, shown)}
             >
               <EditorField label="Name" value={g.name} onChange={(x) => setRow(i, { name: x })} inputMode="text" width="w-24" messages={messagesAt(check, `${p}.name`)} />
-              <div className="w-28">
-                <label className="block text-xs font-semibold text-concrete-600" htmlFor={`${g.key}-layout`}>
-                  Layout
-                </label>
-                <select id={`${g.key}-layout`} className="field-input mt-1 py-1.5" value={g.layout} onChange={(e) => setRow(i, { layout: e.target.value as 'chord' | 'curved' })}>
-                  <option value="chord">Chord</option>
-                  <option value="curved">Curved</option>
-                </select>
+              <EditorSelect
+                label="Layout"
+                value={g.layout}
+                onChange={(v) => setRow(i, { layout: v })}
+                options={[
+                  { value: 'chord', label: 'Chord' },
+                  { value: 'curved', label: 'Curved' },
+                ]}
+              />
+              <div className="grid basis-full grid-cols-2 gap-x-3 gap-y-2 sm:grid-cols-3 xl:grid-cols-4">
+                {g.offsets.map((o, k) => (
+                  <EditorOffsetField
+                    key={draft.bents[k]?.key ?? k}
+                    label={`Offset at ${draft.bents[k]?.name.trim() || `bent ${k + 1}`}`}
+                    value={o}
+                    onChange={(v) => setOffset(i, k, v)}
+                    unit={u}
+                    width="w-full min-w-0"
+                    messages={messagesAt(check, `${p}.offsets.${k}`)}
+                  />
+                ))}
               </div>
-              {g.offsets.map((o, k) => (
-                <EditorOffsetField
-                  key={draft.bents[k]?.key ?? k}
-                  label={`Offset at ${draft.bents[k]?.name.trim() || `bent ${k + 1}`}`}
-                  value={o}
-                  onChange={(v) => setOffset(i, k, v)}
-                  unit={u}
-                  width="w-40"
-                  messages={messagesAt(check, `${p}.offsets.${k}`)}
-                />
-              ))}
             </EditorRow>
           );
         })}

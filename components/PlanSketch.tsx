@@ -25,19 +25,19 @@ export default function PlanSketch({ bridge, table }: { bridge: BridgeDescriptio
         {s.bents.map((b) => (
           <g key={b.name}>
             <line x1={b.x1} y1={b.y1} x2={b.x2} y2={b.y2} stroke="#3a3732" strokeWidth={2} />
-            <text x={b.labelX} y={b.labelY} fontSize={12} textAnchor="middle" fill="#3a3732">
+            <text x={b.labelX} y={b.labelY} fontSize={13} textAnchor="middle" fill="#3a3732">
               {b.name}
             </text>
           </g>
         ))}
         {s.spans.map((sp) => (
-          <text key={sp.span} x={sp.x} y={sp.y} fontSize={12} textAnchor="middle" fill="#6b665b" fontWeight={600}>
+          <text key={sp.span} x={sp.x} y={sp.y} fontSize={13} textAnchor="middle" fill="#6b665b" fontWeight={600}>
             Span {sp.span}
           </text>
         ))}
         <g transform={`translate(${s.width - 24} 26) rotate(${s.northDeg})`}>
           <path d="M0,-14 L5,6 L0,2 L-5,6 Z" fill="#24221f" />
-          <text y={-17} fontSize={11} textAnchor="middle" fill="#24221f" transform={`rotate(${-s.northDeg} 0 -21)`}>
+          <text y={-17} fontSize={12} textAnchor="middle" fill="#24221f" transform={`rotate(${-s.northDeg} 0 -21)`}>
             N
           </text>
         </g>
@@ -45,7 +45,7 @@ export default function PlanSketch({ bridge, table }: { bridge: BridgeDescriptio
           <line x1={0} y1={0} x2={s.scale.px} y2={0} stroke="#24221f" strokeWidth={2} />
           <line x1={0} y1={-4} x2={0} y2={4} stroke="#24221f" strokeWidth={1.5} />
           <line x1={s.scale.px} y1={-4} x2={s.scale.px} y2={4} stroke="#24221f" strokeWidth={1.5} />
-          <text x={s.scale.px + 6} y={4} fontSize={11} fill="#24221f">
+          <text x={s.scale.px + 6} y={4} fontSize={12} fill="#24221f">
             {s.scale.length} {u}
           </text>
         </g>

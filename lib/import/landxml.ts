@@ -51,6 +51,14 @@ export const JOIN_TOLERANCE = 0.005;
 export const TANGENCY_TOLERANCE = 1e-4;
 /** Largest disagreement between a length/radius attribute and the element's points, in the file's unit. */
 export const ATTRIBUTE_TOLERANCE = 0.01;
+/**
+ * When a stated length or radius agrees with the element's points this closely (file units), the
+ * stated value is used: the difference is only the rounding of the coordinates in the file.
+ */
+export const SNAP_TOLERANCE = 1e-6;
+
+/** The stated attribute when it agrees with the geometry to {@link SNAP_TOLERANCE}, else the geometry's value. */
+const preferStated = (geometric: number, stated: number | undefined) => (stated !== undefined && Math.abs(stated - geometric) <= SNAP_TOLERANCE ? stated : geometric);
 
 const LINEAR_UNITS: Record<string, LengthUnit> = {
   foot: 'ft',
@@ -148,7 +156,7 @@ function readLine(node: XmlNode, where: string, cg: Map<string, string>): Laid {
     fail(`${where}: the length attribute (${fmt(stated)}) does not match the distance from Start to End (${fmt(length)}).`);
   }
   const b = azimuth(start, end);
-  return { element: { type: 'line', length }, start, end, bearingIn: b, bearingOut: b };
+  return { element: { type: 'line', length: preferStated(length, stated) }, start, end, bearingIn: b, bearingOut: b };
 }
 
 function readCurve(node: XmlNode, where: string, cg: Map<string, string>): Laid {
@@ -185,7 +193,13 @@ function readCurve(node: XmlNode, where: string, cg: Map<string, string>): Laid 
   // tangent, so the tangent is the radial azimuth turned 90° clockwise (counterclockwise for ccw).
   const bearingIn = (a0 + (turn * Math.PI) / 2 + TWO_PI) % TWO_PI;
   const bearingOut = (a1 + (turn * Math.PI) / 2 + TWO_PI) % TWO_PI;
-  return { element: { type: 'arc', length, radius, direction: rot === 'cw' ? 'right' : 'left' }, start, end, bearingIn, bearingOut };
+  return {
+    element: { type: 'arc', length: preferStated(length, statedLength), radius: preferStated(radius, statedRadius), direction: rot === 'cw' ? 'right' : 'left' },
+    start,
+    end,
+    bearingIn,
+    bearingOut,
+  };
 }
 
 function readProfile(alignmentNode: XmlNode, where: string): { profile: { pvis: PviInput[] } | null; name: string | null; notes: string[] } {

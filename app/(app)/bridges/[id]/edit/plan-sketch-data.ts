@@ -22,8 +22,8 @@ export interface SketchData {
   scale: { length: number; px: number };
 }
 
-const WIDTH = 800;
-const MARGIN = 36;
+const WIDTH = 480;
+const MARGIN = 28;
 
 function niceLength(max: number): number {
   const pow = 10 ** Math.floor(Math.log10(max));
@@ -89,7 +89,7 @@ export function planSketchData(bridge: BridgeDescription, table: OffsetTable | n
     const minV = Math.min(...all.map((p) => p.v));
     const maxV = Math.max(...all.map((p) => p.v));
     const scale = (WIDTH - 2 * MARGIN) / Math.max(maxU - minU, 1e-9);
-    const height = Math.min(520, Math.max(180, (maxV - minV) * scale + 2 * MARGIN + 20));
+    const height = Math.min(420, Math.max(170, (maxV - minV) * scale + 2 * MARGIN + 24));
     const offsetY = (height - (maxV - minV) * scale) / 2;
     const X = (p: { u: number }) => MARGIN + (p.u - minU) * scale;
     const Y = (p: { v: number }) => offsetY + (p.v - minV) * scale;
