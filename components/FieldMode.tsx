@@ -8,6 +8,7 @@ import type { BracketGroup, CheckRow } from './CheckTypes';
 import FieldPointStrip, { type PointState } from './FieldPointStrip';
 import FieldResult, { type Verdict } from './FieldResult';
 import FieldTargets from './FieldTargets';
+import PhotoCaptureButton from './PhotoCaptureButton';
 import { useFieldQueue, type PendingCheck } from './FieldQueue';
 import { parseLength, type Units } from './FieldUnits';
 import { stationText } from './station-text';
@@ -239,6 +240,9 @@ export default function FieldMode({ bridge, units, groups, widthTolerance, readi
         <div ref={resultRef} className="scroll-mt-2">
           <FieldResult verdict={current} units={units} widthTolerance={widthTolerance} readingTolerance={readingTolerance} currentRevision={bridge.revision} />
         </div>
+        {canRecord && current?.checkId ? (
+          <PhotoCaptureButton key={current.checkId} bridgeId={bridge.id} checkId={current.checkId} onAttached={() => void mutate()} />
+        ) : null}
 
         {canRecord ? (
           <form id={`${id}-form`} onSubmit={record} noValidate className="mt-4 space-y-3">

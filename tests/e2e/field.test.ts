@@ -58,6 +58,11 @@ describe('field mode on a phone', () => {
     await expect.poll(() => page.getByTestId('field-verdict').textContent()).toBe('PASS');
     await expect.poll(() => page.getByTestId('field-result').textContent()).toMatch(/Saved as check #\d+/);
 
+    // A photo for that check, as the phone's camera would hand it over.
+    const png = Buffer.from('iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mP8z8BQDwAEhQGAhKmMIQAAAABJRU5ErkJggg==', 'base64');
+    await page.locator('input[type=file]').setInputFiles({ name: 'bracket.png', mimeType: 'image/png', buffer: png });
+    await expect.poll(() => page.getByText(/Photo attached to check #\d+/).count()).toBe(1);
+
     // Next bracket, six inches wide → FAIL.
     await page.getByRole('button', { name: /Next/ }).click();
     await expect.poll(() => page.locator('h2').filter({ hasText: 'Point' }).first().textContent()).toMatch(/Point\s*1/);
@@ -84,6 +89,7 @@ describe('field mode on a phone', () => {
     // The server has all three, judged the same way.
     const checks = await page.evaluate(async (bridge) => (await fetch(`/api/bridges/${bridge}/checks`)).json(), id);
     const mine = checks.filter((c: { span: number; girder: string; point: number }) => c.span === 1 && c.girder === 'G1' && c.point <= 2);
+    expect(mine.find((c: { point: number }) => c.point === 0).photos).toHaveLength(1);
     expect(mine.map((c: { point: number; pass: boolean }) => [c.point, c.pass]).sort()).toEqual([
       [0, true],
       [1, false],
