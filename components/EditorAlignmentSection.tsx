@@ -53,6 +53,7 @@ export default function EditorAlignmentSection({ draft, update, check }: Section
                   { value: 'line', label: 'Tangent' },
                   { value: 'arc', label: 'Arc' },
                 ]}
+                width="w-24"
               />
               <EditorField label="Length" value={e.length} onChange={(v) => setEl(i, { length: v })} unit={u} messages={messagesAt(check, `${p}.length`)} />
               {e.type === 'arc' ? (
@@ -66,6 +67,7 @@ export default function EditorAlignmentSection({ draft, update, check }: Section
                       { value: 'right', label: 'Right' },
                       { value: 'left', label: 'Left' },
                     ]}
+                    width="w-24"
                   />
                 </>
               ) : null}

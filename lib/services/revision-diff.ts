@@ -77,10 +77,16 @@ function comparePaths(a: string, b: string): number {
     const na = Number(pa[i]);
     const nb = Number(pb[i]);
     if (Number.isInteger(na) && Number.isInteger(nb)) return na - nb;
+    const ka = FIELD_KEYS.indexOf(pa[i]);
+    const kb = FIELD_KEYS.indexOf(pb[i]);
+    if (ka >= 0 && kb >= 0) return ka - kb;
     return pa[i].localeCompare(pb[i]);
   }
   return pa.length - pb.length;
 }
+
+/** Fields in the order the contract lists them (for a readable list of changes). */
+const FIELD_KEYS = ['start_station', 'start_x', 'start_y', 'start_bearing_deg', 'type', 'length', 'radius', 'direction', 'name', 'station', 'elevation', 'curve_length', 'left', 'right', 'skew_deg', 'layout', 'offsets', 'left_edge_offset', 'right_edge_offset', 'slab_thickness', 'edge_thickness', 'left_barrier_width', 'right_barrier_width', 'form_settlement', 'girder', 'span', 'point'];
 
 /** Field-by-field differences of two descriptions (arrays compared by position). */
 export function diffFields(before: unknown, after: unknown): FieldChange[] {

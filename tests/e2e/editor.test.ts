@@ -1,3 +1,5 @@
+import fs from 'node:fs';
+import os from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
@@ -143,10 +145,20 @@ describe('geometry editor in a real browser', () => {
     await page.getByTestId('landxml-error').waitFor();
     expect(await page.getByTestId('landxml-error').textContent()).toMatch(/metres .* this bridge is in feet/);
 
-    await file.setInputFiles(path.join(fixtures, 'creek-road-ft.xml'));
+    // A file with two alignments: the user picks one and the preview follows the choice.
+    const single = fs.readFileSync(path.join(fixtures, 'creek-road-ft.xml'), 'utf8');
+    const second = single.slice(single.indexOf('<Alignment name='), single.indexOf('</Alignments>')).replace('name="Willowmere Creek Road CL"', 'name="Creek Road east"').replace('staStart="1000.0000000000"', 'staStart="500.0"');
+    const two = path.join(fs.mkdtempSync(path.join(os.tmpdir(), 'chordline-landxml-')), 'two-alignments-ft.xml');
+    fs.writeFileSync(two, single.replace('</Alignments>', `${second}</Alignments>`));
+    await file.setInputFiles(two);
     await page.getByRole('button', { name: 'Read file' }).click();
     const preview = page.getByTestId('landxml-preview');
     await preview.waitFor();
+    expect(await page.getByRole('radio').count()).toBe(2);
+    await page.getByRole('radio', { name: 'Creek Road east' }).check();
+    await expect.poll(async () => (await preview.textContent()) ?? '').toMatch(/Starts at station 5\+00\.00/);
+    await page.getByRole('radio', { name: 'Willowmere Creek Road CL' }).check();
+    await expect.poll(async () => (await preview.textContent()) ?? '').toMatch(/Starts at station 10\+00\.00/);
     const text = (await preview.textContent()) ?? '';
     // What the fixture says: arcs of radius 800 (cw) and 1200 (ccw), four PVIs, 10+00 to 19+00.
     expect(text).toMatch(/800\.00/);
