@@ -1,6 +1,6 @@
 import fs from 'node:fs';
 import path from 'node:path';
-import { Sequelize } from 'sequelize';
+import { Sequelize, Transaction } from 'sequelize';
 import sqlite3 from 'sqlite3';
 import { Umzug, SequelizeStorage } from 'umzug';
 import { dataDir, usesPostgres } from '@/lib/config';
@@ -16,12 +16,27 @@ function openSequelize(): Sequelize {
   fs.mkdirSync(dir, { recursive: true });
   return new Sequelize({
     dialect: 'sqlite',
-    dialectModule: sqlite3,
+    dialectModule: { ...sqlite3, Database: PatientDatabase },
     storage: path.join(dir, 'chordline.sqlite'),
     logging: false,
-    // One connection: SQLite serialises writers anyway, and WAL lets readers go on meanwhile.
-    pool: { max: 1, min: 0, idle: 10000 },
+    // Sequelize opens a separate SQLite connection per transaction. IMMEDIATE takes the write lock at
+    // BEGIN, so a transaction that reads and then writes never fails halfway on a lock upgrade; it
+    // waits its turn instead (busy timeout below).
+    transactionType: Transaction.TYPES.IMMEDIATE,
   });
+}
+
+/** Milliseconds a connection waits for another writer before SQLite reports the database busy. */
+const BUSY_TIMEOUT_MS = 5000;
+
+/** sqlite3's Database with a busy timeout on every connection, including each transaction's own. */
+class PatientDatabase extends sqlite3.Database {
+  constructor(filename: string, mode?: number, callback?: (err: Error | null) => void) {
+    super(filename, mode as number, (err: Error | null) => {
+      if (!err) this.configure('busyTimeout', BUSY_TIMEOUT_MS);
+      callback?.(err);
+    });
+  }
 }
 
 /** Applies every pending migration. Safe to call repeatedly and from several processes. */
@@ -40,11 +55,29 @@ async function connect(): Promise<Sequelize> {
   const sequelize = openSequelize();
   if (sequelize.getDialect() === 'sqlite') {
     await sequelize.query('PRAGMA journal_mode=WAL;');
-    await sequelize.query('PRAGMA busy_timeout=5000;');
     await sequelize.query('PRAGMA foreign_keys=ON;');
   }
   await migrate(sequelize);
+  if (sequelize.getDialect() === 'sqlite') serialiseTransactions(sequelize);
   return sequelize;
+}
+
+/**
+ * SQLite has one writer at a time, and sqlite3 waits for a lock on one of libuv's few worker threads:
+ * a dozen transactions waiting at once would take every thread and starve the one holding the lock.
+ * So this process runs its managed transactions one after another (waiting costs no thread), and the
+ * busy timeout only covers other processes (the backup command, a second server).
+ */
+function serialiseTransactions(sequelize: Sequelize): void {
+  const original = sequelize.transaction.bind(sequelize) as (...args: unknown[]) => Promise<unknown>;
+  let tail: Promise<unknown> = Promise.resolve();
+  (sequelize as unknown as { transaction: (...args: unknown[]) => Promise<unknown> }).transaction = (...args: unknown[]) => {
+    const managed = args.some((a) => typeof a === 'function');
+    if (!managed) return original(...args);
+    const run = tail.then(() => original(...args));
+    tail = run.catch(() => undefined);
+    return run;
+  };
 }
 
 const holder = globalThis as unknown as { __chordlineDb?: { key: string; ready: Promise<Sequelize> } };
