@@ -9,6 +9,7 @@ import FieldPointStrip, { type PointState } from './FieldPointStrip';
 import FieldResult, { type Verdict } from './FieldResult';
 import FieldTargets from './FieldTargets';
 import PhotoCaptureButton from './PhotoCaptureButton';
+import SafetyCaution from './SafetyCaution';
 import { useFieldQueue, type PendingCheck } from './FieldQueue';
 import { parseLength, type Units } from './FieldUnits';
 import { stationText } from './station-text';
@@ -332,6 +333,7 @@ export default function FieldMode({ bridge, units, groups, widthTolerance, readi
           </div>
         ) : null}
         {error && !checks ? <p className="mt-3 text-sm text-caution-700">Could not load earlier checks ({error.message}). New entries are still kept and sent.</p> : null}
+        <SafetyCaution className="mt-6" />
       </div>
 
       <nav aria-label="Bracket" className="grid grid-cols-[1fr_1.4fr_1fr] gap-2 border-t border-concrete-200 bg-white px-3 py-3">
