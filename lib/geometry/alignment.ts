@@ -425,16 +425,23 @@ export function distanceAlongRayToOffset(
   targetOffset: number,
   firstGuess = 0,
 ): number {
+  // Coordinates carry rounding in proportion to their size (state-plane eastings run to millions), so
+  // the step that counts as converged grows with them; Newton's last step is then far below 1e-6.
+  const scale = Math.max(1, Math.abs(origin.x), Math.abs(origin.y));
   let t = firstGuess;
+  let best = { t, f: Infinity };
   for (let iter = 0; iter < 60; iter++) {
     const q = alignment.stationOffset(origin.x + t * direction.x, origin.y + t * direction.y);
     const f = q.offset - targetOffset;
+    if (Math.abs(f) < Math.abs(best.f)) best = { t, f };
     const slope = direction.x * Math.cos(q.bearing) - direction.y * Math.sin(q.bearing);
     if (Math.abs(slope) < 1e-9) throw new SolveError('the line runs parallel to the alignment');
     const step = f / slope;
     t -= step;
-    if (Math.abs(step) <= SOLVE_TOLERANCE * Math.max(1, Math.abs(t))) return t;
+    if (Math.abs(step) <= SOLVE_TOLERANCE * Math.max(scale, Math.abs(t))) return t;
   }
+  // Stalled at the floor of rounding noise: accept the best point when it is on the line to 1e-9 of scale.
+  if (Math.abs(best.f) <= 1e-9 * scale) return best.t;
   throw new SolveError('the solve for the offset did not converge');
 }
 

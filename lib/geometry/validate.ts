@@ -188,8 +188,20 @@ export const MAX_CHORD_POINTS = 250_000;
 export function checkAndCompute(bridge: BridgeDescription): { issues: GeometryIssue[]; table: OffsetTable | null } {
   const issues = checkDescription(bridge);
   if (issues.length > 0) return { issues, table: null };
-  const table = buildOffsetTable(bridge, issues);
-  return { issues, table: issues.length > 0 ? null : table };
+  // Lay the bridge out with the alignment starting at the origin, then move the plan coordinates back:
+  // every other number is unchanged by a translation, and the solvers keep full precision even on
+  // state-plane coordinates in the millions.
+  const { start_x: x0, start_y: y0 } = bridge.alignment;
+  const local = { ...bridge, alignment: { ...bridge.alignment, start_x: 0, start_y: 0 } };
+  const table = buildOffsetTable(local, issues);
+  if (issues.length > 0) return { issues, table: null };
+  for (const p of table.points) {
+    p.x += x0;
+    p.y += y0;
+    if (p.edge_x !== null) p.edge_x += x0;
+    if (p.edge_y !== null) p.edge_y += y0;
+  }
+  return { issues, table };
 }
 
 /**
