@@ -10,7 +10,10 @@ import SignOutButton from './SignOutButton';
  * administrators only (the API guards it as well).
  */
 export default function AppRail({ user }: { user: SessionUser }) {
-  const items: NavItem[] = [{ href: '/bridges', label: 'Bridges' }];
+  const items: NavItem[] = [
+    { href: '/bridges', label: 'Bridges' },
+    { href: '/learn', label: 'Learn: why forms look peaked' },
+  ];
   if (user.role === 'admin') items.push({ href: '/admin/users', label: 'Users' });
   if (user.role === 'admin') items.push({ href: '/admin/outbox', label: 'Outbox' });
   return (

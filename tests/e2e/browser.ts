@@ -5,16 +5,34 @@ export function launchChromium(): Promise<Browser> {
   return chromium.launch({
     executablePath: process.env.CHROMIUM_PATH || '/usr/bin/chromium',
     headless: true,
-    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    // Software WebGL (SwiftShader) so the 3D view renders on machines without a GPU.
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--use-angle=swiftshader',
+      '--enable-unsafe-swiftshader',
+      '--ignore-gpu-blocklist',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
   });
 }
 
 /** Signs in through the real sign-in page. */
 export async function signIn(page: Page, baseUrl: string, email: string, password = 'chordline-demo'): Promise<void> {
-  await page.goto(`${baseUrl}/signin`);
-  await page.getByLabel(/e-?mail/i).fill(email);
-  await page.getByLabel(/password/i).fill(password);
-  await page.getByRole('button', { name: /sign in/i }).click();
+  await page.goto(`${baseUrl}/signin`, { waitUntil: 'networkidle' });
+  const button = page.getByRole('button', { name: /sign in/i });
+  // Typing before React has hydrated the form is lost; retype until the button takes the values.
+  for (let attempt = 0; attempt < 5; attempt++) {
+    await page.getByLabel(/e-?mail/i).fill(email);
+    await page.getByLabel(/password/i).fill(password);
+    if (await button.isEnabled()) break;
+    await page.waitForTimeout(300);
+  }
+  await button.click();
   await page.waitForURL(/\/bridges/);
 }
 
