@@ -12,7 +12,7 @@ import SignOutButton from './SignOutButton';
 export default function AppRail({ user }: { user: SessionUser }) {
   const items: NavItem[] = [
     { href: '/bridges', label: 'Bridges' },
-    { href: '/learn', label: 'Learn: why forms look peaked' },
+    { href: '/learn', label: 'Learn' },
   ];
   if (user.role === 'admin') items.push({ href: '/admin/users', label: 'Users' });
   if (user.role === 'admin') items.push({ href: '/admin/outbox', label: 'Outbox' });
