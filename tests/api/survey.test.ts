@@ -4,6 +4,7 @@ import * as offsets from '@/app/api/bridges/[id]/offsets/route';
 import * as survey from '@/app/api/bridges/[id]/survey/route';
 import * as preview from '@/app/api/bridges/[id]/survey/preview/route';
 import * as revisions from '@/app/api/bridges/[id]/revisions/route';
+import * as bridgeRoute from '@/app/api/bridges/[id]/route';
 import { createBridge, getBridge } from '@/lib/services/bridges';
 import { AuditEvent, GirderSurvey, SurveyImport } from '@/models';
 import { call, makeUsers, type TestUser } from './helpers';
@@ -192,5 +193,14 @@ describe('top-of-girder survey import', () => {
     expect(await storedCount(id)).toBe(0);
     const missing = await call(preview.POST, { method: 'POST', cookie: people.inspector.cookie, params: { id: '999999' }, body: { csv: 'G1,1,1,253' } });
     expect(missing.status).toBe(404);
+  });
+
+  it('deleting a bridge removes its survey values and imports', async () => {
+    const id = await newBridge('Survey then delete');
+    expect((await call(survey.POST, { method: 'POST', cookie: people.inspector.cookie, params: { id }, body: { csv: 'G1,1,1,253.0' } })).status).toBe(201);
+    expect(await storedCount(id)).toBe(1);
+    expect((await call(bridgeRoute.DELETE, { method: 'DELETE', cookie: people.admin.cookie, params: { id } })).status).toBe(200);
+    expect(await storedCount(id)).toBe(0);
+    expect(await SurveyImport.count({ where: { bridgeId: Number(id) } })).toBe(0);
   });
 });
