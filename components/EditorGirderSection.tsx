@@ -49,7 +49,7 @@ export default function EditorGirderSection({ draft, update, check }: SectionPro
                   { value: 'curved', label: 'Curved' },
                 ]}
               />
-              <div className="grid basis-full grid-cols-2 gap-x-3 gap-y-2 sm:grid-cols-3 xl:grid-cols-4">
+              <div className="grid basis-full grid-cols-2 gap-x-3 gap-y-2 sm:grid-cols-3">
                 {g.offsets.map((o, k) => (
                   <EditorOffsetField
                     key={draft.bents[k]?.key ?? k}

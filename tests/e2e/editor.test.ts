@@ -185,6 +185,24 @@ describe('geometry editor in a real browser', () => {
     await context.close();
   });
 
+  it('offers editing to engineers only; everyone signed in can read the history', async () => {
+    const { context: ec, page: ep } = await engineerPage();
+    const id = await newBridge(ep, `Editor roles ${Date.now()}`);
+    await ec.close();
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    await signIn(page, baseUrl, 'crew@example.com');
+    await page.goto(`${baseUrl}/bridges/${id}`);
+    await page.locator('#main').getByRole('link', { name: 'History' }).waitFor();
+    expect(await page.locator('#main').getByRole('link', { name: 'Edit geometry' }).count()).toBe(0);
+    await page.goto(`${baseUrl}/bridges/${id}/edit`);
+    await page.locator('#main').getByRole('heading', { name: 'Editing needs an engineer' }).waitFor();
+    expect(await page.locator('#main').getByRole('button', { name: 'Save revision' }).count()).toBe(0);
+    await page.goto(`${baseUrl}/bridges/${id}/history`);
+    await page.locator('#main').getByText(/one revision so far/).waitFor();
+    await context.close();
+  });
+
   it('looks finished at desktop and phone widths', async () => {
     const { context, page } = await engineerPage();
     const id = await newBridge(page, `Editor look ${Date.now()}`);
