@@ -228,7 +228,7 @@ function readProfile(alignmentNode: XmlNode, where: string): { profile: { pvis: 
     }
     pvis.push(pvi);
   });
-  if (pvis.length === 0) fail(`${where}: the design profile ${name ?? ''} holds no PVI or ParaCurve.`.replace('  ', ' '));
+  if (pvis.length === 0) fail(`${where}: the design profile${name ? ` "${name}"` : ''} holds no PVI or ParaCurve.`);
   for (let i = 1; i < pvis.length; i++) {
     if (!(pvis[i].station > pvis[i - 1].station)) fail(`${where}: profile point ${i + 1} at station ${fmt(pvis[i].station)} is not up-station of point ${i} (${fmt(pvis[i - 1].station)}).`);
   }
