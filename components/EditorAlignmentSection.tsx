@@ -25,7 +25,7 @@ export default function EditorAlignmentSection({ draft, update, check }: Section
       onAdd={() => setA({ elements: [...a.elements, { key: newKey('el'), type: 'line', length: '100', radius: '', direction: 'right', rest: {} }] })}
     >
       <div className="mb-3 flex flex-wrap gap-x-3 gap-y-2">
-        <EditorField label="Start station" value={a.start_station} onChange={(v) => setA({ start_station: v })} placeholder={stationHint} unit={u} width="w-40" messages={messagesAt(check, 'alignment.start_station')} />
+        <EditorField label="Start station" value={a.start_station} onChange={(v) => setA({ start_station: v })} placeholder={stationHint} unit={u} width="w-36 sm:w-40" messages={messagesAt(check, 'alignment.start_station')} />
         <EditorField label="Start easting (x)" value={a.start_x} onChange={(v) => setA({ start_x: v })} unit={u} width="w-40" messages={messagesAt(check, 'alignment.start_x')} />
         <EditorField label="Start northing (y)" value={a.start_y} onChange={(v) => setA({ start_y: v })} unit={u} width="w-40" messages={messagesAt(check, 'alignment.start_y')} />
         <EditorField label="Start bearing" value={a.start_bearing_deg} onChange={(v) => setA({ start_bearing_deg: v })} unit="°" width="w-32" messages={messagesAt(check, 'alignment.start_bearing_deg')} />
