@@ -93,6 +93,8 @@ export function useFieldQueue(bridgeId: number, onSaved: (check: CheckRow, key: 
               measured_edge_width: head.measured_edge_width,
               measured_drop_from_girder_top: head.measured_drop_from_girder_top,
               note: head.note,
+              // The same key on every resend: the server records a measurement once.
+              client_key: head.key.replace(/[^A-Za-z0-9_-]/g, '').slice(0, 64),
             }),
             signal: controller.signal,
           });

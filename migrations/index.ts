@@ -1,6 +1,8 @@
 import type { QueryInterface } from 'sequelize';
 import * as m0001 from './0001-initial';
 import * as m0002 from './0002-field-work';
+import * as m0003 from './0003-girder-survey';
+import * as m0004 from './0004-check-client-key';
 
 export type Migration = {
   name: string;
@@ -12,9 +14,9 @@ export type Migration = {
  * Every migration in order. Listed by hand (not globbed) so the bundled server and the CLI run the
  * same set. Append new ones at the end; never edit or reorder one that has shipped.
  */
-export const migrations: Migration[] = [{ name: '0001-initial', ...m0001 }];
-migrations.push({ name: '0002-field-work', ...m0002 });
-
-// Top-of-girder survey imports (issue 4, part B).
-import * as m0003 from './0003-girder-survey';
-migrations.push({ name: '0003-girder-survey', ...m0003 });
+export const migrations: Migration[] = [
+  { name: '0001-initial', ...m0001 },
+  { name: '0002-field-work', ...m0002 },
+  { name: '0003-girder-survey', ...m0003 },
+  { name: '0004-check-client-key', ...m0004 },
+];

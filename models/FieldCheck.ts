@@ -29,6 +29,8 @@ export class FieldCheck extends Model<InferAttributes<FieldCheck>, InferCreation
   declare note: string;
   /** The earlier check at the same bracket that this one corrects (null for the first). */
   declare supersedesId: number | null;
+  /** The field screen's key for one typed measurement; a resend with the same key is not recorded twice. */
+  declare clientKey: CreationOptional<string | null>;
   declare userId: number | null;
   declare createdAt: CreationOptional<Date>;
 
@@ -56,6 +58,7 @@ export class FieldCheck extends Model<InferAttributes<FieldCheck>, InferCreation
         pass: { type: DataTypes.BOOLEAN, allowNull: false },
         note: { type: DataTypes.STRING(500), allowNull: false, defaultValue: '' },
         supersedesId: { type: DataTypes.INTEGER, allowNull: true, field: 'supersedes_id' },
+        clientKey: { type: DataTypes.STRING(64), allowNull: true, field: 'client_key' },
         userId: { type: DataTypes.INTEGER, allowNull: true, field: 'user_id' },
         createdAt: { type: DataTypes.DATE, field: 'created_at' },
       },

@@ -25,6 +25,10 @@ export const createCheckSchema = z
     measured_edge_width: measurement('The measured edge width').refine((v) => v == null || v > 0, 'The edge width is a distance; it must be greater than zero.'),
     measured_drop_from_girder_top: measurement('The level-bar reading'),
     note: z.string({ error: 'The note must be text.' }).trim().max(500, 'Keep the note under 500 characters.').optional().default(''),
+    client_key: z
+      .string({ error: 'client_key must be text.' })
+      .regex(/^[A-Za-z0-9_-]{8,64}$/, 'client_key must be 8 to 64 letters, digits, - or _.')
+      .optional(),
   })
   .refine((v) => v.measured_edge_width != null || v.measured_drop_from_girder_top != null, {
     message: 'Enter the measured edge width, the level-bar reading, or both.',
@@ -146,8 +150,10 @@ export function photoJson(a: Attachment): CheckPhoto {
  * Records a check at one bracket against the offset table of the bridge's latest revision. The new
  * check supersedes the previous latest one at the same bracket; both stay in the history.
  */
-export async function recordCheck(user: SessionUser, bridgeId: string, input: CheckInput): Promise<CheckJson> {
+export async function recordCheck(user: SessionUser, bridgeId: string, input: CheckInput): Promise<CheckJson & { replayed: boolean }> {
   const { bridge, table } = await offsetsForBridge(bridgeId);
+  const replay = await findReplay(bridge.id, input.client_key);
+  if (replay) return replay;
   const row = findBracket(table, input.span, input.girder, input.point);
   const settings = fieldSettingsOf(bridge);
   const width = input.measured_edge_width ?? null;
@@ -164,49 +170,67 @@ export async function recordCheck(user: SessionUser, bridgeId: string, input: Ch
   const pass = (w ? w.pass : true) && (r ? r.pass : true);
 
   const sequelize = await db();
-  const created = await sequelize.transaction(async (transaction) => {
-    const previous = await FieldCheck.findOne({
-      where: { bridgeId: bridge.id, span: row.span, girder: row.girder, point: row.point },
-      order: [['id', 'DESC']],
-      transaction,
+  let created: FieldCheck;
+  try {
+    created = await sequelize.transaction(async (transaction) => {
+      const previous = await FieldCheck.findOne({
+        where: { bridgeId: bridge.id, span: row.span, girder: row.girder, point: row.point },
+        order: [['id', 'DESC']],
+        transaction,
+      });
+      const check = await FieldCheck.create(
+        {
+          bridgeId: bridge.id,
+          revision: bridge.currentRevision,
+          span: row.span,
+          girder: row.girder,
+          point: row.point,
+          side: row.side,
+          station: row.station,
+          measuredEdgeWidth: width,
+          computedEdgeWidth: row.edge_width,
+          widthDeviation: w ? w.deviation : null,
+          widthTolerance: settings.width_tolerance,
+          widthPass: w ? w.pass : null,
+          measuredReading: reading,
+          computedReading: row.drop_from_girder_top,
+          readingDeviation: r ? r.deviation : null,
+          readingTolerance: settings.reading_tolerance,
+          readingPass: r ? r.pass : null,
+          pass,
+          note: input.note ?? '',
+          supersedesId: previous ? previous.id : null,
+          userId: user.id,
+          clientKey: input.client_key ?? null,
+        },
+        { transaction },
+      );
+      await audit(
+        user.id,
+        'check.create',
+        'bridge',
+        bridge.id,
+        { check: check.id, span: row.span, girder: row.girder, point: row.point, revision: bridge.currentRevision, pass, supersedes: previous ? previous.id : null },
+        transaction,
+      );
+      return check;
     });
-    const check = await FieldCheck.create(
-      {
-        bridgeId: bridge.id,
-        revision: bridge.currentRevision,
-        span: row.span,
-        girder: row.girder,
-        point: row.point,
-        side: row.side,
-        station: row.station,
-        measuredEdgeWidth: width,
-        computedEdgeWidth: row.edge_width,
-        widthDeviation: w ? w.deviation : null,
-        widthTolerance: settings.width_tolerance,
-        widthPass: w ? w.pass : null,
-        measuredReading: reading,
-        computedReading: row.drop_from_girder_top,
-        readingDeviation: r ? r.deviation : null,
-        readingTolerance: settings.reading_tolerance,
-        readingPass: r ? r.pass : null,
-        pass,
-        note: input.note ?? '',
-        supersedesId: previous ? previous.id : null,
-        userId: user.id,
-      },
-      { transaction },
-    );
-    await audit(
-      user.id,
-      'check.create',
-      'bridge',
-      bridge.id,
-      { check: check.id, span: row.span, girder: row.girder, point: row.point, revision: bridge.currentRevision, pass, supersedes: previous ? previous.id : null },
-      transaction,
-    );
-    return check;
-  });
-  return toJson(created, user.name, null, []);
+  } catch (err) {
+    // Two sends of one measurement raced past the first look-up: the unique key let one through.
+    const raced = (err as Error).name === 'SequelizeUniqueConstraintError' ? await findReplay(bridge.id, input.client_key) : null;
+    if (raced) return raced;
+    throw err;
+  }
+  return { ...toJson(created, user.name, null, []), replayed: false };
+}
+
+/** The check already recorded under this client key, for a resend whose first answer was lost. */
+async function findReplay(bridgeId: number, clientKey: string | undefined): Promise<(CheckJson & { replayed: boolean }) | null> {
+  if (!clientKey) return null;
+  const existing = await FieldCheck.findOne({ where: { bridgeId, clientKey } });
+  if (!existing) return null;
+  const by = existing.userId ? await User.findByPk(existing.userId) : null;
+  return { ...toJson(existing, by ? by.name : null, null, []), replayed: true };
 }
 
 /** Every check of a bridge, newest first, with who made it, what superseded it and its photos. */

@@ -201,3 +201,28 @@ describe('deleting a bridge', () => {
     expect(await FieldCheck.count({ where: { bridgeId: Number(id) } })).toBe(0);
   });
 });
+
+describe('a resend of the same measurement', () => {
+  it('is recorded once: the second send answers 200 with the first check', async () => {
+    const row = engineRow(3, 'G1', 4);
+    const body = { span: 3, girder: 'G1', point: 4, measured_edge_width: row.edge_width! + 0.003, client_key: 'field-entry-7f3a9c21' };
+    const before = await FieldCheck.count();
+    const first = await post('inspector', body);
+    expect(first.status).toBe(201);
+    const again = await post('inspector', body);
+    expect(again.status).toBe(200);
+    expect(again.json.id).toBe(first.json.id);
+    expect(again.json.replayed).toBe(true);
+    const raced = await Promise.all([post('inspector', { ...body, client_key: 'field-entry-race-01' }), post('inspector', { ...body, client_key: 'field-entry-race-01' })]);
+    expect(raced.map((r) => r.status).sort()).toEqual([200, 201]);
+    expect(await FieldCheck.count()).toBe(before + 2);
+  });
+
+  it('refuses a malformed key with 400 and writes nothing', async () => {
+    const before = await FieldCheck.count();
+    const res = await post('inspector', { span: 1, girder: 'G1', point: 1, measured_edge_width: 3, client_key: '../../x' });
+    expect(res.status).toBe(400);
+    expect(Object.keys(res.json.fields)).toContain('client_key');
+    expect(await FieldCheck.count()).toBe(before);
+  });
+});
