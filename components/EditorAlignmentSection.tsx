@@ -4,9 +4,9 @@ import EditorField from './EditorField';
 import EditorRow from './EditorRow';
 import EditorSelect from './EditorSelect';
 import EditorSection from './EditorSection';
-import { messagesAt, messagesUnder } from '@/app/(app)/bridges/[id]/edit/check-draft';
-import { moveItem, newKey, type ElementDraft } from '@/app/(app)/bridges/[id]/edit/draft';
-import type { SectionProps } from '@/app/(app)/bridges/[id]/edit/section-props';
+import { messagesAt, messagesUnder } from '@/lib/editor/check-draft';
+import { moveItem, newKey, type ElementDraft } from '@/lib/editor/draft';
+import type { SectionProps } from '@/lib/editor/section-props';
 
 /** Horizontal alignment: start point, start bearing and the tangents and arcs laid end to end. */
 export default function EditorAlignmentSection({ draft, update, check }: SectionProps) {

@@ -3,9 +3,9 @@
 import EditorField from './EditorField';
 import EditorRow from './EditorRow';
 import EditorSection from './EditorSection';
-import { messagesAt, messagesUnder } from '@/app/(app)/bridges/[id]/edit/check-draft';
-import { moveItem, newKey, type BentDraft } from '@/app/(app)/bridges/[id]/edit/draft';
-import type { SectionProps } from '@/app/(app)/bridges/[id]/edit/section-props';
+import { messagesAt, messagesUnder } from '@/lib/editor/check-draft';
+import { moveItem, newKey, type BentDraft } from '@/lib/editor/draft';
+import type { SectionProps } from '@/lib/editor/section-props';
 
 /**
  * Bents in up-station order. Each girder has one offset per bent, so adding, removing or moving a

@@ -3,9 +3,9 @@
 import EditorField from './EditorField';
 import EditorRow from './EditorRow';
 import EditorSection from './EditorSection';
-import { messagesAt, messagesUnder } from '@/app/(app)/bridges/[id]/edit/check-draft';
-import { moveItem, newKey, type SlopeDraft } from '@/app/(app)/bridges/[id]/edit/draft';
-import type { SectionProps } from '@/app/(app)/bridges/[id]/edit/section-props';
+import { messagesAt, messagesUnder } from '@/lib/editor/check-draft';
+import { moveItem, newKey, type SlopeDraft } from '@/lib/editor/draft';
+import type { SectionProps } from '@/lib/editor/section-props';
 
 /** Cross slopes per side at stations, linear between them, constant before the first and after the last. */
 export default function EditorCrossSlopeSection({ draft, update, check }: SectionProps) {

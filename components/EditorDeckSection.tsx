@@ -3,9 +3,9 @@
 import EditorField from './EditorField';
 import EditorOffsetField from './EditorOffsetField';
 import EditorSection from './EditorSection';
-import { messagesAt, messagesUnder } from '@/app/(app)/bridges/[id]/edit/check-draft';
-import type { DeckDraft } from '@/app/(app)/bridges/[id]/edit/draft';
-import type { SectionProps } from '@/app/(app)/bridges/[id]/edit/section-props';
+import { messagesAt, messagesUnder } from '@/lib/editor/check-draft';
+import type { DeckDraft } from '@/lib/editor/draft';
+import type { SectionProps } from '@/lib/editor/section-props';
 
 const FIELDS = ['left_edge_offset', 'right_edge_offset', 'slab_thickness', 'edge_thickness', 'left_barrier_width', 'right_barrier_width', 'form_settlement'].map((f) => `deck.${f}`);
 

@@ -13,8 +13,8 @@ import EditorPreview from './EditorPreview';
 import EditorProfileSection from './EditorProfileSection';
 import EditorSaveBar, { type SaveState } from './EditorSaveBar';
 import LandXmlImport from './LandXmlImport';
-import { checkDraft } from '@/app/(app)/bridges/[id]/edit/check-draft';
-import { alignmentToDraft, pvisToDraft, toDraft, type Draft } from '@/app/(app)/bridges/[id]/edit/draft';
+import { checkDraft } from '@/lib/editor/check-draft';
+import { alignmentToDraft, pvisToDraft, toDraft, type Draft } from '@/lib/editor/draft';
 import type { BridgeDescription } from '@/lib/geometry';
 import type { ImportedAlignment } from '@/lib/import/landxml';
 

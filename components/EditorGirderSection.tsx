@@ -5,9 +5,9 @@ import EditorOffsetField from './EditorOffsetField';
 import EditorRow from './EditorRow';
 import EditorSelect from './EditorSelect';
 import EditorSection from './EditorSection';
-import { messagesAt, messagesUnder } from '@/app/(app)/bridges/[id]/edit/check-draft';
-import { moveItem, newKey, type GirderDraft, type OffsetDraft } from '@/app/(app)/bridges/[id]/edit/draft';
-import type { SectionProps } from '@/app/(app)/bridges/[id]/edit/section-props';
+import { messagesAt, messagesUnder } from '@/lib/editor/check-draft';
+import { moveItem, newKey, type GirderDraft, type OffsetDraft } from '@/lib/editor/draft';
+import type { SectionProps } from '@/lib/editor/section-props';
 
 /** Girders: a name, chord or curved layout, and the offset where the girder crosses each bent line. */
 export default function EditorGirderSection({ draft, update, check }: SectionProps) {

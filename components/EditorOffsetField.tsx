@@ -2,7 +2,7 @@
 
 import { useId } from 'react';
 import EditorMessages from './EditorMessages';
-import type { OffsetDraft, Side } from '@/app/(app)/bridges/[id]/edit/draft';
+import type { OffsetDraft, Side } from '@/lib/editor/draft';
 
 /**
  * An offset from the alignment as the crew reads it: a distance without sign and LT (left looking

@@ -2,8 +2,8 @@
 
 import EditorField from './EditorField';
 import EditorSection from './EditorSection';
-import { messagesAt } from '@/app/(app)/bridges/[id]/edit/check-draft';
-import type { SectionProps } from '@/app/(app)/bridges/[id]/edit/section-props';
+import { messagesAt } from '@/lib/editor/check-draft';
+import type { SectionProps } from '@/lib/editor/section-props';
 
 /** How finely each span is divided: girder points per span and deck-edge chord spaces per span. */
 export default function EditorPointsSection({ draft, update, check }: SectionProps) {

@@ -2,7 +2,7 @@
 
 import PlanSketch from './PlanSketch';
 import PlanSketchSpanTable from './PlanSketchSpanTable';
-import type { DraftCheck } from '@/app/(app)/bridges/[id]/edit/check-draft';
+import type { DraftCheck } from '@/lib/editor/check-draft';
 
 /** The editor's live preview: the plan sketch and the edge-width range per span, or what stops them. */
 export default function EditorPreview({ check, stale }: { check: DraftCheck; stale: boolean }) {

@@ -3,9 +3,9 @@
 import EditorField from './EditorField';
 import EditorRow from './EditorRow';
 import EditorSection from './EditorSection';
-import { messagesAt, messagesUnder } from '@/app/(app)/bridges/[id]/edit/check-draft';
-import { moveItem, newKey, type PviDraft } from '@/app/(app)/bridges/[id]/edit/draft';
-import type { SectionProps } from '@/app/(app)/bridges/[id]/edit/section-props';
+import { messagesAt, messagesUnder } from '@/lib/editor/check-draft';
+import { moveItem, newKey, type PviDraft } from '@/lib/editor/draft';
+import type { SectionProps } from '@/lib/editor/section-props';
 
 /** Profile grade line: PVIs in station order, each with an optional symmetric vertical curve. */
 export default function EditorProfileSection({ draft, update, check }: SectionProps) {

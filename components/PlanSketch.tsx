@@ -1,7 +1,7 @@
 'use client';
 
 import { useMemo } from 'react';
-import { planSketchData } from '@/app/(app)/bridges/[id]/edit/plan-sketch-data';
+import { planSketchData } from '@/lib/editor/plan-sketch-data';
 import type { BridgeDescription, OffsetTable } from '@/lib/geometry';
 
 /**
