@@ -16,9 +16,14 @@ export function computeChecked(bridge: BridgeDescription): OffsetTable {
   }
 }
 
-/** Offset table for a description posted to the compute API (400 schema, 422 geometry). */
-export function computeFromJson(json: unknown): OffsetTable {
-  return computeChecked(schemaCheckedDescription(json, '_'));
+/**
+ * Offset table for a description posted to the compute API (400 schema, 422 geometry). Interior
+ * girders carry no overhang, so their rows (side "interior", overhang fields null) come only when
+ * asked for; the exterior rows and chord offsets are always there.
+ */
+export function computeFromJson(json: unknown, options: { interior?: boolean } = {}): OffsetTable {
+  const table = computeChecked(schemaCheckedDescription(json, '_'));
+  return options.interior ? table : { ...table, points: table.points.filter((p) => p.side !== 'interior') };
 }
 
 const cache = new Map<string, OffsetTable>();

@@ -4,7 +4,7 @@ import { db } from '@/lib/db/connection';
 import { HttpError } from '@/lib/api/errors';
 import { hashPassword } from '@/lib/auth/password';
 import { ROLES } from '@/lib/auth/roles';
-import type { SessionUser } from '@/lib/auth/session';
+import { forgetSessionUser, type SessionUser } from '@/lib/auth/session';
 import { audit } from './audit';
 
 const password = z.string().min(10, 'Use at least 10 characters.').max(200, 'Keep the password under 200 characters.');
@@ -65,6 +65,7 @@ export async function updateUser(actor: SessionUser, id: string, input: z.infer<
     changed.push('password');
   }
   await user.save();
+  forgetSessionUser(user.id);
   await audit(actor.id, 'user.update', 'user', user.id, { changed, role: user.role });
   return publicUser(user);
 }

@@ -56,8 +56,13 @@ describe('POST /api/compute', () => {
     const res = await post(demoBridges[0]);
     expect(res.status).toBe(200);
     const direct = computeOffsetTable(demoBridges[0]);
-    expect(res.json.points.length).toBe(direct.points.length);
-    expect(res.json.points[7].edge_width).toBeCloseTo(direct.points[7].edge_width as number, 12);
+    const exterior = direct.points.filter((p) => p.side !== 'interior');
+    // Interior girders carry no overhang: their rows come only with ?interior=1.
+    expect(res.json.points.length).toBe(exterior.length);
+    expect(res.json.points[7].edge_width).toBeCloseTo(exterior[7].edge_width as number, 12);
+    const all = await call(compute.POST, { method: 'POST', path: '/api/compute?interior=1', cookie: people.crew.cookie, body: demoBridges[0] });
+    expect(all.json.points.length).toBe(direct.points.length);
+    expect(all.json.points.filter((p: { side: string }) => p.side === 'interior').length).toBeGreaterThan(0);
   });
 
   it('answers 400 with field errors for a bad schema and 422 naming the girder for bad geometry', async () => {

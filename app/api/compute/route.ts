@@ -3,4 +3,7 @@ import { withRole, ok } from '@/lib/api/with-role';
 import { computeFromJson } from '@/lib/services/offsets';
 
 // The description is checked by the engine's own schema inside computeFromJson.
-export const POST = withRole('signed-in', z.unknown(), async ({ body }) => ok(computeFromJson(body)));
+// ?interior=1 adds the interior girders' rows (their overhang fields are null).
+export const POST = withRole('signed-in', z.unknown(), async ({ req, body }) =>
+  ok(computeFromJson(body, { interior: req.nextUrl.searchParams.get('interior') === '1' })),
+);
