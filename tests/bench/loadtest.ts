@@ -84,10 +84,10 @@ function line(name: string, r: Combined) {
 
 async function main() {
   if (!fs.existsSync(path.join(root, distDir, 'BUILD_ID')) || process.env.LOADTEST_REBUILD === '1') {
-    execFileSync('npx', ['next', 'build'], { cwd: root, env: { ...process.env, NEXT_DIST_DIR: distDir }, stdio: 'inherit' });
+    execFileSync('npx', ['next', 'build'], { cwd: root, env: { ...process.env, NEXT_DIST_DIR: distDir, NEXT_TELEMETRY_DISABLED: '1' }, stdio: 'inherit' });
   }
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'chordline-load-'));
-  const env = { ...process.env, DATA_DIR: dataDir, NEXT_DIST_DIR: distDir, NODE_ENV: 'production' as const };
+  const env = { ...process.env, DATA_DIR: dataDir, NEXT_DIST_DIR: distDir, NODE_ENV: 'production' as const, NEXT_TELEMETRY_DISABLED: '1' };
   delete (env as Record<string, string | undefined>).CHORDLINE_NO_DEMO;
   execFileSync('npx', ['tsx', 'lib/cli/prepare.ts'], { cwd: root, env, stdio: 'inherit' });
   const port = await freePort();
