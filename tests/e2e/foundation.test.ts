@@ -13,6 +13,34 @@ afterAll(async () => {
   await browser?.close();
 });
 
+describe('served pages', () => {
+  it('carry the security headers and a session cookie scripts cannot read', async () => {
+    const page = await fetch(`${baseUrl}/signin`);
+    expect(page.headers.get('content-security-policy')).toMatch(/frame-ancestors 'none'/);
+    expect(page.headers.get('content-security-policy')).toMatch(/default-src 'self'/);
+    expect(page.headers.get('x-content-type-options')).toBe('nosniff');
+    expect(page.headers.get('referrer-policy')).toBe('strict-origin-when-cross-origin');
+    const csrf = await fetch(`${baseUrl}/api/auth/csrf`);
+    const { csrfToken } = (await csrf.json()) as { csrfToken: string };
+    const jar = csrf.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
+    const signIn = await fetch(`${baseUrl}/api/auth/callback/credentials`, {
+      method: 'POST',
+      redirect: 'manual',
+      headers: { 'content-type': 'application/x-www-form-urlencoded', cookie: jar },
+      body: new URLSearchParams({ csrfToken, email: 'crew@example.com', password: 'chordline-demo' }),
+    });
+    const session = signIn.headers.getSetCookie().find((c) => c.includes('session-token'));
+    expect(session).toMatch(/HttpOnly/i);
+    expect(session).toMatch(/SameSite=Lax/i);
+    const big = await fetch(`${baseUrl}/api/compute`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json', cookie: (session as string).split(';')[0] },
+      body: JSON.stringify({ name: 'x'.repeat(3 * 1024 * 1024) }),
+    });
+    expect(big.status).toBe(413);
+  });
+});
+
 describe('foundation in a real browser', () => {
   it('an engineer signs in, creates a bridge from the starter and sees it listed', async () => {
     const page = await browser.newPage({ viewport: { width: 1280, height: 860 } });
