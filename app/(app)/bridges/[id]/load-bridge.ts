@@ -2,13 +2,18 @@ import { notFound } from 'next/navigation';
 import { HttpError } from '@/lib/api/errors';
 import { getBridge, listRevisions } from '@/lib/services/bridges';
 
-/** The bridge and its revisions for the page; a missing bridge becomes the not-found page. */
-export async function loadBridge(id: string) {
+/** Awaits a read for a bridge page; "no such bridge" (404) becomes the not-found page. */
+export async function orNotFound<T>(work: Promise<T>): Promise<T> {
   try {
-    const [bridge, revisions] = await Promise.all([getBridge(id), listRevisions(id)]);
-    return { bridge, revisions };
+    return await work;
   } catch (err) {
     if (err instanceof HttpError && err.status === 404) notFound();
     throw err;
   }
+}
+
+/** The bridge and its revisions for the page; a missing bridge becomes the not-found page. */
+export async function loadBridge(id: string) {
+  const [bridge, revisions] = await orNotFound(Promise.all([getBridge(id), listRevisions(id)]));
+  return { bridge, revisions };
 }

@@ -8,6 +8,7 @@ import { requireUser } from '@/components/server-session';
 import { dateTimeText } from '@/components/station-text';
 import { roleAllows } from '@/lib/auth/roles';
 import { loadBridge } from './load-bridge';
+import BridgeBreadcrumb from '@/components/BridgeBreadcrumb';
 
 type Params = Promise<{ id: string }>;
 
@@ -29,12 +30,7 @@ export default async function BridgePage({ params }: { params: Params }) {
 
   return (
     <>
-      <nav aria-label="Breadcrumb" className="mb-2 text-sm">
-        <Link href="/bridges" className="text-brand-700 hover:underline">
-          Bridges
-        </Link>
-        <span className="text-concrete-500"> / {bridge.name}</span>
-      </nav>
+      <BridgeBreadcrumb bridge={bridge} />
       <div className="mb-6 flex flex-wrap items-start justify-between gap-4">
         <div>
           <h1 className="text-2xl font-bold text-concrete-900">{bridge.name}</h1>

@@ -1,6 +1,5 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { notFound } from 'next/navigation';
 import CheckAuditList from '@/components/CheckAuditList';
 import CheckHistoryTable from '@/components/CheckHistoryTable';
 import FieldTolerancesForm from '@/components/FieldTolerancesForm';
@@ -16,18 +15,15 @@ import { listChecks } from '@/lib/services/checks';
 import { bridgeAudit } from '@/lib/services/field-audit';
 import { signOffOverview } from '@/lib/services/signoff';
 import { findBridgeById, fieldSettingsOf } from '@/lib/services/tolerances';
+import BridgeBreadcrumb from '@/components/BridgeBreadcrumb';
+import { orNotFound } from '../load-bridge';
 
 export const metadata: Metadata = { title: 'Checks and sign-off' };
 
 type Params = Promise<{ id: string }>;
 
-async function load(id: string) {
-  try {
-    return await findBridgeById(id);
-  } catch (err) {
-    if (err instanceof HttpError && err.status === 404) notFound();
-    throw err;
-  }
+function load(id: string) {
+  return orNotFound(findBridgeById(id));
 }
 
 export default async function ChecksPage({ params }: { params: Params }) {
@@ -51,16 +47,7 @@ export default async function ChecksPage({ params }: { params: Params }) {
 
   return (
     <>
-      <nav aria-label="Breadcrumb" className="mb-2 text-sm">
-        <Link href="/bridges" className="text-brand-700 hover:underline">
-          Bridges
-        </Link>
-        <span className="text-concrete-500"> / </span>
-        <Link href={`/bridges/${bridge.id}`} className="text-brand-700 hover:underline">
-          {bridge.name}
-        </Link>
-        <span className="text-concrete-500"> / Checks</span>
-      </nav>
+      <BridgeBreadcrumb bridge={bridge} here="Checks" />
       <div className="mb-6 flex flex-wrap items-end justify-between gap-4">
         <div>
           <h1 className="text-2xl font-bold text-concrete-900">Checks and sign-off: {bridge.name}</h1>

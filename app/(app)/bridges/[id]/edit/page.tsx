@@ -5,6 +5,7 @@ import RoleNotice from '@/components/RoleNotice';
 import { requireUser } from '@/components/server-session';
 import { roleAllows } from '@/lib/auth/roles';
 import { loadBridge } from '../load-bridge';
+import BridgeBreadcrumb from '@/components/BridgeBreadcrumb';
 
 type Params = Promise<{ id: string }>;
 
@@ -27,16 +28,7 @@ export default async function EditGeometryPage({ params }: { params: Params }) {
   const { bridge } = await loadBridge(id);
   return (
     <>
-      <nav aria-label="Breadcrumb" className="mb-2 text-sm">
-        <Link href="/bridges" className="text-brand-700 hover:underline">
-          Bridges
-        </Link>
-        <span className="text-concrete-500"> / </span>
-        <Link href={`/bridges/${bridge.id}`} className="text-brand-700 hover:underline">
-          {bridge.name}
-        </Link>
-        <span className="text-concrete-500"> / Edit geometry</span>
-      </nav>
+      <BridgeBreadcrumb bridge={bridge} here="Edit geometry" />
       <div className="mb-4 flex flex-wrap items-end justify-between gap-3">
         <div>
           <h1 className="text-2xl font-bold text-concrete-900">Edit geometry</h1>

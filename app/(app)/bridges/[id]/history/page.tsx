@@ -9,6 +9,7 @@ import { roleAllows } from '@/lib/auth/roles';
 import { getRevision } from '@/lib/services/bridges';
 import { diffRevisions } from '@/lib/services/revision-diff';
 import { loadBridge } from '../load-bridge';
+import BridgeBreadcrumb from '@/components/BridgeBreadcrumb';
 
 type Params = Promise<{ id: string }>;
 type Search = Promise<{ from?: string | string[]; to?: string | string[] }>;
@@ -33,16 +34,7 @@ export default async function HistoryPage({ params, searchParams }: { params: Pa
 
   return (
     <>
-      <nav aria-label="Breadcrumb" className="mb-2 text-sm">
-        <Link href="/bridges" className="text-brand-700 hover:underline">
-          Bridges
-        </Link>
-        <span className="text-concrete-500"> / </span>
-        <Link href={`/bridges/${bridge.id}`} className="text-brand-700 hover:underline">
-          {bridge.name}
-        </Link>
-        <span className="text-concrete-500"> / History</span>
-      </nav>
+      <BridgeBreadcrumb bridge={bridge} here="History" />
       <div className="mb-4 flex flex-wrap items-end justify-between gap-3">
         <div>
           <h1 className="text-2xl font-bold text-concrete-900">Revision history</h1>

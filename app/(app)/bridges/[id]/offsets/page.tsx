@@ -1,26 +1,21 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { notFound } from 'next/navigation';
 import OffsetTables from '@/components/OffsetTables';
 import SafetyCaution from '@/components/SafetyCaution';
 import { requireUser } from '@/components/server-session';
-import { HttpError } from '@/lib/api/errors';
 import { roleAllows } from '@/lib/auth/roles';
 import { getBridge } from '@/lib/services/bridges';
 import OffsetPrintStamp from '@/components/OffsetPrintStamp';
 import styles from './offsets-print.module.css';
+import BridgeBreadcrumb from '@/components/BridgeBreadcrumb';
+import { orNotFound } from '../load-bridge';
 
 type Params = Promise<{ id: string }>;
 
 export const metadata: Metadata = { title: 'Offset table' };
 
-async function load(id: string) {
-  try {
-    return await getBridge(id);
-  } catch (err) {
-    if (err instanceof HttpError && err.status === 404) notFound();
-    throw err;
-  }
+function load(id: string) {
+  return orNotFound(getBridge(id));
 }
 
 export default async function OffsetsPage({ params }: { params: Params }) {
@@ -37,16 +32,7 @@ export default async function OffsetsPage({ params }: { params: Params }) {
         </span>
         <OffsetPrintStamp initial={new Date().toISOString()} />
       </div>
-      <nav aria-label="Breadcrumb" className="no-print mb-2 text-sm">
-        <Link href="/bridges" className="text-brand-700 hover:underline">
-          Bridges
-        </Link>
-        <span className="text-concrete-500"> / </span>
-        <Link href={`/bridges/${bridge.id}`} className="text-brand-700 hover:underline">
-          {bridge.name}
-        </Link>
-        <span className="text-concrete-500"> / Offset table</span>
-      </nav>
+      <BridgeBreadcrumb bridge={bridge} here="Offset table" />
       <div className="mb-4 flex flex-wrap items-end justify-between gap-4">
         <div>
           <h1 className="text-2xl font-bold text-concrete-900 print:text-lg">Offset table: {bridge.name}</h1>

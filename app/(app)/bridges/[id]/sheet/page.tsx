@@ -11,6 +11,7 @@ import { requireUser } from '@/components/server-session';
 import { roleAllows } from '@/lib/auth/roles';
 import { loadFieldView } from '@/lib/services/field-view';
 import { ROD_DEFINITION } from '@/lib/services/field-sheet';
+import BridgeBreadcrumb from '@/components/BridgeBreadcrumb';
 
 export const metadata: Metadata = { title: 'Field sheet' };
 
@@ -23,16 +24,7 @@ export default async function SheetPage({ params, searchParams }: { params: Para
   const { span: spanText } = await searchParams;
   const view = await loadFieldView(id);
   const crumbs = (
-    <nav aria-label="Breadcrumb" className="no-print mb-2 text-sm">
-      <Link href="/bridges" className="text-brand-700 hover:underline">
-        Bridges
-      </Link>
-      <span className="text-concrete-500"> / </span>
-      <Link href={`/bridges/${view.bridge.id}`} className="text-brand-700 hover:underline">
-        {view.bridge.name}
-      </Link>
-      <span className="text-concrete-500"> / Field sheet</span>
-    </nav>
+    <BridgeBreadcrumb bridge={view.bridge} here="Field sheet" />
   );
   if (!view.ok) {
     return (

@@ -1,27 +1,22 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { notFound } from 'next/navigation';
 import SurveyImportForm from '@/components/SurveyImportForm';
 import SurveyImportLog from '@/components/SurveyImportLog';
 import SurveyValuesTable from '@/components/SurveyValuesTable';
 import { requireUser } from '@/components/server-session';
-import { HttpError } from '@/lib/api/errors';
 import { roleAllows } from '@/lib/auth/roles';
 import { getBridge } from '@/lib/services/bridges';
 import { framingOf, listSurvey } from '@/lib/services/survey';
+import BridgeBreadcrumb from '@/components/BridgeBreadcrumb';
+import { orNotFound } from '../load-bridge';
 
 type Params = Promise<{ id: string }>;
 
 export const metadata: Metadata = { title: 'Top-of-girder survey' };
 
 async function load(id: string) {
-  try {
-    const [bridge, listing] = await Promise.all([getBridge(id), listSurvey(id)]);
-    return { bridge, listing };
-  } catch (err) {
-    if (err instanceof HttpError && err.status === 404) notFound();
-    throw err;
-  }
+  const [bridge, listing] = await orNotFound(Promise.all([getBridge(id), listSurvey(id)]));
+  return { bridge, listing };
 }
 
 export default async function SurveyPage({ params }: { params: Params }) {
@@ -38,16 +33,7 @@ export default async function SurveyPage({ params }: { params: Params }) {
 
   return (
     <>
-      <nav aria-label="Breadcrumb" className="mb-2 text-sm">
-        <Link href="/bridges" className="text-brand-700 hover:underline">
-          Bridges
-        </Link>
-        <span className="text-concrete-500"> / </span>
-        <Link href={`/bridges/${bridge.id}`} className="text-brand-700 hover:underline">
-          {bridge.name}
-        </Link>
-        <span className="text-concrete-500"> / Top-of-girder survey</span>
-      </nav>
+      <BridgeBreadcrumb bridge={bridge} here="Top-of-girder survey" />
       <div className="mb-4 flex flex-wrap items-end justify-between gap-4">
         <div>
           <h1 className="text-2xl font-bold text-concrete-900">Top-of-girder survey: {bridge.name}</h1>

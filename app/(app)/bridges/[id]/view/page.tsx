@@ -1,13 +1,12 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { notFound } from 'next/navigation';
 import PageHeader from '@/components/PageHeader';
 import SafetyCaution from '@/components/SafetyCaution';
 import { requireUser } from '@/components/server-session';
-import { HttpError } from '@/lib/api/errors';
 import { sceneDataForBridge } from '@/lib/scene-data/bridge';
 import LazyBridgeViewer from '@/scene/LazyBridgeViewer';
 import EdgeWidthSummary from '@/scene/EdgeWidthSummary';
+import { orNotFound } from '../load-bridge';
 
 export const metadata: Metadata = { title: '3D view' };
 
@@ -15,13 +14,7 @@ export default async function BridgeViewPage({ params, searchParams }: { params:
   await requireUser();
   const { id } = await params;
   const { stats } = await searchParams;
-  let data;
-  try {
-    data = await sceneDataForBridge(id);
-  } catch (err) {
-    if (err instanceof HttpError && err.status === 404) notFound();
-    throw err;
-  }
+  const data = await orNotFound(sceneDataForBridge(id));
   const offsetsHref = `/bridges/${data.id}/offsets`;
   return (
     <>
