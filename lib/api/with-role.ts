@@ -23,7 +23,8 @@ export function withRole<P = Record<string, never>, S extends z.ZodType | undefi
 ): (req: NextRequest, route: RouteContext<P>) => Promise<Response> {
   return async (req, route) => {
     try {
-      const user = await sessionUserFromRequest(req);
+      // Open routes never look at the session: nothing there depends on who asks.
+      const user = access === 'anyone' ? null : await sessionUserFromRequest(req);
       if (access !== 'anyone') {
         if (!user) return jsonError(401, 'Sign in to continue.');
         if (access !== 'signed-in' && !roleAllows(user.role, access)) {
