@@ -4,25 +4,39 @@ import { HttpError } from './errors';
 /** Largest JSON body the API accepts, in bytes. */
 export const MAX_JSON_BYTES = 1024 * 1024;
 
-/** Reads a JSON body with a size limit; malformed or oversized input becomes a 400/413 HttpError. */
-export async function readJson(req: NextRequest, limit = MAX_JSON_BYTES): Promise<unknown> {
+/**
+ * Reads a request body into memory, stopping as soon as it passes `cap` bytes (declared or actual).
+ * `tooLarge` and `missing` make the errors the caller wants to answer with.
+ */
+export async function readBodyLimited(req: NextRequest, cap: number, tooLarge: () => Error, missing: () => Error): Promise<Buffer> {
   const declared = Number(req.headers.get('content-length') ?? '0');
-  if (declared > limit) throw new HttpError(413, `The request body is larger than ${Math.round(limit / 1024)} KB.`);
+  if (declared > cap) throw tooLarge();
   const reader = req.body?.getReader();
-  if (!reader) throw new HttpError(400, 'The request has no body; send JSON.');
+  if (!reader) throw missing();
   const chunks: Uint8Array[] = [];
   let size = 0;
   for (;;) {
     const { done, value } = await reader.read();
     if (done) break;
     size += value.byteLength;
-    if (size > limit) {
+    if (size > cap) {
       await reader.cancel();
-      throw new HttpError(413, `The request body is larger than ${Math.round(limit / 1024)} KB.`);
+      throw tooLarge();
     }
     chunks.push(value);
   }
-  const text = Buffer.concat(chunks).toString('utf8');
+  return Buffer.concat(chunks);
+}
+
+/** Reads a JSON body with a size limit; malformed or oversized input becomes a 400/413 HttpError. */
+export async function readJson(req: NextRequest, limit = MAX_JSON_BYTES): Promise<unknown> {
+  const body = await readBodyLimited(
+    req,
+    limit,
+    () => new HttpError(413, `The request body is larger than ${Math.round(limit / 1024)} KB.`),
+    () => new HttpError(400, 'The request has no body; send JSON.'),
+  );
+  const text = body.toString('utf8');
   if (!text.trim()) throw new HttpError(400, 'The request body is empty; send JSON.');
   try {
     return JSON.parse(text);

@@ -13,7 +13,8 @@ export interface CsvOptions {
   style?: DisplayStyle;
 }
 
-function cell(text: string): string {
+/** One CSV cell (RFC 4180): quoted when it holds a comma, a quote or a line break. */
+export function csvCell(text: string): string {
   return /[",\n\r]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
 }
 
@@ -63,7 +64,7 @@ export function offsetTableToCsv(table: OffsetTable, options: CsvOptions = {}): 
         length(p.buildup),
         length(p.drop_from_girder_top),
       ]
-        .map(cell)
+        .map(csvCell)
         .join(','),
     );
   }

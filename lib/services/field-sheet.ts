@@ -6,6 +6,7 @@ import { formatFeet, formatFeetInches, formatMetres, formatStation, type OffsetT
 import { HttpError } from '@/lib/api/errors';
 import { offsetsForBridge } from './offsets';
 import { fieldSettingsOf } from './tolerances';
+import { csvCell } from '@/lib/geometry/csv';
 
 /** The caution printed on every field sheet (domain.md, "Cautions the product must carry"). */
 export const SHEET_CAUTION =
@@ -96,9 +97,6 @@ export function buildSheetGroups(table: OffsetTable, baseRod: number, span: numb
   return out.sort((a, b) => a.span - b.span || (a.side === b.side ? 0 : a.side === 'left' ? -1 : 1));
 }
 
-function cell(text: string): string {
-  return /[",\n\r]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
-}
 
 /**
  * The field sheet as CSV: two "# " lines, each one cell (bridge, revision, base rod; the caution), then a header row
@@ -127,8 +125,8 @@ export function fieldSheetCsv(sheet: FieldSheet): string {
   const opt = (v: number | null) => (v === null ? '' : decimal(v, u));
   // The two leading lines are single cells (quoted when they hold commas) so spreadsheets keep them whole.
   const lines = [
-    cell(`# Chordline field sheet: ${sheet.bridge.name.replace(/[\r\n]+/g, ' ')}; revision ${sheet.revision}; base rod ${decimal(sheet.base_rod_length, u)} ${u}${sheet.span ? `; span ${sheet.span}` : ''}`),
-    cell(`# Caution: ${sheet.caution}`),
+    csvCell(`# Chordline field sheet: ${sheet.bridge.name.replace(/[\r\n]+/g, ' ')}; revision ${sheet.revision}; base rod ${decimal(sheet.base_rod_length, u)} ${u}${sheet.span ? `; span ${sheet.span}` : ''}`),
+    csvCell(`# Caution: ${sheet.caution}`),
     header.join(','),
   ];
   for (const g of sheet.groups) {
@@ -151,7 +149,7 @@ export function fieldSheetCsv(sheet: FieldSheet): string {
           '',
           String(sheet.revision),
         ]
-          .map(cell)
+          .map(csvCell)
           .join(','),
       );
     }

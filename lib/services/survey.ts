@@ -13,6 +13,7 @@ import { DEFAULT_POINTS_PER_SPAN, type BridgeDescription } from '@/lib/geometry'
 import { parseSurveyCsv, type SurveyCsvReport, type SurveyFraming } from '@/lib/import/survey-csv';
 import { getRevisionDescription } from './bridges';
 import { audit } from './audit';
+import type { SurveyCsvRow } from '@/lib/import/survey-csv';
 
 /** Largest survey CSV text accepted, in characters (the JSON body limit is 1 MB). */
 export const MAX_SURVEY_CSV_CHARS = 900_000;
@@ -28,16 +29,8 @@ export const surveyUploadSchema = z.object({
 });
 export type SurveyUpload = z.infer<typeof surveyUploadSchema>;
 
-export type SurveyPreviewRow = {
-  line: number;
-  girder: string;
-  span: number | null;
-  point: number | null;
-  elevation: number | null;
-  problems: string[];
-  /** The stored value this row would replace, or null when the point has none yet. */
-  replaces: number | null;
-};
+/** A checked row of the file, with the stored value it would replace (null when the point has none yet). */
+export type SurveyPreviewRow = SurveyCsvRow & { replaces: number | null };
 
 export type SurveyPreview = {
   bridge_id: number;

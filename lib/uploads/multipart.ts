@@ -1,5 +1,6 @@
 import type { NextRequest } from 'next/server';
 import { HttpError } from '@/lib/api/errors';
+import { readBodyLimited } from '@/lib/api/body';
 
 /** Largest file accepted, in bytes (10 MB). */
 export const MAX_UPLOAD_BYTES = 10 * 1024 * 1024;
@@ -16,24 +17,9 @@ export async function readMultipart(req: NextRequest, limit = MAX_UPLOAD_BYTES):
   const type = req.headers.get('content-type') ?? '';
   if (!/^multipart\/form-data;/i.test(type)) throw new HttpError(400, 'Send the file as multipart/form-data in a field named "file".', { file: ['Choose a file.'] });
   const cap = limit + FRAMING_BYTES;
-  const declared = Number(req.headers.get('content-length') ?? '0');
-  if (declared > cap) throw tooLarge();
-  const reader = req.body?.getReader();
-  if (!reader) throw new HttpError(400, 'The request has no file.', { file: ['Choose a file.'] });
-  const chunks: Uint8Array[] = [];
-  let size = 0;
-  for (;;) {
-    const { done, value } = await reader.read();
-    if (done) break;
-    size += value.byteLength;
-    if (size > cap) {
-      await reader.cancel();
-      throw tooLarge();
-    }
-    chunks.push(value);
-  }
+  const body = await readBodyLimited(req, cap, tooLarge, () => new HttpError(400, 'The request has no file.', { file: ['Choose a file.'] }));
   try {
-    return await new Response(Buffer.concat(chunks), { headers: { 'content-type': type } }).formData();
+    return await new Response(new Uint8Array(body), { headers: { 'content-type': type } }).formData();
   } catch {
     throw new HttpError(400, 'The upload could not be read as multipart/form-data.', { file: ['Choose the file again and resend.'] });
   }
