@@ -318,6 +318,7 @@ export class Alignment {
    * @param x easting, @param y northing (length units).
    * @returns station (length units), offset (positive right) and the alignment's azimuth there.
    * Valid while the point lies nearer to the alignment than the radius of any curve it is inside of.
+   * @throws SolveError when x or y is not a finite number.
    */
   stationOffset(x: number, y: number): StationOffset {
     let best: StationOffset | null = null;
@@ -385,7 +386,8 @@ export class Alignment {
     }
     if (bestElement >= 0) this.lastElement = bestElement;
     if (bestElement >= 0) return elementStationOffset(this.elements[bestElement], x, y);
-    return best as StationOffset;
+    if (best === null) throw new SolveError(`the point (${x}, ${y}) cannot be placed against the alignment`);
+    return best;
   }
 }
 

@@ -116,7 +116,13 @@ export function buildOffsetTable(bridge: BridgeDescription, issues: GeometryIssu
         });
         continue;
       }
-      const gps = girderPoints(alignment, g.layout, pa, pb, n);
+      let gps: ReturnType<typeof girderPoints>;
+      try {
+        gps = girderPoints(alignment, g.layout, pa, pb, n);
+      } catch (err) {
+        issues.push({ path: `girders.${gi}`, span, girder: g.name, message: `Span ${span}, girder ${g.name}: its points cannot be placed (${solveProblem(err)})` });
+        continue;
+      }
       const faces = sides[gi];
       if (faces.length === 0) {
         for (const pk of gps) {

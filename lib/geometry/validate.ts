@@ -9,17 +9,25 @@ import { bridgeDescriptionSchema, DEFAULT_CHORD_SPACES, DEFAULT_POINTS_PER_SPAN,
 import { buildOffsetTable } from './table';
 import type { OffsetTable } from './types';
 
-function findNonFinite(value: unknown, path: string, out: GeometryIssue[]): void {
+/**
+ * Largest magnitude any number of a description may have (length units, degrees or ratios).
+ * State-plane coordinates and stations stay well below it; far larger values can only be typing
+ * errors, and sums of them would overflow to Infinity inside the solvers.
+ */
+export const MAX_MAGNITUDE = 1e9;
+
+function findUnusableNumbers(value: unknown, path: string, out: GeometryIssue[]): void {
   if (typeof value === 'number') {
     if (!Number.isFinite(value)) out.push({ path, message: `${path || 'A value'} must be a finite number (found ${value})` });
+    else if (Math.abs(value) > MAX_MAGNITUDE) out.push({ path, message: `${path || 'A value'} is ${value}, beyond the ±1,000,000,000 any bridge dimension can have` });
     return;
   }
   if (Array.isArray(value)) {
-    value.forEach((v, i) => findNonFinite(v, path ? `${path}.${i}` : String(i), out));
+    value.forEach((v, i) => findUnusableNumbers(v, path ? `${path}.${i}` : String(i), out));
     return;
   }
   if (value && typeof value === 'object') {
-    for (const [k, v] of Object.entries(value)) findNonFinite(v, path ? `${path}.${k}` : k, out);
+    for (const [k, v] of Object.entries(value)) findUnusableNumbers(v, path ? `${path}.${k}` : k, out);
   }
 }
 
@@ -29,7 +37,7 @@ function findNonFinite(value: unknown, path: string, out: GeometryIssue[]): void
  */
 export function checkDescription(bridge: BridgeDescription): GeometryIssue[] {
   const issues: GeometryIssue[] = [];
-  findNonFinite(bridge, '', issues);
+  findUnusableNumbers(bridge, '', issues);
   if (issues.length > 0) return issues;
   const u = bridge.units;
   const len = (v: number) => formatLength(v, u);

@@ -150,6 +150,21 @@ describe('large and awkward input', () => {
 });
 
 describe('hostile input never crashes the checks', () => {
+  it('numbers too large for any bridge are refused by name, not left to overflow the solvers', () => {
+    // Regression: an arc of radius and length Number.MAX_VALUE with a bent at station MAX_VALUE once
+    // crashed the inverse (found by the property below). Common practice: no real dimension nears 1e9.
+    const b = straightBridge({
+      alignment: { start_station: 0, start_x: 0, start_y: 0, start_bearing_deg: 0, elements: [{ type: 'line', length: 150 }, { type: 'arc', length: Number.MAX_VALUE, radius: Number.MAX_VALUE, direction: 'right' }] },
+      bents: [{ name: 'Bent 1', station: 120, skew_deg: 0 }, { name: 'Bent 2', station: Number.MAX_VALUE, skew_deg: 0 }],
+    });
+    const r = parseBridge(b);
+    expect(r.ok).toBe(false);
+    if (!r.ok && r.kind === 'geometry') {
+      expect(r.issues.map((i) => i.path)).toEqual(expect.arrayContaining(['alignment.elements.1.length', 'alignment.elements.1.radius', 'bents.1.station']));
+    }
+    expect(messages(b)).toMatch(/beyond the ±1,000,000,000/);
+  });
+
   it('parseBridge answers ok or a located problem for wild numbers (property)', async () => {
     const fc = (await import('fast-check')).default;
     const wild = fc.oneof(
