@@ -76,10 +76,17 @@ export function checkDescription(bridge: BridgeDescription): GeometryIssue[] {
     const prevEnd = pvis[i - 1].station + (pvis[i - 1].curve_length ?? 0) / 2;
     const start = pvis[i].station - (pvis[i].curve_length ?? 0) / 2;
     if (start < prevEnd - 1e-9) {
-      issues.push({
-        path: `profile.pvis.${i}.curve_length`,
-        message: `The vertical curves at PVI ${i} (${sta(pvis[i - 1].station)}) and PVI ${i + 1} (${sta(pvis[i].station)}) overlap: one ends at ${sta(prevEnd)}, the next begins at ${sta(start)}`,
-      });
+      const prevCurve = (pvis[i - 1].curve_length ?? 0) > 0;
+      const nextCurve = (pvis[i].curve_length ?? 0) > 0;
+      const a = `PVI ${i} (${sta(pvis[i - 1].station)})`;
+      const b = `PVI ${i + 1} (${sta(pvis[i].station)})`;
+      issues.push(
+        prevCurve && nextCurve
+          ? { path: `profile.pvis.${i}.curve_length`, message: `The vertical curves at ${a} and ${b} overlap: the first ends at ${sta(prevEnd)}, the second begins at ${sta(start)}` }
+          : prevCurve
+            ? { path: `profile.pvis.${i - 1}.curve_length`, message: `The vertical curve at ${a} ends at ${sta(prevEnd)}, beyond the next point of intersection, ${b}: shorten the curve` }
+            : { path: `profile.pvis.${i}.curve_length`, message: `The vertical curve at ${b} begins at ${sta(start)}, before the previous point of intersection, ${a}: shorten the curve` },
+      );
     }
   }
 

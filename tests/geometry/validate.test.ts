@@ -103,6 +103,17 @@ describe('geometric checks', () => {
     const b = straightBridge();
     const overlap = messages({ ...b, profile: { pvis: [{ station: 0, elevation: 100 }, { station: 200, elevation: 104, curve_length: 200 }, { station: 350, elevation: 101, curve_length: 150 }, { station: 600, elevation: 103 }] } });
     expect(overlap).toMatch(/vertical curves at PVI 2 \(2\+00\.00\) and PVI 3 \(3\+50\.00\) overlap/);
+    // A curve reaching past a neighbouring PVI that has no curve of its own is named alone:
+    // 200 − 250/2 = 75 < 100 (the PVI before it) and 200 + 250/2 = 325 > 300 (the PVI after it).
+    const before = parseBridge({ ...b, profile: { pvis: [{ station: 100, elevation: 100 }, { station: 200, elevation: 104, curve_length: 250 }, { station: 300, elevation: 101 }] } });
+    expect(before.ok).toBe(false);
+    if (!before.ok && before.kind === 'geometry') {
+      expect(before.issues.map((i) => i.message)).toEqual([
+        'The vertical curve at PVI 2 (2+00.00) begins at 0+75.00, before the previous point of intersection, PVI 1 (1+00.00): shorten the curve',
+        'The vertical curve at PVI 2 (2+00.00) ends at 3+25.00, beyond the next point of intersection, PVI 3 (3+00.00): shorten the curve',
+      ]);
+      expect(before.issues.map((i) => i.path)).toEqual(['profile.pvis.1.curve_length', 'profile.pvis.1.curve_length']);
+    }
     expect(messages({ ...b, profile: { pvis: [{ station: 0, elevation: 100, curve_length: 50 }, { station: 500, elevation: 104 }] } })).toMatch(/PVI 1: the first PVI cannot carry a vertical curve/);
     expect(messages({ ...b, profile: { pvis: [{ station: 300, elevation: 100 }, { station: 200, elevation: 104 }] } })).toMatch(/PVI 2 at 2\+00\.00 must be up-station of PVI 1/);
   });
