@@ -19,7 +19,7 @@ const csp = [
 const nextConfig = {
   // Tests build into their own folder so a running `npm start` is not disturbed.
   distDir: process.env.NEXT_DIST_DIR || '.next',
-  serverExternalPackages: ['sequelize', 'sqlite3', 'pg', 'pg-hstore', 'umzug', 'nodemailer', 'bcryptjs'],
+  serverExternalPackages: ['sequelize', 'sqlite3', 'pg', 'pg-hstore', 'umzug', 'nodemailer', 'bcryptjs', 'jimp'],
   poweredByHeader: false,
   async headers() {
     return [

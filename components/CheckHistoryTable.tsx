@@ -79,7 +79,7 @@ export default function CheckHistoryTable({ checks, units, currentRevision }: { 
                     p.content_type.startsWith('image/') ? (
                       <a key={p.id} href={p.url} target="_blank" rel="noopener" title={p.name}>
                         {/* eslint-disable-next-line @next/next/no-img-element */}
-                        <img src={p.url} alt={`Photo ${p.name} of check ${c.id}`} loading="lazy" className="h-12 w-16 rounded border border-concrete-300 object-cover" />
+                        <img src={p.thumbnail_url ?? p.url} alt={`Photo ${p.name} of check ${c.id}`} loading="lazy" className="h-12 w-16 rounded border border-concrete-300 object-cover" />
                       </a>
                     ) : (
                       <a key={p.id} href={p.url} className="text-xs text-brand-700 underline">

@@ -1,6 +1,8 @@
+// The server's own type, imported as a type only: nothing of the server code reaches the browser.
+import type { AttachmentJson } from '@/lib/services/attachments';
 import { dateTimeText } from './station-text';
 
-type Photo = { id: number; check_id: number | null; name: string; content_type: string; caption: string; url: string; by: string | null; created_at: string };
+type Photo = AttachmentJson;
 
 /** Photos and PDFs of the bridge, as thumbnails that open the full file. */
 export default function PhotoGallery({ items }: { items: Photo[] }) {
@@ -12,7 +14,7 @@ export default function PhotoGallery({ items }: { items: Photo[] }) {
           <a href={p.url} target={p.content_type.startsWith('image/') ? '_blank' : undefined} rel="noopener" className="block">
             {p.content_type.startsWith('image/') ? (
               // eslint-disable-next-line @next/next/no-img-element
-              <img src={p.url} alt={p.caption || p.name} loading="lazy" className="h-28 w-full bg-concrete-100 object-cover" />
+              <img src={p.thumbnail_url ?? p.url} alt={p.caption || p.name} loading="lazy" className="h-28 w-full bg-concrete-100 object-cover" />
             ) : (
               <span className="flex h-28 items-center justify-center bg-concrete-100 text-sm font-bold text-concrete-700">PDF</span>
             )}

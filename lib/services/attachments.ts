@@ -6,7 +6,9 @@ import { db } from '@/lib/db/connection';
 import { filePart, readMultipart } from '@/lib/uploads/multipart';
 import { sniffType } from '@/lib/uploads/sniff';
 import { neutraliseName, readUpload, removeUpload, saveUpload } from '@/lib/uploads/store';
+import { removeThumbnail, thumbnailOf } from '@/lib/uploads/thumbnail';
 import { Attachment, FieldCheck, User } from '@/models';
+import { attachmentUrls } from './attachment-urls';
 import { audit } from './audit';
 import { findBridgeById } from './tolerances';
 
@@ -19,6 +21,7 @@ export type AttachmentJson = {
   size: number;
   caption: string;
   url: string;
+  thumbnail_url: string | null;
   by: string | null;
   created_at: string;
 };
@@ -32,7 +35,7 @@ function toJson(a: Attachment, by: string | null): AttachmentJson {
     content_type: a.contentType,
     size: a.size,
     caption: a.caption,
-    url: `/api/attachments/${a.id}`,
+    ...attachmentUrls(a.id, a.contentType),
     by,
     created_at: a.createdAt.toISOString(),
   };
@@ -102,9 +105,13 @@ export async function uploadAttachment(user: SessionUser, bridgeId: string, req:
       );
       return a;
     });
+    // Make the thumbnail now, while the uploader waits anyway, so lists never wait for it. Best
+    // effort: a photo that cannot be decoded serves as its own thumbnail.
+    if (type.contentType.startsWith('image/')) await thumbnailOf(storedName, async () => Buffer.from(bytes)).catch(() => null);
     return toJson(row, user.name);
   } catch (err) {
     await removeUpload(storedName);
+    await removeThumbnail(storedName);
     throw err;
   }
 }
@@ -126,26 +133,36 @@ export function contentDisposition(kind: 'inline' | 'attachment', name: string):
   return `${kind}; filename="${ascii}"; filename*=UTF-8''${encodeURIComponent(name)}`;
 }
 
+/** Query of GET /api/attachments/:id: `size=thumb` asks for a photo's small JPEG. */
+export const attachmentQuerySchema = z.object({
+  size: z.enum(['full', 'thumb'], { error: 'size must be full or thumb.' }).optional().default('full'),
+});
+
 /**
  * The stored file as a response: the sniffed content type, nosniff, images inline and PDFs as a
- * download, a sandboxing CSP, private caching.
+ * download, a sandboxing CSP, private caching. With size "thumb", a photo's thumbnail (a JPEG at
+ * most 320 px on its longer side) or, when none can be made, the photo itself; PDFs have none (400).
  */
-export async function attachmentResponse(id: string): Promise<Response> {
+export async function attachmentResponse(id: string, size: 'full' | 'thumb' = 'full'): Promise<Response> {
   await db();
   const n = Number(id);
   const a = Number.isInteger(n) && n > 0 ? await Attachment.findByPk(n) : null;
   if (!a) throw new HttpError(404, 'There is no attachment with that id.');
-  let bytes: Buffer;
-  try {
-    bytes = await readUpload(a.storedName);
-  } catch {
-    throw new HttpError(404, 'The file of this attachment is missing from the server.');
-  }
   const image = a.contentType.startsWith('image/');
+  if (size === 'thumb' && !image) throw new HttpError(400, 'Only photos have thumbnails; ask for the file itself.', { size: ['Leave size out for a PDF.'] });
+  const original = async () => {
+    try {
+      return await readUpload(a.storedName);
+    } catch {
+      throw new HttpError(404, 'The file of this attachment is missing from the server.');
+    }
+  };
+  const thumb = size === 'thumb' ? await thumbnailOf(a.storedName, original) : null;
+  const bytes = thumb ?? (await original());
   return new Response(new Uint8Array(bytes), {
     status: 200,
     headers: {
-      'Content-Type': a.contentType,
+      'Content-Type': thumb ? 'image/jpeg' : a.contentType,
       'Content-Length': String(bytes.byteLength),
       'X-Content-Type-Options': 'nosniff',
       'Content-Disposition': contentDisposition(image ? 'inline' : 'attachment', a.originalName),

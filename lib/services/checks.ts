@@ -4,6 +4,7 @@ import type { SessionUser } from '@/lib/auth/session';
 import { db } from '@/lib/db/connection';
 import type { OffsetPoint, OffsetTable } from '@/lib/geometry';
 import { Attachment, FieldCheck, User } from '@/models';
+import { attachmentUrls } from './attachment-urls';
 import { audit } from './audit';
 import { offsetsForBridge } from './offsets';
 import { fieldSettingsOf, findBridgeById } from './tolerances';
@@ -37,7 +38,7 @@ export const createCheckSchema = z
 
 export type CheckInput = z.infer<typeof createCheckSchema>;
 
-export type CheckPhoto = { id: number; name: string; content_type: string; url: string };
+export type CheckPhoto = { id: number; name: string; content_type: string; url: string; thumbnail_url: string | null };
 
 /** A check as the API returns it: measured, computed, deviation (measured − computed) and verdict. */
 export type CheckJson = {
@@ -143,7 +144,7 @@ function toJson(c: FieldCheck, by: string | null, supersededBy: number | null, p
 }
 
 export function photoJson(a: Attachment): CheckPhoto {
-  return { id: a.id, name: a.originalName, content_type: a.contentType, url: `/api/attachments/${a.id}` };
+  return { id: a.id, name: a.originalName, content_type: a.contentType, ...attachmentUrls(a.id, a.contentType) };
 }
 
 /**

@@ -2,6 +2,7 @@
  * The field sheet: per span and exterior girder, the numbers a crew sets at each bracket and blank
  * columns for what the inspector measures. Built from the offset table of the bridge's latest revision.
  */
+import { z } from 'zod';
 import { formatFeet, formatFeetInches, formatMetres, formatStation, type OffsetTable } from '@/lib/geometry';
 import { HttpError } from '@/lib/api/errors';
 import { offsetsForBridge } from './offsets';
@@ -184,12 +185,15 @@ export async function loadFieldSheet(bridgeId: string, span: number | null): Pro
 }
 
 /** Reads `?span=` from a URL: null when absent, 400 when not a positive whole number. */
-export function spanParam(value: string | null): number | null {
-  if (value === null || value === '') return null;
-  const n = Number(value);
-  if (!Number.isInteger(n) || n <= 0) throw new HttpError(400, 'span must be a span number (1, 2, …).', { span: ['Give a whole span number, or leave it out for every span.'] });
-  return n;
-}
+/** Query of the field-sheet CSV: `span` picks one span (1, 2, …); absent or empty means every span. */
+export const fieldSheetQuerySchema = z.object({
+  span: z
+    .string()
+    .regex(/^\d*$/, 'Give a whole span number, or leave it out for every span.')
+    .optional()
+    .transform((v) => (v ? Number(v) : null))
+    .refine((n) => n === null || n > 0, 'Give a whole span number, or leave it out for every span.'),
+});
 
 /** CSV download of the sheet. */
 export async function fieldSheetCsvForBridge(bridgeId: string, span: number | null): Promise<{ filename: string; csv: string }> {

@@ -1,3 +1,4 @@
+import { z } from 'zod';
 import { computeOffsetTable, GeometryError, offsetTableToCsv, type BridgeDescription, type OffsetTable } from '@/lib/geometry';
 import { HttpError } from '@/lib/api/errors';
 import { Bridge } from '@/models';
@@ -15,6 +16,14 @@ export function computeChecked(bridge: BridgeDescription): OffsetTable {
     throw err;
   }
 }
+
+/** Query of POST /api/compute: `interior=1` (or true) adds the interior girders' rows. */
+export const computeQuerySchema = z.object({
+  interior: z
+    .enum(['0', '1', 'false', 'true'], { error: 'interior must be 1 (include interior girders) or 0.' })
+    .optional()
+    .transform((v) => v === '1' || v === 'true'),
+});
 
 /**
  * Offset table for a description posted to the compute API (400 schema, 422 geometry). Interior
@@ -53,18 +62,17 @@ export async function offsetsForBridge(id: string): Promise<{ bridge: Bridge; ta
 
 const STYLES = ['decimal-feet', 'feet-inches', 'metric'] as const;
 
-/**
- * CSV of a stored bridge's offset table in display units. `style` is decimal-feet (default),
- * feet-inches or metric; anything else is refused with 400.
- */
-export async function offsetsCsvForBridge(id: string, style: string | null): Promise<{ filename: string; csv: string }> {
-  if (style !== null && !(STYLES as readonly string[]).includes(style)) {
-    throw new HttpError(400, `Unknown style "${style}"; use ${STYLES.join(', ')}.`, { style: [`Use ${STYLES.join(', ')}.`] });
-  }
+/** Query of the offsets CSV: `style` of the display units, decimal-feet when absent. */
+export const offsetsCsvQuerySchema = z.object({
+  style: z.enum(STYLES, { error: `Use ${STYLES.join(', ')}.` }).optional().default('decimal-feet'),
+});
+
+/** CSV of a stored bridge's offset table in display units (decimal feet, feet-inches or metric). */
+export async function offsetsCsvForBridge(id: string, style: (typeof STYLES)[number]): Promise<{ filename: string; csv: string }> {
   const { bridge, table } = await offsetsForBridge(id);
   const safeName = bridge.name.replace(/[^A-Za-z0-9._-]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 80) || 'bridge';
   return {
     filename: `${safeName}-rev${bridge.currentRevision}-offsets.csv`,
-    csv: offsetTableToCsv(table, { style: (style ?? 'decimal-feet') as (typeof STYLES)[number] }),
+    csv: offsetTableToCsv(table, { style }),
   };
 }

@@ -8,6 +8,8 @@ import * as audit from '@/app/api/bridges/[id]/audit/route';
 import { Attachment } from '@/models';
 import { neutraliseName } from '@/lib/uploads/store';
 import { sniffType } from '@/lib/uploads/sniff';
+import { thumbsDir } from '@/lib/uploads/thumbnail';
+import { Jimp } from 'jimp';
 import { call, makeUsers, type TestUser } from './helpers';
 import { callRaw, demoBridge, engineRow, JPEG_START, multipartRequest, PNG_1X1 } from './field-helpers';
 import type { Role } from '@/lib/auth/roles';
@@ -108,7 +110,9 @@ describe('POST /api/bridges/:id/attachments', () => {
     expect(res.json.check_id).toBe(check.json.id);
     const list = await call(checks.GET, { cookie: people.crew.cookie, params: { id: bridgeId } });
     const shown = list.json.find((c: { id: number }) => c.id === check.json.id);
-    expect(shown.photos).toEqual([{ id: res.json.id, name: 'g1-p2.png', content_type: 'image/png', url: `/api/attachments/${res.json.id}` }]);
+    expect(shown.photos).toEqual([
+      { id: res.json.id, name: 'g1-p2.png', content_type: 'image/png', url: `/api/attachments/${res.json.id}`, thumbnail_url: `/api/attachments/${res.json.id}?size=thumb` },
+    ]);
 
     const other = await demoBridge(people.engineer);
     const before = await Attachment.count();
@@ -138,6 +142,72 @@ describe('POST /api/bridges/:id/attachments', () => {
     expect(sniffType(Buffer.from([0xff, 0xd8]))).toBeNull();
   });
 });
+
+describe('GET /api/attachments/:id?size=thumb', () => {
+  const get = async (id: number, query = '') => {
+    const { NextRequest } = await import('next/server');
+    const req = new NextRequest(new URL(`/api/attachments/${id}${query}`, 'http://localhost:3000'), { headers: { cookie: people.crew.cookie } });
+    return callRaw(attachment.GET, req, { id: String(id) });
+  };
+
+  it('serves a photo as a small upright JPEG, made at upload and kept in the cache, not in the uploads', async () => {
+    // A 1600 × 1200 photo whose EXIF orientation is 6 ("rotate 90° clockwise to view"; EXIF 2.32,
+    // tag 0x0112): shown upright it is 1200 wide by 1600 high, so its thumbnail is 240 × 320.
+    const photo = withExifOrientation(await new Jimp({ width: 1600, height: 1200, color: 0x4080c0ff }).getBuffer('image/jpeg'), 6);
+    const res = await upload('inspector', { bytes: photo, name: 'deck edge.jpg', type: 'image/jpeg' });
+    expect(res.status).toBe(201);
+    expect(res.json.thumbnail_url).toBe(`/api/attachments/${res.json.id}?size=thumb`);
+    const made = fs.readdirSync(thumbsDir());
+    expect(made).toContain(`${(await Attachment.findByPk(res.json.id))!.storedName.slice(0, 32)}.jpg`);
+
+    const thumb = await get(res.json.id, '?size=thumb');
+    expect(thumb.status).toBe(200);
+    expect(thumb.headers.get('content-type')).toBe('image/jpeg');
+    expect(thumb.body.byteLength).toBeLessThan(photo.byteLength / 4);
+    const seen = await Jimp.fromBuffer(thumb.body);
+    expect([seen.bitmap.width, seen.bitmap.height]).toEqual([240, 320]);
+    // The full size is still the photo itself, byte for byte.
+    expect((await get(res.json.id, '?size=full')).body.equals(photo)).toBe(true);
+    expect((await get(res.json.id)).body.equals(photo)).toBe(true);
+  });
+
+  it('makes a missing thumbnail again on request; a tiny photo is never enlarged', async () => {
+    const res = await upload('inspector', { bytes: PNG_1X1, name: 'dot.png', type: 'image/png' });
+    fs.rmSync(thumbsDir(), { recursive: true, force: true });
+    const thumb = await get(res.json.id, '?size=thumb');
+    expect(thumb.status).toBe(200);
+    const seen = await Jimp.fromBuffer(thumb.body);
+    expect([seen.bitmap.width, seen.bitmap.height]).toEqual([1, 1]);
+    expect(fs.readdirSync(thumbsDir())).toHaveLength(1);
+  });
+
+  it('serves a photo it cannot decode as itself; a PDF has no thumbnail (400); an unknown size is a 400', async () => {
+    const damaged = await upload('inspector', { bytes: JPEG_START, name: 'cut-off.jpg', type: 'image/jpeg' });
+    const raw = await get(damaged.json.id, '?size=thumb');
+    expect(raw.status).toBe(200);
+    expect(raw.body.equals(JPEG_START)).toBe(true);
+    expect(raw.headers.get('content-type')).toBe('image/jpeg');
+
+    const pdf = await upload('inspector', { bytes: Buffer.from('%PDF-1.4\n%%EOF\n'), name: 'plan.pdf', type: 'application/pdf' });
+    expect(pdf.json.thumbnail_url).toBeNull();
+    const noThumb = await get(pdf.json.id, '?size=thumb');
+    expect(noThumb.status).toBe(400);
+    expect(noThumb.json.fields.size).toBeDefined();
+    const odd = await get(pdf.json.id, '?size=huge');
+    expect(odd.status).toBe(400);
+    expect(odd.json.fields.size).toEqual(['size must be full or thumb.']);
+  });
+});
+
+/** The JPEG with an APP1 EXIF segment holding one IFD0 entry: Orientation (0x0112, SHORT) = `value`. */
+function withExifOrientation(jpeg: Buffer, value: number): Buffer {
+  // EXIF 2.32 / TIFF 6.0 layout: "Exif\0\0", big-endian TIFF header, IFD0 at offset 8 with one entry.
+  const tiff = Buffer.from([0x4d, 0x4d, 0x00, 0x2a, 0x00, 0x00, 0x00, 0x08, 0x00, 0x01, 0x01, 0x12, 0x00, 0x03, 0x00, 0x00, 0x00, 0x01, 0x00, value, 0x00, 0x00, 0x00, 0x00, 0x00, 0x00]);
+  const payload = Buffer.concat([Buffer.from('Exif\0\0', 'latin1'), tiff]);
+  const length = Buffer.alloc(2);
+  length.writeUInt16BE(payload.length + 2);
+  return Buffer.concat([jpeg.subarray(0, 2), Buffer.from([0xff, 0xe1]), length, payload, jpeg.subarray(2)]);
+}
 
 async function anonymousGet(id: number) {
   const { NextRequest } = await import('next/server');

@@ -63,6 +63,9 @@ describe('POST /api/compute', () => {
     const all = await call(compute.POST, { method: 'POST', path: '/api/compute?interior=1', cookie: people.crew.cookie, body: demoBridges[0] });
     expect(all.json.points.length).toBe(direct.points.length);
     expect(all.json.points.filter((p: { side: string }) => p.side === 'interior').length).toBeGreaterThan(0);
+    const odd = await call(compute.POST, { method: 'POST', path: '/api/compute?interior=maybe', cookie: people.crew.cookie, body: demoBridges[0] });
+    expect(odd.status).toBe(400);
+    expect(odd.json.fields.interior).toEqual(['interior must be 1 (include interior girders) or 0.']);
   });
 
   it('answers 400 with field errors for a bad schema and 422 naming the girder for bad geometry', async () => {

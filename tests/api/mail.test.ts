@@ -63,6 +63,21 @@ describe('POST /api/bridges/:id/send-sheet without an SMTP server (local outbox)
     expect(csvPart?.body).toBe(await csvOf(1));
   });
 
+  it('serves the sheet CSV for one span or all; a span that is not a whole number or does not exist is a 400', async () => {
+    const get = (query: string) => call(sheetCsv.GET, { cookie: people.crew.cookie, params: { id: bridgeId }, path: `/api/bridges/${bridgeId}/field-sheet.csv${query}` });
+    const all = await get('');
+    const one = await get('?span=2');
+    expect(all.status).toBe(200);
+    expect(one.status).toBe(200);
+    expect(one.text.length).toBeLessThan(all.text.length);
+    expect((await get('?span=')).text).toBe(all.text);
+    for (const bad of ['?span=two', '?span=0', '?span=1.5', '?span=-1', '?span=99']) {
+      const res = await get(bad);
+      expect(res.status, bad).toBe(400);
+      expect(res.json.fields.span, bad).toBeDefined();
+    }
+  });
+
   it('refuses a bad address with 400 and sends nothing', async () => {
     const before = await OutboxMessage.count();
     for (const to of [['not-an-address'], [], 'someone@example.com', ['ok@example.com', 'bad@']]) {

@@ -1,8 +1,9 @@
 import { withRole } from '@/lib/api/with-role';
-import { fieldSheetCsvForBridge, spanParam } from '@/lib/services/field-sheet';
+import { readQuery } from '@/lib/api/query';
+import { fieldSheetCsvForBridge, fieldSheetQuerySchema } from '@/lib/services/field-sheet';
 
 export const GET = withRole<{ id: string }>('signed-in', undefined, async ({ req, params }) => {
-  const { filename, csv } = await fieldSheetCsvForBridge(params.id, spanParam(req.nextUrl.searchParams.get('span')));
+  const { filename, csv } = await fieldSheetCsvForBridge(params.id, readQuery(req, fieldSheetQuerySchema).span);
   return new Response(csv, {
     headers: { 'Content-Type': 'text/csv; charset=utf-8', 'Content-Disposition': `attachment; filename="${filename}"`, 'X-Content-Type-Options': 'nosniff' },
   });
