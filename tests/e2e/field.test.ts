@@ -98,6 +98,13 @@ describe('field mode on a phone', () => {
 
     // Where the top of girder was not surveyed, field mode says so instead of offering a reading box.
     await expect.poll(() => page.getByText(/not surveyed at this point/).count()).toBe(1);
+
+    // The check history shows the photo as its small thumbnail, not the whole file.
+    await page.goto(`${baseUrl}/bridges/${id}/checks`);
+    const thumb = page.locator('img[alt^="Photo bracket.png of check"]').first();
+    await thumb.waitFor();
+    expect(await thumb.getAttribute('src')).toMatch(/^\/api\/attachments\/\d+\?size=thumb$/);
+    await expect.poll(() => thumb.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth)).toBe(1);
     expect(errors).toEqual([]);
     await context.close();
   });
