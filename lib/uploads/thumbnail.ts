@@ -1,23 +1,62 @@
 import fs from 'node:fs/promises';
 import path from 'node:path';
-import { Jimp } from 'jimp';
+import { Worker } from 'node:worker_threads';
 import { dataDir } from '@/lib/config';
+import { photoPixels } from './pixels';
 
 /** Longest side of a thumbnail, pixels: sharp on a phone's 2× screen at the 160 px the lists show. */
 export const THUMBNAIL_SIDE = 320;
 
+/** Largest photo decoded for a thumbnail, megapixels (phone cameras give 12–50); larger serve themselves. */
+export const MAX_SOURCE_MEGAPIXELS = 64;
+
+// Runs in a worker thread so decoding a large photo never stalls the server's other requests. The
+// worker is CommonJS code evaluated in place; `jimp` resolves from the working directory, which is the
+// project folder for `npm start` (next start) and for the tests.
+const WORKER_SOURCE = `
+const { parentPort, workerData } = require('node:worker_threads');
+const { Jimp } = require('jimp');
+(async () => {
+  const { bytes, side } = workerData;
+  const image = await Jimp.fromBuffer(Buffer.from(bytes));
+  const { width, height } = image.bitmap;
+  const scale = Math.min(1, side / Math.max(width, height));
+  if (scale < 1) image.resize({ w: Math.max(1, Math.round(width * scale)), h: Math.max(1, Math.round(height * scale)) });
+  parentPort.postMessage({ ok: true, bytes: await image.getBuffer('image/jpeg', { quality: 75 }) });
+})().catch((err) => parentPort.postMessage({ ok: false, error: String((err && err.message) || err) }));
+`;
+
+function decodeInWorker(bytes: Uint8Array): Promise<Buffer> {
+  return new Promise((resolve, reject) => {
+    const worker = new Worker(WORKER_SOURCE, { eval: true, workerData: { bytes, side: THUMBNAIL_SIDE }, resourceLimits: { maxOldGenerationSizeMb: 256 } });
+    worker.once('message', (m: { ok: true; bytes: Uint8Array } | { ok: false; error: string }) => {
+      if (m.ok) resolve(Buffer.from(m.bytes));
+      else reject(new Error(m.error));
+      void worker.terminate();
+    });
+    worker.once('error', reject);
+    worker.once('exit', (code) => reject(new Error(`thumbnail worker stopped (${code})`)));
+  });
+}
+
+// One decode at a time: a burst of uploads queues instead of holding several full-size photos in memory.
+let queue: Promise<unknown> = Promise.resolve();
+
 /**
  * A small JPEG of a JPEG or PNG photo (the pure-JavaScript decoders; WebP has none that runs on the
- * server without fetching WebAssembly, so WebP photos serve as their own thumbnail): turned upright by its EXIF orientation, scaled so its longer side is at
- * most {@link THUMBNAIL_SIDE} pixels (never enlarged), quality 75.
- * @throws when the bytes cannot be decoded as an image.
+ * server without fetching WebAssembly, so WebP photos serve as their own thumbnail): turned upright by
+ * its EXIF orientation, scaled so its longer side is at most {@link THUMBNAIL_SIDE} pixels (never
+ * enlarged), quality 75. Decoded in a worker thread, one photo at a time.
+ * @throws when the header cannot be read, the photo is over {@link MAX_SOURCE_MEGAPIXELS}, or the
+ * bytes do not decode.
  */
-export async function makeThumbnail(bytes: Uint8Array): Promise<Buffer> {
-  const image = await Jimp.fromBuffer(Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength));
-  const { width, height } = image.bitmap;
-  const scale = Math.min(1, THUMBNAIL_SIDE / Math.max(width, height));
-  if (scale < 1) image.resize({ w: Math.max(1, Math.round(width * scale)), h: Math.max(1, Math.round(height * scale)) });
-  return image.getBuffer('image/jpeg', { quality: 75 });
+export function makeThumbnail(bytes: Uint8Array): Promise<Buffer> {
+  const size = photoPixels(bytes);
+  if (!size) return Promise.reject(new Error('The photo header cannot be read'));
+  if (size.width * size.height > MAX_SOURCE_MEGAPIXELS * 1e6) return Promise.reject(new Error('The photo is too large to decode for a thumbnail'));
+  const run = queue.then(() => decodeInWorker(bytes));
+  queue = run.catch(() => undefined);
+  return run;
 }
 
 /** Folder of made thumbnails. */

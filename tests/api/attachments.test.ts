@@ -1,5 +1,6 @@
 import fs from 'node:fs';
 import path from 'node:path';
+import zlib from 'node:zlib';
 import { beforeAll, describe, expect, it } from 'vitest';
 import * as attachments from '@/app/api/bridges/[id]/attachments/route';
 import * as attachment from '@/app/api/attachments/[id]/route';
@@ -8,7 +9,7 @@ import * as audit from '@/app/api/bridges/[id]/audit/route';
 import { Attachment } from '@/models';
 import { neutraliseName } from '@/lib/uploads/store';
 import { sniffType } from '@/lib/uploads/sniff';
-import { thumbsDir } from '@/lib/uploads/thumbnail';
+import { makeThumbnail, thumbsDir } from '@/lib/uploads/thumbnail';
 import { Jimp } from 'jimp';
 import { call, makeUsers, type TestUser } from './helpers';
 import { callRaw, demoBridge, engineRow, JPEG_START, multipartRequest, PNG_1X1 } from './field-helpers';
@@ -179,6 +180,21 @@ describe('GET /api/attachments/:id?size=thumb', () => {
     const seen = await Jimp.fromBuffer(thumb.body);
     expect([seen.bitmap.width, seen.bitmap.height]).toEqual([1, 1]);
     expect(fs.readdirSync(thumbsDir())).toHaveLength(1);
+  });
+
+  it('does not decode a photo whose header claims more pixels than any camera: it serves itself', async () => {
+    // A PNG whose IHDR (PNG spec §11.2.2) claims 40000 × 40000 pixels: 6.4 GB once decoded.
+    const bomb = Buffer.from(PNG_1X1);
+    bomb.writeUInt32BE(40000, 16);
+    bomb.writeUInt32BE(40000, 20);
+    bomb.writeUInt32BE(zlib.crc32(bomb.subarray(12, 29)), 29); // the chunk's CRC over type and data (§5.3)
+    await expect(makeThumbnail(bomb)).rejects.toThrow(/too large to decode/);
+    const res = await upload('inspector', { bytes: bomb, name: 'huge.png', type: 'image/png' });
+    expect(res.status).toBe(201);
+    const thumb = await get(res.json.id, '?size=thumb');
+    expect(thumb.status).toBe(200);
+    expect(thumb.body.equals(bomb)).toBe(true);
+    expect(thumb.headers.get('content-type')).toBe('image/png');
   });
 
   it('serves a photo it cannot decode as itself; a PDF has no thumbnail (400); an unknown size is a 400', async () => {
