@@ -117,10 +117,14 @@ export function checkDescription(bridge: BridgeDescription): GeometryIssue[] {
     if (i > 0 && !(b.station > bents[i - 1].station)) {
       issues.push({ path: `bents.${i}.station`, message: `${b.name} at ${sta(b.station)} must be up-station of ${bents[i - 1].name} at ${sta(bents[i - 1].station)}` });
     }
-    if (b.station < al.start_station || b.station > alignmentEnd) {
+    // A bent at an end station typed or summed in another program may differ from this sum by
+    // rounding noise; anything further out is off the alignment.
+    const outside = Math.max(al.start_station - b.station, b.station - alignmentEnd);
+    if (outside > ON_ALIGNMENT_TOLERANCE) {
+      const by = outside >= 0.005 ? len(outside) : `${outside.toPrecision(2)} ${u}`;
       issues.push({
         path: `bents.${i}.station`,
-        message: `${b.name} at ${sta(b.station)} is off the alignment, which runs from ${sta(al.start_station)} to ${sta(alignmentEnd)}`,
+        message: `${b.name} at ${sta(b.station)} is off the alignment, which runs from ${sta(al.start_station)} to ${sta(alignmentEnd)} (${by} ${b.station < al.start_station ? 'before its start' : 'beyond its end'})`,
       });
     }
     if (!(Math.abs(b.skew_deg) < 90)) {
@@ -193,6 +197,12 @@ export function checkDescription(bridge: BridgeDescription): GeometryIssue[] {
 
   return issues;
 }
+
+/**
+ * How far (length units) a bent's station may lie outside the alignment's first and last stations and
+ * still count as on it: rounding noise of a sum of element lengths, far below any printed precision.
+ */
+export const ON_ALIGNMENT_TOLERANCE = 1e-6;
 
 /** Most girder points one description may ask for (girders × spans × (points per span + 1)). */
 export const MAX_GIRDER_POINTS = 250_000;

@@ -75,6 +75,19 @@ describe('geometric checks', () => {
     const b = straightBridge();
     expect(messages({ ...b, bents: [b.bents[0], { name: 'Bent 2', station: 520, skew_deg: 0 }] })).toMatch(/Bent 2 at 5\+20\.00 is off the alignment, which runs from 0\+00\.00 to 5\+00\.00/);
     expect(messages({ ...b, bents: [b.bents[1], b.bents[0]] })).toMatch(/Bent 1 at 1\+00\.00 must be up-station of Bent 2 at 2\+00\.00/);
+    // Just past the end by a thousandth of a foot: refused, saying by how much.
+    expect(messages({ ...b, bents: [b.bents[0], { name: 'Bent 2', station: 500.001, skew_deg: 0 }] })).toMatch(/Bent 2 at 5\+00\.00 is off the alignment.*\(0\.0010 ft beyond its end\)/);
+    expect(messages({ ...b, bents: [{ name: 'Bent 1', station: -0.5, skew_deg: 0 }, b.bents[1]] })).toMatch(/\(0\.50 ft before its start\)/);
+  });
+
+  it('takes a bent at the end station give or take rounding noise (common practice: stations summed elsewhere)', () => {
+    const b = straightBridge();
+    const end = b.alignment.start_station + b.alignment.elements.reduce((s, e) => s + e.length, 0);
+    const at = (station: number) => computeOffsetTable({ ...b, bents: [b.bents[0], { name: 'Bent 2', station, skew_deg: 0 }] });
+    const exact = at(end);
+    const noisy = at(end + 1e-9);
+    expect(noisy.points.length).toBe(exact.points.length);
+    for (let i = 0; i < exact.points.length; i++) expect(Math.abs((noisy.points[i].edge_width ?? 0) - (exact.points[i].edge_width ?? 0))).toBeLessThan(1e-8);
   });
 
   it('counts offsets against bents and spots duplicate girder names', () => {
