@@ -71,26 +71,19 @@ export function girderPoints(
 
 /**
  * Which deck edges each girder faces, judged by offsets at the FIRST bent: the most negative offset
- * faces the left edge, the most positive the right edge; a lone girder faces both. Ties go to the
- * first girder in input order for the left edge and the last for the right, so two girders never
- * share an edge.
+ * faces the left edge, the most positive the right edge. A tie goes to the girder listed first, on
+ * either side (as a minimum or maximum search that keeps the first it finds); so a lone girder, or
+ * girders that all share one offset at the first bent, leave the first girder facing both edges.
  * @returns for each girder index, the sides it faces (empty for interior girders).
  */
 export function exteriorSides(girders: readonly GirderInput[]): Array<Array<'left' | 'right'>> {
   const sides: Array<Array<'left' | 'right'>> = girders.map(() => []);
   if (girders.length === 0) return sides;
   let left = 0;
-  let right = girders.length - 1;
-  for (let g = 0; g < girders.length; g++) {
+  let right = 0;
+  for (let g = 1; g < girders.length; g++) {
     if (girders[g].offsets[0] < girders[left].offsets[0]) left = g;
-  }
-  for (let g = girders.length - 1; g >= 0; g--) {
     if (girders[g].offsets[0] > girders[right].offsets[0]) right = g;
-  }
-  if (girders.length > 1 && left === right) {
-    // All girders at the same offset: keep the input order as the tie-break.
-    left = 0;
-    right = girders.length - 1;
   }
   sides[left].push('left');
   sides[right].push('right');

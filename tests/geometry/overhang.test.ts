@@ -83,6 +83,18 @@ describe('straight square bridge (hand-checkable)', () => {
     expect(Math.abs((t.points.find((p) => p.side === 'right')?.edge_width ?? NaN) - 18)).toBeLessThan(TOL);
   });
 
+  it('a tie at the first bent goes to the girder listed first, on either side', () => {
+    // Data contract: exterior girders by offset at the first bent; on a tie, the first listed (the
+    // result of a minimum or maximum search that keeps the first it finds; common practice).
+    const g = (name: string, a: number, b: number) => ({ name, layout: 'chord' as const, offsets: [a, b] });
+    const t = computeOffsetTable(straightBridge({ girders: [g('G1', 6, 6), g('G2', -12, -14), g('G3', 12, 14), g('G4', -12, -10), g('G5', 12, 10)] }));
+    const facing = (side: 'left' | 'right') => [...new Set(t.points.filter((p) => p.side === side).map((p) => p.girder))];
+    expect(facing('left')).toEqual(['G2']);
+    expect(facing('right')).toEqual(['G3']);
+    const same = computeOffsetTable(straightBridge({ girders: [g('G1', 3, 3), g('G2', 3, 3)] }));
+    expect([...new Set(same.points.filter((p) => p.side !== 'interior').map((p) => p.girder))]).toEqual(['G1']);
+  });
+
   it('orders points by span, then girder in input order, then point', () => {
     const t = computeOffsetTable(straightBridge({ bents: [{ name: 'A', station: 100, skew_deg: 0 }, { name: 'B', station: 200, skew_deg: 0 }, { name: 'C', station: 300, skew_deg: 0 }], girders: [{ name: 'G1', layout: 'chord', offsets: [-16, -16, -16] }, { name: 'G2', layout: 'chord', offsets: [16, 16, 16] }] }));
     const keys = t.points.map((p) => `${p.span}-${p.girder}-${String(p.point).padStart(2, '0')}`);
