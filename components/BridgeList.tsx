@@ -3,6 +3,7 @@
 import Link from 'next/link';
 import useSWR from 'swr';
 import { fetcher, type ApiError } from './api-client';
+import { LoadFailed, Loading } from './LoadState';
 import { dateTimeText } from './station-text';
 
 type BridgeSummary = { id: number; name: string; units: 'ft' | 'm'; revision: number; updatedAt: string };
@@ -14,21 +15,10 @@ export default function BridgeList({ canCreate }: { canCreate: boolean }) {
   const { data, error, isLoading, mutate } = useSWR<BridgeSummary[], ApiError>('/api/bridges', fetcher);
 
   if (error) {
-    return (
-      <div role="alert" className="card p-6">
-        <p className="text-fail-600">{error.message}</p>
-        <button type="button" className="btn-secondary mt-3" onClick={() => void mutate()}>
-          Try again
-        </button>
-      </div>
-    );
+    return <LoadFailed error={error} retry={() => void mutate()} />;
   }
   if (isLoading || !data) {
-    return (
-      <p role="status" className="text-concrete-600">
-        Loading bridges…
-      </p>
-    );
+    return <Loading>Loading bridges…</Loading>;
   }
   if (data.length === 0) {
     return (

@@ -5,6 +5,7 @@ import useSWR from 'swr';
 import type { DisplayStyle } from '@/lib/geometry/format';
 import type { SpanSummary } from '@/lib/geometry/types';
 import { fetcher, type ApiError } from './api-client';
+import { LoadFailed, Loading } from './LoadState';
 import ChartOverhangStrips from './ChartOverhangStrips';
 import type { ChartBent } from './ChartStrip';
 import ChordOffsetTable from './ChordOffsetTable';
@@ -92,21 +93,10 @@ export default function OffsetTables({ bridgeId, bents }: { bridgeId: number; be
 
   if (error) {
     if (error.status === 422) return <GeometryProblem message={error.message} title="The offset table cannot be computed for this revision" />;
-    return (
-      <div role="alert" className="card p-6">
-        <p className="text-fail-600">{error.message}</p>
-        <button type="button" className="btn-secondary mt-3" onClick={() => void mutate()}>
-          Try again
-        </button>
-      </div>
-    );
+    return <LoadFailed error={error} retry={() => void mutate()} />;
   }
   if (isLoading || !data) {
-    return (
-      <p role="status" className="text-concrete-600">
-        Computing the offset table…
-      </p>
-    );
+    return <Loading>Computing the offset table…</Loading>;
   }
   if (exterior.length === 0) {
     return <p className="card p-6 text-concrete-700">This revision has no exterior girder points. Check the girders and bents in its description.</p>;

@@ -3,6 +3,7 @@
 import useSWR from 'swr';
 import AddUserForm from './AddUserForm';
 import { fetcher, type ApiError } from './api-client';
+import { LoadFailed, Loading } from './LoadState';
 import type { PublicUserRow } from './public-user';
 import UserRow from './UserRow';
 
@@ -12,16 +13,9 @@ export default function UserAdmin({ selfId }: { selfId: number }) {
   return (
     <div className="space-y-6">
       {error ? (
-        <div role="alert" className="card p-6">
-          <p className="text-fail-600">{error.message}</p>
-          <button type="button" className="btn-secondary mt-3" onClick={() => void mutate()}>
-            Try again
-          </button>
-        </div>
+        <LoadFailed error={error} retry={() => void mutate()} />
       ) : isLoading || !data ? (
-        <p role="status" className="text-concrete-600">
-          Loading users…
-        </p>
+        <Loading>Loading users…</Loading>
       ) : (
         <div className="card overflow-x-auto">
           <table className="w-full text-left text-sm">
