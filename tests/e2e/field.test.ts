@@ -1,3 +1,4 @@
+import { Jimp } from 'jimp';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { launchChromium, signIn, trackPageErrors } from './browser';
@@ -59,7 +60,7 @@ describe('field mode on a phone', () => {
     await expect.poll(() => page.getByTestId('field-result').textContent()).toMatch(/Saved as check #\d+/);
 
     // A photo for that check, as the phone's camera would hand it over.
-    const png = Buffer.from('iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mP8z8BQDwAEhQGAhKmMIQAAAABJRU5ErkJggg==', 'base64');
+    const png = await new Jimp({ width: 640, height: 480, color: 0x5a7d9aff }).getBuffer('image/png');
     await page.locator('input[type=file]').setInputFiles({ name: 'bracket.png', mimeType: 'image/png', buffer: png });
     await expect.poll(() => page.getByText(/Photo attached to check #\d+/).count()).toBe(1);
 
@@ -99,12 +100,13 @@ describe('field mode on a phone', () => {
     // Where the top of girder was not surveyed, field mode says so instead of offering a reading box.
     await expect.poll(() => page.getByText(/not surveyed at this point/).count()).toBe(1);
 
-    // The check history shows the photo as its small thumbnail, not the whole file.
+    // The check history shows the photo as its thumbnail (made by the served app's worker: 320 px
+    // on the longer side), not the whole file.
     await page.goto(`${baseUrl}/bridges/${id}/checks`);
     const thumb = page.locator('img[alt^="Photo bracket.png of check"]').first();
     await thumb.waitFor();
     expect(await thumb.getAttribute('src')).toMatch(/^\/api\/attachments\/\d+\?size=thumb$/);
-    await expect.poll(() => thumb.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth)).toBe(1);
+    await expect.poll(() => thumb.evaluate((img: HTMLImageElement) => img.complete && [img.naturalWidth, img.naturalHeight].join('×'))).toBe('320×240');
     expect(errors).toEqual([]);
     await context.close();
   });
