@@ -1,3 +1,4 @@
+import crypto from 'node:crypto';
 import fs from 'node:fs/promises';
 import path from 'node:path';
 import { Worker } from 'node:worker_threads';
@@ -89,11 +90,16 @@ export async function thumbnailOf(storedName: string, original: () => Promise<Bu
   } catch {
     return null;
   }
-  await fs.mkdir(dir, { recursive: true });
-  // Write to a temporary name and rename, so a concurrent reader never sees half a file.
-  const tmp = `${file}.${process.pid}.${Date.now()}.tmp`;
-  await fs.writeFile(tmp, thumb);
-  await fs.rename(tmp, file);
+  // Keep it for next time: write to a unique temporary name and rename, so a concurrent reader never
+  // sees half a file. A cache that cannot be written costs only a decode next time.
+  const tmp = `${file}.${process.pid}.${crypto.randomBytes(6).toString('hex')}.tmp`;
+  try {
+    await fs.mkdir(dir, { recursive: true });
+    await fs.writeFile(tmp, thumb);
+    await fs.rename(tmp, file);
+  } catch {
+    await fs.rm(tmp, { force: true }).catch(() => undefined);
+  }
   return thumb;
 }
 

@@ -180,6 +180,12 @@ describe('GET /api/attachments/:id?size=thumb', () => {
     const seen = await Jimp.fromBuffer(thumb.body);
     expect([seen.bitmap.width, seen.bitmap.height]).toEqual([1, 1]);
     expect(fs.readdirSync(thumbsDir())).toHaveLength(1);
+    // Several lists opening at once, with the cache gone: every answer is the same whole thumbnail.
+    fs.rmSync(thumbsDir(), { recursive: true, force: true });
+    const all = await Promise.all(Array.from({ length: 6 }, () => get(res.json.id, '?size=thumb')));
+    expect(all.map((r) => r.status)).toEqual([200, 200, 200, 200, 200, 200]);
+    for (const r of all) expect(r.body.equals(thumb.body)).toBe(true);
+    expect(fs.readdirSync(thumbsDir())).toEqual(fs.readdirSync(thumbsDir()).filter((f) => f.endsWith('.jpg')));
   });
 
   it('does not decode a photo whose header claims more pixels than any camera: it serves itself', async () => {
