@@ -15,9 +15,12 @@ export async function currentUser(): Promise<SessionUser | null> {
   return loadSessionUser(id);
 }
 
-/** The signed-in user; sends the browser to the sign-in page when there is none. */
-export async function requireUser(): Promise<SessionUser> {
+/**
+ * The signed-in user; when there is none, sends the browser to the sign-in page, which brings it
+ * back to `returnTo` (this page's own path) afterwards, so a bookmarked or e-mailed link survives.
+ */
+export async function requireUser(returnTo?: string): Promise<SessionUser> {
   const user = await currentUser();
-  if (!user) redirect('/signin');
+  if (!user) redirect(returnTo ? `/signin?callbackUrl=${encodeURIComponent(returnTo)}` : '/signin');
   return user;
 }

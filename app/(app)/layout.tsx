@@ -1,11 +1,15 @@
 import AppRail from '@/components/AppRail';
 import SessionProvider from '@/components/SessionProvider';
-import { requireUser } from '@/components/server-session';
+import SignInRedirect from '@/components/SignInRedirect';
+import { currentUser } from '@/components/server-session';
 
 export const dynamic = 'force-dynamic';
 
 export default async function AppLayout({ children }: { children: React.ReactNode }) {
-  const user = await requireUser();
+  // Each page checks the session itself and knows its own address; the layout does not, so without a
+  // session it lets the browser go to the sign-in page with the address it asked for.
+  const user = await currentUser();
+  if (!user) return <SignInRedirect />;
   return (
     <SessionProvider>
       <a href="#main" className="sr-only focus:not-sr-only focus:fixed focus:left-2 focus:top-2 focus:z-50 focus:rounded-md focus:bg-white focus:px-3 focus:py-2 focus:text-brand-700">

@@ -88,4 +88,22 @@ describe('foundation in a real browser', () => {
     expect(page.url()).toMatch(/\/signin/);
     await page.close();
   });
+
+  it('a link opened while signed out comes back to its page after signing in', async () => {
+    const page = await browser.newPage();
+    const res = await page.goto(`${baseUrl}/bridges/1/checks`);
+    expect(res?.ok()).toBe(true);
+    await page.waitForURL(/\/signin\?callbackUrl=/);
+    expect(new URL(page.url()).searchParams.get('callbackUrl')).toBe('/bridges/1/checks');
+    for (let attempt = 0; attempt < 5; attempt++) {
+      await page.getByLabel(/e-?mail/i).fill('inspector@example.com');
+      await page.getByLabel(/password/i).fill('chordline-demo');
+      if (await page.getByRole('button', { name: /sign in/i }).isEnabled()) break;
+      await page.waitForTimeout(300);
+    }
+    await page.getByRole('button', { name: /sign in/i }).click();
+    await page.waitForURL(/\/bridges\/1\/checks$/);
+    expect(await page.getByRole('heading', { level: 1 }).textContent()).toMatch(/Checks/);
+    await page.close();
+  });
 });

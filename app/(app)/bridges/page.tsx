@@ -8,7 +8,7 @@ import { roleAllows } from '@/lib/auth/roles';
 export const metadata: Metadata = { title: 'Bridges' };
 
 export default async function BridgesPage() {
-  const user = await requireUser();
+  const user = await requireUser('/bridges');
   const canCreate = roleAllows(user.role, ['engineer']);
   return (
     <>

@@ -7,7 +7,7 @@ import Walkthrough from '@/scene/Walkthrough';
 export const metadata: Metadata = { title: 'Learn' };
 
 export default async function LearnPage() {
-  await requireUser();
+  await requireUser('/learn');
   return (
     <>
       <PageHeader

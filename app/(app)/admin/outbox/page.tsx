@@ -9,7 +9,7 @@ import { smtpUrl } from '@/lib/mail/send';
 export const metadata: Metadata = { title: 'Outbox' };
 
 export default async function OutboxPage() {
-  const user = await requireUser();
+  const user = await requireUser('/admin/outbox');
   if (user.role !== 'admin') {
     return <RoleNotice title="Administrators only (403)" message="Only an administrator can read the local mail outbox." />;
   }

@@ -7,7 +7,7 @@ import { requireUser } from '@/components/server-session';
 export const metadata: Metadata = { title: 'Users' };
 
 export default async function UsersPage() {
-  const user = await requireUser();
+  const user = await requireUser('/admin/users');
   if (user.role !== 'admin') {
     return (
       <RoleNotice

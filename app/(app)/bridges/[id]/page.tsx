@@ -23,8 +23,8 @@ export async function generateMetadata({ params }: { params: Params }): Promise<
 }
 
 export default async function BridgePage({ params }: { params: Params }) {
-  const user = await requireUser();
   const { id } = await params;
+  const user = await requireUser(`/bridges/${id}`);
   const { bridge, revisions } = await loadBridge(id);
   const unitName = bridge.units === 'm' ? 'metres (m)' : 'feet (ft)';
 

@@ -8,7 +8,7 @@ import { roleAllows } from '@/lib/auth/roles';
 export const metadata: Metadata = { title: 'New bridge' };
 
 export default async function NewBridgePage() {
-  const user = await requireUser();
+  const user = await requireUser('/bridges/new');
   if (!roleAllows(user.role, ['engineer'])) {
     return (
       <RoleNotice

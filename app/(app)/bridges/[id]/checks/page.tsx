@@ -27,8 +27,8 @@ function load(id: string) {
 }
 
 export default async function ChecksPage({ params }: { params: Params }) {
-  const user = await requireUser();
   const { id } = await params;
+  const user = await requireUser(`/bridges/${id}/checks`);
   const bridge = await load(id);
   const settings = fieldSettingsOf(bridge);
   const units = settings.units;

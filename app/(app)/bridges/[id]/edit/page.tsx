@@ -20,11 +20,11 @@ export async function generateMetadata({ params }: { params: Params }): Promise<
 }
 
 export default async function EditGeometryPage({ params }: { params: Params }) {
-  const user = await requireUser();
+  const { id } = await params;
+  const user = await requireUser(`/bridges/${id}/edit`);
   if (!roleAllows(user.role, ['engineer'])) {
     return <RoleNotice title="Editing needs an engineer" message="Only engineers and administrators change a bridge's geometry. You can still read the bridge, its offset table and its history." />;
   }
-  const { id } = await params;
   const { bridge } = await loadBridge(id);
   return (
     <>

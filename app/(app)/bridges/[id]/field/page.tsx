@@ -11,8 +11,8 @@ export const metadata: Metadata = { title: 'Field mode' };
 type Params = Promise<{ id: string }>;
 
 export default async function FieldPage({ params }: { params: Params }) {
-  const user = await requireUser();
   const { id } = await params;
+  const user = await requireUser(`/bridges/${id}/field`);
   const view = await loadFieldView(id);
   if (!view.ok || view.groups.length === 0) {
     return (

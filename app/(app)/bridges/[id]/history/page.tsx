@@ -22,8 +22,8 @@ function pick(value: string | string[] | undefined, known: Set<number>): number 
 }
 
 export default async function HistoryPage({ params, searchParams }: { params: Params; searchParams: Search }) {
-  const user = await requireUser();
   const { id } = await params;
+  const user = await requireUser(`/bridges/${id}/history`);
   const search = await searchParams;
   const { bridge, revisions } = await loadBridge(id);
   const known = new Set(revisions.map((r) => r.revision));

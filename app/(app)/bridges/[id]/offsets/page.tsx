@@ -19,8 +19,8 @@ function load(id: string) {
 }
 
 export default async function OffsetsPage({ params }: { params: Params }) {
-  const user = await requireUser();
   const { id } = await params;
+  const user = await requireUser(`/bridges/${id}/offsets`);
   const bridge = await load(id);
   const decimals = bridge.units === 'm' ? '0.001 m' : '0.01 ft';
   const bents = bridge.description.bents.map((b) => ({ name: b.name, station: b.station }));

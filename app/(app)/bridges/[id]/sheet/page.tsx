@@ -19,8 +19,8 @@ type Params = Promise<{ id: string }>;
 type Search = Promise<{ span?: string }>;
 
 export default async function SheetPage({ params, searchParams }: { params: Params; searchParams: Search }) {
-  const user = await requireUser();
   const { id } = await params;
+  const user = await requireUser(`/bridges/${id}/sheet`);
   const { span: spanText } = await searchParams;
   const view = await loadFieldView(id);
   const crumbs = (

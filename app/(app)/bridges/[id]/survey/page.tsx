@@ -20,8 +20,8 @@ async function load(id: string) {
 }
 
 export default async function SurveyPage({ params }: { params: Params }) {
-  const user = await requireUser();
   const { id } = await params;
+  const user = await requireUser(`/bridges/${id}/survey`);
   const { bridge, listing } = await load(id);
   const framing = framingOf(bridge.description);
   const canImport = roleAllows(user.role, ['engineer', 'inspector']);

@@ -1,5 +1,6 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import BridgeBreadcrumb from '@/components/BridgeBreadcrumb';
 import PageHeader from '@/components/PageHeader';
 import SafetyCaution from '@/components/SafetyCaution';
 import { requireUser } from '@/components/server-session';
@@ -11,16 +12,17 @@ import { orNotFound } from '../load-bridge';
 export const metadata: Metadata = { title: '3D view' };
 
 export default async function BridgeViewPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ stats?: string }> }) {
-  await requireUser();
   const { id } = await params;
+  await requireUser(`/bridges/${id}/view`);
   const { stats } = await searchParams;
   const data = await orNotFound(sceneDataForBridge(id));
   const offsetsHref = `/bridges/${data.id}/offsets`;
   return (
     <>
+      <BridgeBreadcrumb bridge={{ id: data.id, name: data.name }} here="3D view" />
       <PageHeader
         title={`${data.name}: 3D view`}
-        subtitle={`Revision ${data.revision} · drag to turn, scroll to zoom, right-drag to pan · lengths in ${data.table.units === 'm' ? 'metres' : 'feet'}`}
+        subtitle={`Revision ${data.revision} · drag to turn, scroll or pinch to zoom, right-drag or two-finger drag to pan · lengths in ${data.table.units === 'm' ? 'metres' : 'feet'}`}
         actions={
           <>
             <Link href={`/bridges/${data.id}`} className="btn-secondary">
