@@ -1,6 +1,6 @@
 'use client';
 
-import { useMemo, useRef, useState, type KeyboardEvent, type ReactNode } from 'react';
+import { useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
 import {
   computeOffsetTable,
   formatFeetInches,
@@ -86,7 +86,7 @@ export default function Walkthrough() {
   const [exaggeration, setExaggeration] = useState(STEPS[0].exaggeration);
   const [deltaT, setDeltaT] = useState(20);
   const [poseVersion, setPoseVersion] = useState(0);
-  const lastGood = useRef<{ table: OffsetTable; desc: ReturnType<typeof sandboxBridge> } | null>(null);
+  const lastGood = useRef<{ table: OffsetTable; desc: ReturnType<typeof sandboxBridge>; settings: SandboxSettings } | null>(null);
   const step = STEPS[stepIndex];
 
   const desc = useMemo(() => sandboxBridge(settings), [settings]);
@@ -97,9 +97,11 @@ export default function Walkthrough() {
       return { table: null, error: err instanceof GeometryError ? err.message : String(err) };
     }
   }, [desc]);
-  if (computed.table) lastGood.current = { table: computed.table, desc };
-  const shown = lastGood.current ?? { table: computeOffsetTable(sandboxBridge(DEFAULT_SANDBOX)), desc: sandboxBridge(DEFAULT_SANDBOX) };
+  if (computed.table) lastGood.current = { table: computed.table, desc, settings };
+  const shown = lastGood.current ?? { table: computeOffsetTable(sandboxBridge(DEFAULT_SANDBOX)), desc: sandboxBridge(DEFAULT_SANDBOX), settings: DEFAULT_SANDBOX };
   const table = shown.table;
+  // Every number in the steps comes from the deck in the picture: the last one the engine could build.
+  const built = shown.settings;
 
   const frame: SceneFrame = useMemo(() => frameForTable(table, exaggeration), [table, exaggeration]);
   const range = useMemo(() => edgeWidthRange(table), [table]);
@@ -114,16 +116,28 @@ export default function Walkthrough() {
     setExaggeration(STEPS[k].exaggeration);
     setPoseVersion((v) => v + 1);
   };
-  const onKey = (e: KeyboardEvent) => {
-    if ((e.target as HTMLElement).tagName === 'INPUT') return;
-    if (e.key === 'ArrowRight') {
-      e.preventDefault();
-      go(stepIndex + 1);
-    } else if (e.key === 'ArrowLeft') {
-      e.preventDefault();
-      go(stepIndex - 1);
-    }
-  };
+  // Arrow keys move between steps from anywhere on the page, except while a slider, a field or a
+  // radio button has the keys for itself.
+  const goRef = useRef(go);
+  goRef.current = go;
+  const stepRef = useRef(stepIndex);
+  stepRef.current = stepIndex;
+  useEffect(() => {
+    const onKey = (e: globalThis.KeyboardEvent) => {
+      if (e.defaultPrevented || e.altKey || e.ctrlKey || e.metaKey || e.shiftKey) return;
+      const t = e.target as HTMLElement | null;
+      if (t && (t.isContentEditable || ['INPUT', 'SELECT', 'TEXTAREA'].includes(t.tagName))) return;
+      if (e.key === 'ArrowRight') {
+        e.preventDefault();
+        goRef.current(stepRef.current + 1);
+      } else if (e.key === 'ArrowLeft') {
+        e.preventDefault();
+        goRef.current(stepRef.current - 1);
+      }
+    };
+    window.addEventListener('keydown', onKey);
+    return () => window.removeEventListener('keydown', onKey);
+  }, []);
   const set = (patch: Partial<SandboxSettings>) => {
     setSettings((s) => ({ ...s, ...patch }));
     // The bridge's centre moves with its size: bring the camera along.
@@ -138,9 +152,10 @@ export default function Walkthrough() {
   const prevRows = rowsOf(table, OUTSIDE, SPAN - 1);
   const girderLength = outRows.length > 1 ? Math.hypot(outRows[outRows.length - 1].x - outRows[0].x, outRows[outRows.length - 1].y - outRows[0].y) : 0;
   const turn = turnBetween(prevRows, outRows);
-  const chordOrdinate = (settings.spanLength * settings.spanLength) / (8 * settings.radius);
+  const chordOrdinate = (built.spanLength * built.spanLength) / (8 * built.radius);
+  const askedOrdinate = (settings.spanLength * settings.spanLength) / (8 * settings.radius);
   const sweepLimitIn = (girderLength / 10) * 0.125;
-  const bowIn = thermalBowInches('steel', deltaT, settings.spanLength, SANDBOX_GIRDER_DEPTH_IN);
+  const bowIn = thermalBowInches('steel', deltaT, built.spanLength, SANDBOX_GIRDER_DEPTH_IN);
   const layoutIsChord = (shown.desc.girders[0]?.layout ?? 'chord') === 'chord';
 
   // The straightedge: the deck form's grade from the next girder in, carried out past the exterior
@@ -186,7 +201,11 @@ export default function Walkthrough() {
       {layoutIsChord && outside && inside ? (
         <p>
           In span {SPAN} of this bridge the outside overhang runs from <strong className="tabular">{ft(outside.min_edge_width)}</strong> at the bents to{' '}
-          <strong className="tabular">{ft(outside.max_edge_width)}</strong> at midspan; the inside one from{' '}
+          <strong className="tabular">{ft(outside.max_edge_width)}</strong> at midspan
+          {Math.abs(outside.min_edge_width - built.overhang) >= 0.005
+            ? ` (at the bents a touch more than the ${ft(built.overhang)} set there: the width is measured square to the girder, which meets the bent at a slight angle to the curve)`
+            : ''}
+          ; the inside one from{' '}
           <strong className="tabular">{ft(inside.max_edge_width)}</strong> down to <strong className="tabular">{ft(inside.min_edge_width)}</strong>. The swing is
           about the chord&apos;s middle ordinate, span² ÷ (8 × radius) = <span className="tabular">{ft(chordOrdinate)}</span>. Tighter curves and longer spans swing more.
         </p>
@@ -228,7 +247,7 @@ export default function Walkthrough() {
       </p>
       <Slider label="Top flange warmer than bottom by" value={deltaT} text={`${deltaT} °F`} min={0} max={40} step={1} onChange={setDeltaT} />
       <p>
-        For this {ft(settings.spanLength)} span on a {SANDBOX_GIRDER_DEPTH_IN} in steel girder that is <strong className="tabular">{inches(bowIn)}</strong> (
+        For this {ft(built.spanLength)} span on a {SANDBOX_GIRDER_DEPTH_IN} in steel girder that is <strong className="tabular">{inches(bowIn)}</strong> (
         <span className="tabular">{formatFeetInches(bowIn / 12)}</span>). A form set in the cool morning to an elevation from the table is off by that much by
         afternoon. A reading from the top of the girder — the drop from girder top — moves with the girder and stays right. In the picture the girders and brackets rise
         ({THERMAL_DRAWN}× drawn) while the white form-target line, an absolute elevation, stays put.
@@ -282,7 +301,7 @@ export default function Walkthrough() {
       </div>
 
       <div className="grid gap-4 lg:grid-cols-[1fr_22rem]">
-        <section aria-labelledby="step-title" className="card space-y-3 p-4" onKeyDown={onKey} data-testid="walkthrough-step">
+        <section aria-labelledby="step-title" className="card space-y-3 p-4" data-testid="walkthrough-step">
           <ol className="flex flex-wrap gap-2" aria-label="Steps">
             {STEPS.map((s, i) => (
               <li key={s.title}>
@@ -301,6 +320,12 @@ export default function Walkthrough() {
           <h2 id="step-title" className="text-xl font-bold text-concrete-900">
             {step.title}
           </h2>
+          {computed.error ? (
+            <p className="rounded border border-caution-500 bg-caution-100 p-2 text-sm text-caution-700" data-testid="walkthrough-stale">
+              The sliders ask for a deck the engine cannot build, so the picture and these numbers are for the last one that worked: radius {ft(built.radius)}, span{' '}
+              {ft(built.spanLength)}, overhang {ft(built.overhang)}.
+            </p>
+          ) : null}
           <div className="space-y-3 text-concrete-800">{body[stepIndex]}</div>
           <div className="flex items-center justify-between gap-2 pt-2">
             <button type="button" className="btn-secondary" onClick={() => go(stepIndex - 1)} disabled={stepIndex === 0}>
@@ -360,9 +385,16 @@ export default function Walkthrough() {
             }}
           />
           {computed.error ? (
-            <p role="alert" className="rounded border border-caution-500 bg-caution-100 p-2 text-sm text-caution-700">
-              The engine cannot build this deck, so the picture shows the last one that worked: {computed.error}
-            </p>
+            <div role="alert" className="space-y-1 rounded border border-caution-500 bg-caution-100 p-2 text-sm text-caution-700">
+              {settings.layout === 'chord' && askedOrdinate >= settings.overhang ? (
+                <p>
+                  The straight inside girder would cross the deck edge at midspan: a {ft(settings.spanLength)} chord on a {ft(settings.radius)} radius bows{' '}
+                  {ft(askedOrdinate)} away from the curve (span² ÷ (8 × radius)), more than the {ft(settings.overhang)} overhang. Designers shorten the spans, widen
+                  the overhang or curve the girders.
+                </p>
+              ) : null}
+              <p>The engine cannot build this deck, so the picture shows the last one that worked. {computed.error}</p>
+            </div>
           ) : null}
         </section>
       </div>

@@ -153,10 +153,16 @@ describe('3D view and walkthrough', () => {
     }
     expect(new Set(titles).size).toBe(5);
     expect(await page.getByRole('button', { name: 'Next' }).isDisabled()).toBe(true);
-    // Keyboard: Back with the arrow key from inside the step panel.
-    await page.getByRole('button', { name: 'Back' }).focus();
+    // Keyboard: the arrow keys work from anywhere on the page, also once Next is disabled at the end.
+    await page.evaluate(() => (document.activeElement as HTMLElement | null)?.blur());
     await page.keyboard.press('ArrowLeft');
     expect(await heading.textContent()).toBe(titles[3]);
+    await page.keyboard.press('ArrowRight');
+    expect(await heading.textContent()).toBe(titles[4]);
+    await page.getByRole('button', { name: 'Step 1: Where the edge width changes, and why' }).click();
+    await page.keyboard.press('ArrowRight');
+    expect(await heading.textContent()).toBe(titles[1]);
+    await page.keyboard.press('ArrowLeft');
 
     // A slider recomputes the table live.
     await page.getByLabel(/Curve radius/).fill('1500');
@@ -165,6 +171,17 @@ describe('3D view and walkthrough', () => {
     await expect
       .poll(async () => (await page.getByTestId('edge-width-summary').locator('tbody tr').allTextContents()).some((r) => r.includes(formatLength(s2.max_edge_width, 'ft'))))
       .toBe(true);
+
+    // A deck the engine cannot build: a 160 ft chord on a 400 ft radius bows 160² ÷ (8 × 400) = 8 ft
+    // off the curve, more than the 3.50 ft overhang. The steps say their numbers are the last good deck's.
+    await page.getByLabel(/Span length/).fill('160');
+    await page.getByLabel(/Curve radius/).fill('400');
+    await expect.poll(() => page.getByRole('alert').filter({ hasText: /bows 8\.00 ft/ }).count()).toBe(1);
+    expect(await page.getByTestId('walkthrough-stale').textContent()).toMatch(/radius 1500\.00 ft, span 160\.00 ft, overhang 3\.50 ft/);
+    const good = computeOffsetTable(sandboxBridge({ ...DEFAULT_SANDBOX, radius: 1500, spanLength: 160 })).span_summaries.find((x) => x.span === 2 && x.side === 'left')!;
+    expect(await page.getByTestId('walkthrough-step').textContent()).toContain(formatLength(good.max_edge_width, 'ft'));
+    await page.getByLabel(/Curve radius/).fill('1500');
+    await expect.poll(() => page.getByTestId('walkthrough-stale').count()).toBe(0);
     expect(errors.map(String)).toEqual([]);
   });
 
