@@ -2,7 +2,7 @@
 
 import { Canvas } from '@react-three/fiber';
 import { Html, OrbitControls } from '@react-three/drei';
-import { useMemo, type RefObject } from 'react';
+import { useMemo, useRef, type RefObject } from 'react';
 import { createBridgeModel, formatStation, type BridgeDescription, type OffsetPoint, type OffsetTable } from '@/lib/geometry';
 import type { SceneFrame } from './builders/frame';
 import { girderRuns } from './builders/runs';
@@ -112,54 +112,60 @@ export default function BridgeScene(props: BridgeSceneProps) {
     return out.slice(0, 40);
   }, [desc, model, frame, units, u, props.stationEvery]);
 
+  // Labels go into this fixed host rather than the canvas's own wrapper: the wrapper's event target
+  // changes once the canvas connects, and a label mounted before that came out empty.
+  const labelHost = useRef<HTMLDivElement>(null!);
+
   return (
-    <Canvas
-      // Draw on demand (camera moves, changes); with the stats overlay on, every frame, so the
-      // counters describe steady rendering.
-      frameloop={statsRef ? 'always' : 'demand'}
-      dpr={[1, 1.5]}
-      camera={{ fov: 50, near: 0.3 * u, far: 60000 * u, position: pose.position }}
-      gl={{ antialias: true, preserveDrawingBuffer: true }}
-      aria-label={label}
-      role="img"
-    >
-      <color attach="background" args={['#dde4e6']} />
-      <hemisphereLight args={['#f4f1ea', '#6b665b', 0.9]} />
-      <directionalLight position={[300, 500, 200]} intensity={1.6} />
-      <directionalLight position={[-200, 150, -300]} intensity={0.35} />
-      <Ground y={bents.groundY} />
-      {showDeck ? <BufferMesh positions={deckTop.positions} indices={deckTop.indices} color="#d6d1c6" recessed /> : null}
-      <BufferMesh positions={underside.positions} indices={underside.indices} color="#b59a6d" recessed />
-      {showDeck ? <BufferMesh positions={band.positions} indices={band.indices} colors={band.colors} roughness={0.7} raised /> : null}
-      <BufferMesh positions={girders.positions} indices={girders.indices} color="#8d969b" roughness={0.55} metalness={0.3} />
-      <Segments positions={formEdge} color="#ffffff" />
-      <Segments positions={strings} color="#e0442b" />
-      <Segments positions={alignment} color="#12544b" />
-      <InstancedBoxes matrices={brackets.arms} color="#3f4a52" />
-      <InstancedBoxes matrices={brackets.struts} color="#3f4a52" />
-      <InstancedBoxes matrices={brackets.posts} color="#5e6a3a" />
-      <InstancedBoxes matrices={brackets.rails} color="#5e6a3a" />
-      <InstancedBoxes matrices={bents.caps} color="#a8a295" roughness={0.9} metalness={0} />
-      <InstancedBoxes matrices={bents.columns} color="#a8a295" roughness={0.9} metalness={0} />
-      <GirderPoints positions={pickPositions} radius={0.35 * u} selected={selected} onPick={onSelect} />
-      {overlays.map((o, i) => (
-        <OverlayBeams key={i} positions={o.positions} color={o.color} size={0.25 * u} />
-      ))}
-      {desc.bents.map((b, i) => (
-        <Html key={b.name + i} position={[bents.labels[i * 3], bents.labels[i * 3 + 1], bents.labels[i * 3 + 2]]} center zIndexRange={[20, 0]}>
-          <div className="pointer-events-none whitespace-nowrap rounded bg-concrete-900/80 px-2 py-0.5 text-xs font-semibold text-white tabular">
-            {b.name} · {formatStation(b.station, units)}
-          </div>
-        </Html>
-      ))}
-      {stations.map((st) => (
-        <Html key={st.s} position={st.pos} center zIndexRange={[10, 0]}>
-          <div className="pointer-events-none whitespace-nowrap text-[11px] font-semibold text-brand-800 tabular">{formatStation(st.s, units)}</div>
-        </Html>
-      ))}
-      <OrbitControls makeDefault enableDamping={false} maxPolarAngle={Math.PI * 0.98} />
-      <CameraRig pose={pose} version={poseVersion} />
-      {statsRef ? <RenderStats target={statsRef} /> : null}
-    </Canvas>
+    <div ref={labelHost} className="relative h-full w-full overflow-hidden">
+      <Canvas
+        // Draw on demand (camera moves, changes); with the stats overlay on, every frame, so the
+        // counters describe steady rendering.
+        frameloop={statsRef ? 'always' : 'demand'}
+        dpr={[1, 1.5]}
+        camera={{ fov: 50, near: 0.3 * u, far: 60000 * u, position: pose.position }}
+        gl={{ antialias: true, preserveDrawingBuffer: true }}
+        aria-label={label}
+        role="img"
+      >
+        <color attach="background" args={['#dde4e6']} />
+        <hemisphereLight args={['#f4f1ea', '#6b665b', 0.9]} />
+        <directionalLight position={[300, 500, 200]} intensity={1.6} />
+        <directionalLight position={[-200, 150, -300]} intensity={0.35} />
+        <Ground y={bents.groundY} />
+        {showDeck ? <BufferMesh positions={deckTop.positions} indices={deckTop.indices} color="#d6d1c6" recessed /> : null}
+        <BufferMesh positions={underside.positions} indices={underside.indices} color="#b59a6d" recessed />
+        {showDeck ? <BufferMesh positions={band.positions} indices={band.indices} colors={band.colors} roughness={0.7} raised /> : null}
+        <BufferMesh positions={girders.positions} indices={girders.indices} color="#8d969b" roughness={0.55} metalness={0.3} />
+        <Segments positions={formEdge} color="#ffffff" />
+        <Segments positions={strings} color="#e0442b" />
+        <Segments positions={alignment} color="#12544b" />
+        <InstancedBoxes matrices={brackets.arms} color="#3f4a52" />
+        <InstancedBoxes matrices={brackets.struts} color="#3f4a52" />
+        <InstancedBoxes matrices={brackets.posts} color="#5e6a3a" />
+        <InstancedBoxes matrices={brackets.rails} color="#5e6a3a" />
+        <InstancedBoxes matrices={bents.caps} color="#a8a295" roughness={0.9} metalness={0} />
+        <InstancedBoxes matrices={bents.columns} color="#a8a295" roughness={0.9} metalness={0} />
+        <GirderPoints positions={pickPositions} radius={0.35 * u} selected={selected} onPick={onSelect} />
+        {overlays.map((o, i) => (
+          <OverlayBeams key={i} positions={o.positions} color={o.color} size={0.25 * u} />
+        ))}
+        {desc.bents.map((b, i) => (
+          <Html key={b.name + i} portal={labelHost} position={[bents.labels[i * 3], bents.labels[i * 3 + 1], bents.labels[i * 3 + 2]]} center zIndexRange={[20, 0]}>
+            <div className="pointer-events-none whitespace-nowrap rounded bg-concrete-900/80 px-2 py-0.5 text-xs font-semibold text-white tabular">
+              {b.name} · {formatStation(b.station, units)}
+            </div>
+          </Html>
+        ))}
+        {stations.map((st) => (
+          <Html key={st.s} portal={labelHost} position={st.pos} center zIndexRange={[10, 0]}>
+            <div className="pointer-events-none whitespace-nowrap text-[11px] font-semibold text-brand-800 tabular">{formatStation(st.s, units)}</div>
+          </Html>
+        ))}
+        <OrbitControls makeDefault enableDamping={false} maxPolarAngle={Math.PI * 0.98} />
+        <CameraRig pose={pose} version={poseVersion} />
+        {statsRef ? <RenderStats target={statsRef} /> : null}
+      </Canvas>
+    </div>
   );
 }

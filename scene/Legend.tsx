@@ -9,11 +9,15 @@ export default function Legend({ range, units, points = true }: { range: [number
       <div>
         <div className="font-semibold text-concrete-800">Edge width, girder centreline to deck edge</div>
         <div className="mt-1 h-3 rounded" style={{ background: rampCss() }} aria-hidden="true" />
-        <div className="mt-1 flex justify-between tabular text-concrete-700">
-          <span>{formatLength(range[0], units)}</span>
-          <span>{formatLength(mid, units)}</span>
-          <span>{formatLength(range[1], units)}</span>
-        </div>
+        {formatLength(range[0], units) === formatLength(range[1], units) ? (
+          <div className="mt-1 tabular text-concrete-700">{formatLength(range[0], units)} all along: the width does not change on this bridge</div>
+        ) : (
+          <div className="mt-1 flex justify-between tabular text-concrete-700">
+            <span>{formatLength(range[0], units)}</span>
+            <span>{formatLength(mid, units)}</span>
+            <span>{formatLength(range[1], units)}</span>
+          </div>
+        )}
       </div>
       <ul className="flex flex-wrap gap-x-4 gap-y-1 text-concrete-700">
         <li className="flex items-center gap-2">
