@@ -4,6 +4,9 @@ import { useId } from 'react';
 import type { DisplayStyle } from '@/lib/geometry/format';
 import type { Units } from './OffsetDisplay';
 
+/** How near a typed station ("12+45") a girder point must lie to be shown, either side. */
+export const NEAR_STATION = { ft: 5, m: 1.5 } as const;
+
 export type OffsetFilter = { span: number | 'all'; side: 'left' | 'right' | 'both'; text: string };
 
 const STYLE_CHOICES: { value: DisplayStyle; label: string; hint: string }[] = [
@@ -115,7 +118,7 @@ export default function OffsetTableToolbar({
             id={`${id}-text`}
             type="search"
             inputMode="decimal"
-            placeholder="e.g. 12+45 or 10"
+            placeholder={units === 'm' ? 'e.g. 1+245 or 10' : 'e.g. 12+45 or 10'}
             className="field-input min-h-11"
             value={filter.text}
             onChange={(e) => onFilter({ ...filter, text: e.target.value })}
@@ -123,6 +126,7 @@ export default function OffsetTableToolbar({
         </div>
         <p className="col-span-2 self-center text-sm text-concrete-600 sm:pb-2" aria-live="polite">
           Showing {shown} of {total} girder points
+          {filter.text.includes('+') ? ` within ${NEAR_STATION[units]} ${units} of ${filter.text.trim()}` : ''}
         </p>
       </div>
     </div>

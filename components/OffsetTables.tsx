@@ -12,8 +12,10 @@ import ChordOffsetTable from './ChordOffsetTable';
 import GeometryProblem from './GeometryProblem';
 import GirderPointTable from './GirderPointTable';
 import type { ChordOffsetSetRow, OffsetPointRow, OffsetTableJson } from './offset-table-types';
-import OffsetTableToolbar, { type OffsetFilter } from './OffsetTableToolbar';
+import SlabElevationTable from './SlabElevationTable';
+import OffsetTableToolbar, { NEAR_STATION, type OffsetFilter } from './OffsetTableToolbar';
 import type { Units } from './OffsetDisplay';
+import { parseStation } from '@/lib/editor/station-input';
 import { stationText } from './station-text';
 
 type TableJson = OffsetTableJson & { span_summaries?: SpanSummary[] };
@@ -46,10 +48,18 @@ function groupBySpan(points: OffsetPointRow[], chords: ChordOffsetSetRow[]): Spa
 }
 
 /** True when a girder point matches the station-or-point text filter ("12+45", "1245", "10"). */
+/**
+ * The search box: a whole number is a point number; a station with its "+" ("12+45") finds the points
+ * within {@link NEAR_STATION} of it; any other text matches the printed station.
+ */
 function matchesText(p: OffsetPointRow, units: Units, text: string): boolean {
   const q = text.trim().toLowerCase();
   if (!q) return true;
   if (/^\d+$/.test(q) && Number(q) === p.point) return true;
+  if (q.includes('+')) {
+    const s = parseStation(q, units);
+    if (s.ok) return Math.abs(p.station - s.value) <= NEAR_STATION[units];
+  }
   const station = stationText(p.station, units);
   return station.includes(q) || station.replace('+', '').includes(q.replace('+', ''));
 }
@@ -171,6 +181,7 @@ export default function OffsetTables({ bridgeId, bents }: { bridgeId: number; be
               ))}
             </div>
           ) : null}
+          <SlabElevationTable span={g.span} points={data.points.filter((p) => p.span === g.span)} units={units} />
         </section>
       ))}
     </div>

@@ -46,6 +46,8 @@ export function offsetTableToCsv(table: OffsetTable, options: CsvOptions = {}): 
     `top_of_girder_${elevationUnit}`,
     `buildup_${lengthUnit}`,
     `drop_from_girder_top_${lengthUnit}`,
+    `top_of_deck_${elevationUnit}`,
+    `bottom_of_slab_${elevationUnit}`,
   ];
   const lines = [header.join(',')];
   for (const p of table.points) {
@@ -63,6 +65,8 @@ export function offsetTableToCsv(table: OffsetTable, options: CsvOptions = {}): 
         elevation(p.top_of_girder),
         length(p.buildup),
         length(p.drop_from_girder_top),
+        elevation(p.top_of_deck),
+        elevation(p.bottom_of_slab),
       ]
         .map(csvCell)
         .join(','),

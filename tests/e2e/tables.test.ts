@@ -20,7 +20,7 @@ afterAll(async () => {
   await browser?.close();
 });
 
-type Point = { span: number; side: string; girder: string; point: number; edge_width: number | null; buildup: number | null };
+type Point = { span: number; side: string; girder: string; point: number; station: number; bottom_of_slab: number; edge_width: number | null; buildup: number | null };
 
 /** Opens the demo precast bridge's offset table and returns its id and the API's table. */
 async function openTable(page: Page): Promise<{ id: string; points: Point[] }> {
@@ -80,6 +80,28 @@ describe('offset tables in a real browser', () => {
     const only = page.getByRole('table', { name: /span 2, right overhang/i });
     expect(await only.locator('tbody tr').count()).toBe(1);
     expect(await page.getByText(/showing 1 of \d+ girder points/i).count()).toBe(1);
+
+    // A station typed with its "+" finds the points within 5 ft of it, on every girder and span.
+    await page.getByLabel('Span', { exact: true }).selectOption('all');
+    await page.getByLabel('Side', { exact: true }).selectOption('both');
+    const probe = points.filter((p) => p.side !== 'interior')[7];
+    const typed = Math.round(probe.station);
+    const near = points.filter((p) => p.side !== 'interior' && Math.abs(p.station - typed) <= 5).length;
+    expect(near).toBeGreaterThan(0);
+    const text = `${Math.floor(typed / 100)}+${String(typed % 100).padStart(2, '0')}`;
+    await page.getByLabel(/station or point/i).fill(text);
+    await expect.poll(() => page.getByText(new RegExp(`showing ${near} of \\d+ girder points within 5 ft of ${text.replace('+', '\\+')}`, 'i')).count()).toBe(1);
+
+    // The designer's elevations: bottom of slab over every girder, interior ones too, per span.
+    await page.getByLabel(/station or point/i).fill('');
+    await page.getByText('Bottom of slab over every girder, span 1').click();
+    const slab = page.getByRole('table', { name: /span 1: bottom-of-slab elevation/i });
+    const g3 = points.find((p) => p.span === 1 && p.girder === 'G3' && p.point === 4)!;
+    expect(g3.side).toBe('interior');
+    const slabHeader = await slab.locator('thead th').allTextContents();
+    const slabRow = slab.locator('tbody tr').nth(4);
+    expect(await slabRow.locator('th').textContent()).toBe('4');
+    expect(await slabRow.locator('td').nth(slabHeader.indexOf('G3') - 1).textContent()).toBe(formatFeet(g3.bottom_of_slab));
     expect(errors).toEqual([]);
     await page.close();
   });

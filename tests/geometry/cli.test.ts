@@ -43,10 +43,20 @@ describe('offsets command', () => {
     const r = run(file('ok.json', JSON.stringify(bridge)), '--format', 'csv');
     expect(r.code).toBe(0);
     const lines = r.stdout.trim().split('\n');
-    expect(lines[0]).toBe('span,girder,side,point,station,offset,edge_width_ft,edge_drop_ft,form_target_ft,top_of_girder_ft,buildup_ft,drop_from_girder_top_ft');
+    expect(lines[0]).toBe(
+      'span,girder,side,point,station,offset,edge_width_ft,edge_drop_ft,form_target_ft,top_of_girder_ft,buildup_ft,drop_from_girder_top_ft,top_of_deck_ft,bottom_of_slab_ft',
+    );
     expect(lines).toHaveLength(1 + computeOffsetTable(bridge).points.length);
     // Girder G1 point 0: station 1+00.00, 16 ft left, 4 ft overhang (straight bridge, hand-checked).
     expect(lines[1]).toMatch(/^1,G1,left,0,1\+00\.00,16\.00 LT,4\.00,/);
+    // Every girder, interior ones too, carries its top of deck and bottom of slab (the designer's
+    // elevations), rounded to 0.01 ft like every elevation in the export.
+    const table = computeOffsetTable(bridge);
+    table.points.forEach((p, i) => {
+      const cells = lines[i + 1].split(',');
+      expect(cells.slice(-2)).toEqual([p.top_of_deck.toFixed(2), p.bottom_of_slab.toFixed(2)]);
+    });
+    expect(table.points.some((p) => p.side === 'interior')).toBe(true);
   }, 60000);
 
   it.each([
