@@ -1,5 +1,5 @@
 import type { BracketRow } from './CheckTypes';
-import { fieldLength, type Units } from './FieldUnits';
+import { fieldLength, readingLength, type Units } from './FieldUnits';
 
 /** The numbers to set at one bracket, large enough to read at arm's length. */
 export default function FieldTargets({ row, units }: { row: BracketRow; units: Units }) {
@@ -18,7 +18,7 @@ export default function FieldTargets({ row, units }: { row: BracketRow; units: U
           <dd className="mt-1 text-base font-semibold text-caution-700">Not surveyed here</dd>
         ) : (
           <dd className="tabular text-2xl font-bold text-concrete-900" data-testid="target-reading">
-            {fieldLength(row.reading, units)}
+            {readingLength(row.reading, units)}
           </dd>
         )}
       </div>
@@ -30,9 +30,9 @@ export default function FieldTargets({ row, units }: { row: BracketRow; units: U
         <div className="col-span-2 rounded-lg border border-concrete-200 bg-white p-3">
           <dt className="text-sm font-semibold text-concrete-600">Level-bar rods (girder end / form end)</dt>
           <dd className="tabular text-2xl font-bold text-concrete-900">
-            {fieldLength(row.girder_rod, units)} / {fieldLength(row.form_rod, units)}
+            {readingLength(row.girder_rod, units)} / {readingLength(row.form_rod, units)}
           </dd>
-          {row.extra_rod ? <dd className="text-sm text-caution-700">Both rods include {fieldLength(row.extra_rod, units)} extra: the form edge sits above the girder top.</dd> : null}
+          {row.extra_rod ? <dd className="text-sm text-caution-700">Both rods include {readingLength(row.extra_rod, units)} extra: the form edge sits above the girder top.</dd> : null}
         </div>
       ) : null}
     </dl>

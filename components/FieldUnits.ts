@@ -1,6 +1,7 @@
 /**
  * Field-mode number text and input parsing. Display rounding only; the server computes pass/fail.
  */
+import Decimal from 'decimal.js';
 import { formatFeet, formatFeetInches, formatMetres } from '@/lib/geometry/format';
 
 export type Units = 'ft' | 'm';
@@ -9,6 +10,18 @@ export type Units = 'ft' | 'm';
 export function fieldLength(v: number | null | undefined, units: Units): string {
   if (v === null || v === undefined || !Number.isFinite(v)) return '—';
   return units === 'm' ? `${formatMetres(v)} m` : `${formatFeet(v)} ft`;
+}
+
+/**
+ * A level-bar reading or rod length with its unit, one digit finer than other lengths ("-0.175 ft",
+ * "0.053 m"): the reading tolerance is 0.01 ft, so a target rounded to 0.01 ft could look passing
+ * while it fails.
+ */
+export function readingLength(v: number | null | undefined, units: Units): string {
+  if (v === null || v === undefined || !Number.isFinite(v)) return '—';
+  if (units === 'm') return `${formatMetres(v)} m`;
+  const text = new Decimal(v).toDecimalPlaces(3, Decimal.ROUND_HALF_UP).toFixed(3);
+  return `${text === '-0.000' ? '0.000' : text} ft`;
 }
 
 /** Edge width as the crew reads a tape: feet-inches to 1/8" on a feet bridge, metres otherwise. */

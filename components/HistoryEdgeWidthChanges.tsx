@@ -1,9 +1,11 @@
 import { lengthText } from './station-text';
 import type { RevisionDiff } from '@/lib/services/revision-diff';
 
+/** A signed difference; one that rounds to zero at display precision is shown to 0.001 ft / 0.0001 m. */
 const signed = (v: number | null, units: 'ft' | 'm') => {
   if (v === null) return '—';
-  const text = lengthText(Math.abs(v), units, false);
+  let text = lengthText(Math.abs(v), units, false);
+  if (/^0\.0+$/.test(text)) text = Math.abs(v).toFixed(units === 'm' ? 4 : 3);
   return /^0\.0+$/.test(text) ? text : `${v > 0 ? '+' : '−'}${text}`;
 };
 const side = (s: 'left' | 'right') => (s === 'left' ? 'LT' : 'RT');

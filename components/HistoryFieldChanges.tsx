@@ -43,8 +43,7 @@ export default function HistoryFieldChanges({ changes, before, after, from, to }
           {changes.map((c) => (
             <tr key={c.path} className="border-b border-concrete-100">
               <td className="px-4 py-1.5">
-                {fieldLabel(c.path, c.after === undefined ? before : after)}
-                <span className="ml-2 font-mono text-xs text-concrete-500">{c.path}</span>
+                <span title={`Field ${c.path} of the bridge description`}>{fieldLabel(c.path, c.after === undefined ? before : after)}</span>
               </td>
               <td className="px-2 py-1.5 text-right whitespace-nowrap text-concrete-700">{valueText(c.path, c.before, units)}</td>
               <td className="px-4 py-1.5 text-right font-semibold whitespace-nowrap">{valueText(c.path, c.after, units)}</td>

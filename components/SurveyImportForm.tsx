@@ -130,7 +130,11 @@ export default function SurveyImportForm({ bridgeId, units }: { bridgeId: number
           <SurveyPreviewTable preview={preview} filename={file.name} />
           <div className="flex flex-wrap items-center gap-3">
             <button type="button" className="btn-primary min-h-11" disabled={!canStore || busy !== null} onClick={() => void onStore()}>
-              {busy === 'storing' ? 'Storing…' : `Store ${preview.summary.rows} surveyed ${preview.summary.rows === 1 ? 'point' : 'points'}`}
+              {busy === 'storing'
+                ? 'Storing…'
+                : canStore
+                  ? `Store ${preview.summary.rows} surveyed ${preview.summary.rows === 1 ? 'point' : 'points'}`
+                  : 'Nothing to store yet'}
             </button>
             <button type="button" className="btn-secondary min-h-11" disabled={busy !== null} onClick={() => void check(file.name, file.text)}>
               Check again

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { deviationText, parseLength, toleranceText } from '@/components/FieldUnits';
+import { deviationText, parseLength, readingLength, toleranceText } from '@/components/FieldUnits';
 
 // Feet-inches arithmetic worked by hand: 4'-6 3/8" = 4 + 6.375/12 = 4.53125 ft.
 describe('field-mode length entry', () => {
@@ -28,5 +28,14 @@ describe('field-mode length entry', () => {
     expect(toleranceText(0.006, 'm')).toBe('±6 mm');
     expect(deviationText(0.004, 'ft', 'reading')).toBe('+0.004 ft');
     expect(toleranceText(0.01, 'ft', 'reading')).toBe('±0.010 ft');
+  });
+
+  it('shows level-bar readings and rods to 0.001 ft, finer than the 0.01 ft reading tolerance', () => {
+    // Common practice: a target must be shown finer than the tolerance it is judged by.
+    expect(readingLength(-0.1745, 'ft')).toBe('-0.175 ft');
+    expect(readingLength(0.0625, 'ft')).toBe('0.063 ft');
+    expect(readingLength(-0.0004, 'ft')).toBe('0.000 ft');
+    expect(readingLength(0.05349, 'm')).toBe('0.053 m');
+    expect(readingLength(null, 'ft')).toBe('—');
   });
 });
