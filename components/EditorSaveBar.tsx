@@ -35,7 +35,8 @@ export default function EditorSaveBar({
   dirty: boolean;
 }) {
   const id = useId();
-  const blocked = problemCount > 0 || !dirty || state.kind === 'saving' || state.kind === 'stale';
+  const noNote = note.trim() === '';
+  const blocked = problemCount > 0 || !dirty || noNote || state.kind === 'saving' || state.kind === 'stale';
   return (
     <section aria-labelledby={`${id}-title`} className="card border-brand-300 p-4">
       <h2 id={`${id}-title`} className="text-lg font-bold text-concrete-900">
@@ -45,7 +46,7 @@ export default function EditorSaveBar({
         Editing on top of revision <span className="tabular font-semibold">{base}</span>. Saving never changes a stored revision; it adds the next one.
       </p>
       <label htmlFor={`${id}-note`} className="field-label mt-3">
-        Note for the history (what changed and why)
+        Note for the history (what changed and why; needed to save)
       </label>
       <textarea id={`${id}-note`} className="field-input min-h-16" maxLength={500} value={note} onChange={(e) => onNote(e.target.value)} placeholder="e.g. G1 moved 0.25 ft inboard at Pier 2 per shop drawings" />
       <div className="mt-3 flex flex-wrap items-center gap-3">
@@ -59,7 +60,9 @@ export default function EditorSaveBar({
               ? state.kind === 'saved'
                 ? ''
                 : 'No changes to save yet.'
-              : 'Unsaved changes.'}
+              : noNote
+                ? 'Unsaved changes. Write a note for the history to save them.'
+                : 'Unsaved changes.'}
         </span>
       </div>
       {state.kind === 'saved' ? (

@@ -172,6 +172,11 @@ export default function FieldMode({ bridge, units, groups, widthTolerance, readi
           role="status"
           aria-live="polite"
           className={`rounded-full px-3 py-1 text-xs font-bold ${waiting ? 'bg-caution-100 text-caution-700' : 'bg-brand-700 text-brand-50'}`}
+          title={
+            waiting
+              ? 'Measurements kept on this phone; they go to the server by themselves when the connection allows.'
+              : 'Every measurement recorded on this phone has reached the server.'
+          }
         >
           {waiting ? `${waiting} not sent${queue.online ? '' : ' · offline'}` : error ? 'Offline' : 'All sent'}
         </p>

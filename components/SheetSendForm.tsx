@@ -46,7 +46,7 @@ export default function SheetSendForm({ bridgeId, span }: { bridgeId: number; sp
   }
 
   return (
-    <form onSubmit={onSubmit} noValidate className="card no-print p-4">
+    <form id="send-sheet" onSubmit={onSubmit} noValidate className="card no-print scroll-mt-4 p-4">
       <label htmlFor={`${id}-to`} className="field-label">
         E-mail this sheet{span ? ` (span ${span})` : ''} with the CSV attached
       </label>

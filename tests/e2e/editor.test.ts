@@ -85,6 +85,9 @@ describe('geometry editor in a real browser', () => {
 
     // The second tab still edits revision 1.
     await girderRow(b.page, 'G2').getByLabel('Offset at Pier 2', { exact: true }).fill('9');
+    // A revision needs a note: the button waits for one.
+    expect(await b.page.getByRole('button', { name: 'Save revision' }).isDisabled()).toBe(true);
+    await b.page.getByLabel(/Note for the history/).fill('G2 moved at Pier 2');
     await b.page.getByRole('button', { name: 'Save revision' }).click();
     const stale = b.page.getByTestId('stale-revision');
     await stale.waitFor();
@@ -116,6 +119,11 @@ describe('geometry editor in a real browser', () => {
     expect(await station.inputValue()).toBe('12+90.00');
     await station.fill('12+9O');
     await pier.getByText(/is not a station/).waitFor();
+    // The preview names the problem and takes the user to it.
+    expect(await page.getByTestId('problem-list').textContent()).toMatch(/Pier 2 · station: .*is not a station/);
+    await page.getByRole('button', { name: 'Go to the first problem' }).click();
+    await expect.poll(() => page.evaluate(() => document.activeElement?.getAttribute('aria-invalid'))).toBe('true');
+    expect(await station.evaluate((el) => el === document.activeElement)).toBe(true);
     expect(await page.getByRole('button', { name: 'Save revision' }).isDisabled()).toBe(true);
     // Past the last bent: the engine's own check names the bent.
     await station.fill('15+00');
@@ -124,6 +132,7 @@ describe('geometry editor in a real browser', () => {
     expect(await page.getByRole('button', { name: 'Save revision' }).isDisabled()).toBe(true);
     await station.fill('1291.5');
     await ready(page);
+    await page.getByLabel(/Note for the history/).fill('Pier 2 station');
     expect(await page.getByRole('button', { name: 'Save revision' }).isDisabled()).toBe(false);
     // Rows can be added and removed: a new bent adds an offset to every girder.
     await page.getByRole('button', { name: '+ Add bent' }).click();

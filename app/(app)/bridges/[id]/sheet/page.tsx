@@ -66,6 +66,11 @@ export default async function SheetPage({ params, searchParams }: { params: Para
           <Link href={`/bridges/${view.bridge.id}/field`} className="btn-secondary">
             Field mode
           </Link>
+          {roleAllows(user.role, ['inspector']) ? (
+            <a href="#send-sheet" className="btn-secondary">
+              Send by e-mail
+            </a>
+          ) : null}
         </div>
       </header>
 
