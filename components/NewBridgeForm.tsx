@@ -186,7 +186,8 @@ export default function NewBridgeForm() {
           <h2 className="text-lg font-bold text-concrete-900">Description</h2>
           <p className="text-sm text-concrete-600">
             The alignment, profile, cross slopes, deck section, bents and girders as JSON. Start from the starter bridge, load a file, or
-            paste a description into the box and edit it.
+            paste a description into the box and edit it. Once the bridge is created, Edit geometry gives a form with every field, units
+            and checks beside each row, and imports LandXML.
           </p>
         </div>
         <div className="flex flex-wrap items-center gap-3">
