@@ -274,7 +274,9 @@ export default function Walkthrough() {
 
   return (
     <div className="space-y-4">
-      <div className="relative h-[56vh] min-h-[380px] overflow-hidden rounded-lg border border-concrete-300 bg-[#dde4e6]" data-testid="scene-canvas">
+      {/* On a wide screen the step's words sit beside the picture they talk about. */}
+      <div className="grid items-start gap-4 xl:grid-cols-[minmax(0,1fr)_24rem]">
+      <div className="relative h-[56vh] min-h-[380px] overflow-hidden rounded-lg border border-concrete-300 bg-[#dde4e6] xl:sticky xl:top-4" data-testid="scene-canvas">
         <LazyBridgeScene
           fallback={sceneFallback}
           desc={shown.desc}
@@ -300,7 +302,6 @@ export default function Walkthrough() {
         </div>
       </div>
 
-      <div className="grid gap-4 lg:grid-cols-[1fr_22rem]">
         <section aria-labelledby="step-title" className="card space-y-3 p-4" data-testid="walkthrough-step">
           <ol className="flex flex-wrap gap-2" aria-label="Steps">
             {STEPS.map((s, i) => (
@@ -337,7 +338,9 @@ export default function Walkthrough() {
             </button>
           </div>
         </section>
+      </div>
 
+      <div className="grid items-start gap-4 xl:grid-cols-[22rem_minmax(0,1fr)]">
         <section aria-label="Sandbox bridge" className="card space-y-4 p-4">
           <h2 className="font-semibold text-concrete-900">Sandbox bridge (three spans, curve to the right)</h2>
           <Slider label="Curve radius" value={settings.radius} text={ft(settings.radius)} {...SANDBOX_LIMITS.radius} onChange={(v) => set({ radius: v })} />
@@ -397,12 +400,11 @@ export default function Walkthrough() {
             </div>
           ) : null}
         </section>
-      </div>
-
-      <div className="grid gap-4 lg:grid-cols-[1fr_22rem]">
-        <EdgeWidthSummary table={table} caption="Edge width per span, sandbox bridge (from the engine)" />
-        <div className="card p-4">
-          <Legend range={range} units="ft" points={false} />
+        <div className="space-y-4">
+          <div className="card p-4">
+            <Legend range={range} units="ft" points={false} />
+          </div>
+          <EdgeWidthSummary table={table} caption="Edge width per span, sandbox bridge (from the engine)" />
         </div>
       </div>
     </div>
