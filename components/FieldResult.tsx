@@ -1,5 +1,5 @@
 import { dateTimeText } from './station-text';
-import { deviationText, fieldLength, tapeLength, toleranceText, type Units } from './FieldUnits';
+import { deviationText, fixHint, readingLength, tapeLength, toleranceText, type Units } from './FieldUnits';
 
 /** What the screen knows about a bracket's latest measurement: from the server, or worked out on the phone. */
 export type Verdict = {
@@ -19,13 +19,20 @@ export type Verdict = {
 
 function Line({ kind, measured, deviation, pass, tolerance, units }: { kind: 'width' | 'reading'; measured: number; deviation: number | null; pass: boolean | null; tolerance: number; units: Units }) {
   return (
-    <div className="flex items-baseline justify-between gap-2 border-t border-black/10 py-1 first:border-t-0">
-      <span className="text-sm font-semibold">
-        {kind === 'width' ? `Width ${tapeLength(measured, units)}` : `Reading ${fieldLength(measured, units)}`}
-      </span>
-      <span className="tabular text-2xl font-bold">
-        {deviationText(deviation, units, kind)} <span className="text-sm font-semibold">{pass ? 'OK' : `over ${toleranceText(tolerance, units, kind)}`}</span>
-      </span>
+    <div className="border-t border-black/10 py-1 first:border-t-0">
+      <div className="flex items-baseline justify-between gap-2">
+        <span className="text-sm font-semibold">
+          {kind === 'width' ? `Width ${tapeLength(measured, units)}` : `Reading ${readingLength(measured, units)}`}
+        </span>
+        <span className="tabular text-2xl font-bold">
+          {deviationText(deviation, units, kind)} <span className="text-sm font-semibold">{pass ? 'OK' : `over ${toleranceText(tolerance, units, kind)}`}</span>
+        </span>
+      </div>
+      {pass === false && deviation !== null ? (
+        <p className="text-sm font-semibold" data-testid={`fix-${kind}`}>
+          {fixHint(kind, deviation, units)}
+        </p>
+      ) : null}
     </div>
   );
 }

@@ -42,6 +42,17 @@ export function deviationText(v: number | null | undefined, units: Units, kind: 
   return `${sign}${Math.abs(v * 12).toFixed(2)} in`;
 }
 
+/**
+ * Which way to move the form edge to close a deviation (measured − computed). Width: measured wider
+ * means the edge is too far out. Reading (drop from the girder top): a larger drop means the edge is
+ * too low.
+ */
+export function fixHint(kind: 'width' | 'reading', deviation: number, units: Units): string {
+  const by = deviationText(Math.abs(deviation), units, kind).replace(/^[+±]/, '');
+  if (kind === 'width') return deviation > 0 ? `Bring the form edge in ${by}.` : `Set the form edge out ${by}.`;
+  return deviation > 0 ? `Raise the form edge ${by}.` : `Lower the form edge ${by}.`;
+}
+
 /** A tolerance as "±0.25 in (0.021 ft)" for a width, "±0.010 ft" for a reading, "±6 mm" in metric. */
 export function toleranceText(v: number, units: Units, kind: 'width' | 'reading' = 'width'): string {
   if (units === 'm') return `±${(v * 1000).toFixed(1).replace(/\.0$/, '')} mm`;

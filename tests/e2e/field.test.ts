@@ -71,6 +71,8 @@ describe('field mode on a phone', () => {
     await page.getByLabel(/Measured edge width/).fill((width1 + 0.5).toFixed(3));
     await page.getByRole('button', { name: 'Record' }).click();
     await expect.poll(() => page.getByTestId('field-verdict').textContent()).toBe('FAIL');
+    // Half a foot too wide: the crew is told to bring the edge in by about six inches.
+    expect(await page.getByTestId('fix-width').textContent()).toMatch(/^Bring the form edge in [56]\.\d\d in\.$/);
 
     // Connection lost: the entry shows at once, is kept on the phone, and goes when the connection returns.
     await page.getByRole('button', { name: /Next/ }).click();

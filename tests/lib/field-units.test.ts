@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { deviationText, parseLength, readingLength, toleranceText } from '@/components/FieldUnits';
+import { deviationText, fixHint, parseLength, readingLength, toleranceText } from '@/components/FieldUnits';
 
 // Feet-inches arithmetic worked by hand: 4'-6 3/8" = 4 + 6.375/12 = 4.53125 ft.
 describe('field-mode length entry', () => {
@@ -37,5 +37,14 @@ describe('field-mode length entry', () => {
     expect(readingLength(-0.0004, 'ft')).toBe('0.000 ft');
     expect(readingLength(0.05349, 'm')).toBe('0.053 m');
     expect(readingLength(null, 'ft')).toBe('—');
+  });
+
+  it('says which way to move the form edge to close a deviation (measured − computed)', () => {
+    // Common practice: a wider measured edge width means the edge is too far out; a larger drop from
+    // the girder top means the edge is too low.
+    expect(fixHint('width', 0.5, 'ft')).toBe('Bring the form edge in 6.00 in.');
+    expect(fixHint('width', -0.03125, 'ft')).toBe('Set the form edge out 0.38 in.');
+    expect(fixHint('reading', 0.0145, 'ft')).toBe('Raise the form edge 0.015 ft.');
+    expect(fixHint('reading', -0.012, 'm')).toBe('Lower the form edge 12 mm.');
   });
 });
