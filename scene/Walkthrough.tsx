@@ -276,31 +276,31 @@ export default function Walkthrough() {
     <div className="space-y-4">
       {/* On a wide screen the step's words sit beside the picture they talk about. */}
       <div className="grid items-start gap-4 xl:grid-cols-[minmax(0,1fr)_24rem]">
-      <div className="relative h-[56vh] min-h-[380px] overflow-hidden rounded-lg border border-concrete-300 bg-[#dde4e6] xl:sticky xl:top-4" data-testid="scene-canvas">
-        <LazyBridgeScene
-          fallback={sceneFallback}
-          desc={shown.desc}
-          table={table}
-          frame={frame}
-          widthRange={range}
-          bracketSpacing={defaultBracketSpacing('ft')}
-          pose={pose}
-          poseVersion={poseVersion}
-          pickable={[]}
-          selected={null}
-          onSelect={() => {}}
-          sweep={step.sweep ? (sweepLimitIn / 12) * SWEEP_DRAWN : 0}
-          verticalBow={step.thermal ? (bowIn / 12) * THERMAL_DRAWN : 0}
-          overlays={overlays}
-          showDeck={!step.noDeck}
-          stationEvery={0}
-          label="Training bridge in 3D"
-        />
-        <div className="pointer-events-none absolute left-3 top-3 rounded bg-white/85 px-2 py-1 text-xs font-semibold text-concrete-800">
-          Step {stepIndex + 1} of {STEPS.length} · {exaggeration > 1 ? `elevations ×${exaggeration}` : 'true scale'}
-          {step.noDeck ? ' · before the pour (no slab)' : ''}
+        <div className="relative h-[56vh] min-h-[380px] overflow-hidden rounded-lg border border-concrete-300 bg-[#dde4e6] xl:sticky xl:top-4" data-testid="scene-canvas">
+          <LazyBridgeScene
+            fallback={sceneFallback}
+            desc={shown.desc}
+            table={table}
+            frame={frame}
+            widthRange={range}
+            bracketSpacing={defaultBracketSpacing('ft')}
+            pose={pose}
+            poseVersion={poseVersion}
+            pickable={[]}
+            selected={null}
+            onSelect={() => {}}
+            sweep={step.sweep ? (sweepLimitIn / 12) * SWEEP_DRAWN : 0}
+            verticalBow={step.thermal ? (bowIn / 12) * THERMAL_DRAWN : 0}
+            overlays={overlays}
+            showDeck={!step.noDeck}
+            stationEvery={0}
+            label="Training bridge in 3D"
+          />
+          <div className="pointer-events-none absolute left-3 top-3 rounded bg-white/85 px-2 py-1 text-xs font-semibold text-concrete-800">
+            Step {stepIndex + 1} of {STEPS.length} · {exaggeration > 1 ? `elevations ×${exaggeration}` : 'true scale'}
+            {step.noDeck ? ' · before the pour (no slab)' : ''}
+          </div>
         </div>
-      </div>
 
         <section aria-labelledby="step-title" className="card space-y-3 p-4" data-testid="walkthrough-step">
           <ol className="flex flex-wrap gap-2" aria-label="Steps">

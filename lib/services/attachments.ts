@@ -6,7 +6,7 @@ import { db } from '@/lib/db/connection';
 import { filePart, readMultipart } from '@/lib/uploads/multipart';
 import { sniffType } from '@/lib/uploads/sniff';
 import { neutraliseName, readUpload, removeUpload, saveUpload } from '@/lib/uploads/store';
-import { removeThumbnail, thumbnailOf } from '@/lib/uploads/thumbnail';
+import { thumbnailOf } from '@/lib/uploads/thumbnail';
 import { Attachment, FieldCheck, User } from '@/models';
 import { attachmentUrls } from './attachment-urls';
 import { audit } from './audit';
@@ -111,7 +111,6 @@ export async function uploadAttachment(user: SessionUser, bridgeId: string, req:
     return toJson(row, user.name);
   } catch (err) {
     await removeUpload(storedName);
-    await removeThumbnail(storedName);
     throw err;
   }
 }

@@ -184,7 +184,6 @@ export async function loadFieldSheet(bridgeId: string, span: number | null): Pro
   };
 }
 
-/** Reads `?span=` from a URL: null when absent, 400 when not a positive whole number. */
 /** Query of the field-sheet CSV: `span` picks one span (1, 2, …); absent or empty means every span. */
 export const fieldSheetQuerySchema = z.object({
   span: z

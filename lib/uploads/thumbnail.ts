@@ -102,9 +102,3 @@ export async function thumbnailOf(storedName: string, original: () => Promise<Bu
   }
   return thumb;
 }
-
-/** Removes the thumbnail of a stored upload, if one was made. */
-export async function removeThumbnail(storedName: string): Promise<void> {
-  const m = STORED.exec(storedName);
-  if (m) await fs.rm(path.join(thumbsDir(), `${m[1]}.jpg`), { force: true });
-}
