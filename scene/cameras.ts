@@ -11,6 +11,11 @@ export type ViewName = 'plan' | 'edge' | 'crew' | 'orbit' | 'string' | 'section'
 export interface CameraPose {
   position: [number, number, number];
   target: [number, number, number];
+  /**
+   * Overview poses: the narrowest viewport aspect (width / height) the pose keeps the whole bridge in;
+   * on a narrower one the camera backs away along its line of sight (CameraRig) so nothing is cut off.
+   */
+  fitAspect?: number;
 }
 
 /** The side whose overhang is widest somewhere: on a curve with chords, the outside of the curve. */
@@ -78,7 +83,7 @@ export function cameraPose(
     case 'plan': {
       // 50° field of view: the bridge's extent fills about 85 % of the height.
       const h = (extent * 0.62) / Math.tan((25 * Math.PI) / 180);
-      return { position: [cx, cy + h, cz + h * 0.002], target: [cx, cy, cz] };
+      return { position: [cx, cy + h, cz + h * 0.002], target: [cx, cy, cz], fitAspect: 1 };
     }
     case 'orbit': {
       // Three-quarter view from the right of the bridge's main axis, the whole length in frame.
@@ -94,10 +99,12 @@ export function cameraPose(
       // Right of the axis in the scene's horizontal plane (x east, z south): (−az, ax).
       const px = -az;
       const pz = ax;
-      const d = len * 0.62;
+      // Far enough and little enough off-centre that both ends stay inside a 50° view at aspect 1.6.
+      const d = len * 0.75;
       return {
-        position: [cx + px * d - ax * d * 0.35, cy + d * 0.45, cz + pz * d - az * d * 0.35],
+        position: [cx + px * d - ax * d * 0.2, cy + d * 0.45, cz + pz * d - az * d * 0.2],
         target: [cx, cy - 4 * u, cz],
+        fitAspect: 1.6,
       };
     }
     case 'edge': {

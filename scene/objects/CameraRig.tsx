@@ -9,12 +9,14 @@ type Controls = { target: THREE.Vector3; update: () => void } | null;
 
 /**
  * Moves the camera (and the orbit controls' target) to a pose over about a second, eased. A new
- * `version` starts a new move even to the same pose.
+ * `version` starts a new move even to the same pose. Overview poses back away on viewports narrower
+ * than they were framed for.
  */
 export default function CameraRig({ pose, version, instant = false }: { pose: CameraPose; version: number; instant?: boolean }) {
   const camera = useThree((s) => s.camera);
   const controls = useThree((s) => s.controls) as unknown as Controls;
   const invalidate = useThree((s) => s.invalidate);
+  const aspect = useThree((s) => s.size.width / Math.max(1, s.size.height));
   const anim = useRef({
     t: 1,
     fromPos: new THREE.Vector3(),
@@ -29,8 +31,11 @@ export default function CameraRig({ pose, version, instant = false }: { pose: Ca
     const a = anim.current;
     a.fromPos.copy(camera.position);
     a.fromTarget.copy(controls ? controls.target : a.target);
-    a.toPos.set(pose.position[0], pose.position[1], pose.position[2]);
     a.toTarget.set(pose.target[0], pose.target[1], pose.target[2]);
+    a.toPos.set(pose.position[0], pose.position[1], pose.position[2]);
+    // An overview framed for a wider viewport backs away on a narrow one (a phone held upright).
+    const back = pose.fitAspect ? Math.max(1, pose.fitAspect / aspect) : 1;
+    if (back > 1) a.toPos.sub(a.toTarget).multiplyScalar(back).add(a.toTarget);
     a.t = instant || first.current ? 1 : 0;
     first.current = false;
     if (a.t === 1) {
