@@ -46,12 +46,15 @@ export default function EditorPreview({ check, stale }: { check: DraftCheck; sta
             {Object.entries(check.messages)
               .flatMap(([path, list]) => list.map((m) => ({ path, m })))
               .slice(0, 5)
-              .map(({ path, m }) => (
-                <li key={`${path}:${m}`}>
-                  {path !== '_' && !m.includes(labelOf(path, check)) ? <strong>{labelOf(path, check)}: </strong> : null}
-                  {m}
-                </li>
-              ))}
+              .map(({ path, m }) => {
+                const label = path === '_' ? '' : labelOf(path, check);
+                return (
+                  <li key={`${path}:${m}`}>
+                    {label && !m.includes(label) ? <strong>{label}: </strong> : null}
+                    {m}
+                  </li>
+                );
+              })}
           </ul>
           {problemCount > 5 ? <p className="mt-1">…and {problemCount - 5} more, marked in red below.</p> : null}
           <button type="button" className="btn-secondary mt-2" onClick={goToFirstProblem}>

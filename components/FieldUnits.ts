@@ -1,8 +1,7 @@
 /**
  * Field-mode number text and input parsing. Display rounding only; the server computes pass/fail.
  */
-import Decimal from 'decimal.js';
-import { formatFeet, formatFeetInches, formatMetres } from '@/lib/geometry/format';
+import { formatFeet, formatFeetFine, formatFeetInches, formatMetres } from '@/lib/geometry/format';
 
 export type Units = 'ft' | 'm';
 
@@ -19,9 +18,7 @@ export function fieldLength(v: number | null | undefined, units: Units): string 
  */
 export function readingLength(v: number | null | undefined, units: Units): string {
   if (v === null || v === undefined || !Number.isFinite(v)) return '—';
-  if (units === 'm') return `${formatMetres(v)} m`;
-  const text = new Decimal(v).toDecimalPlaces(3, Decimal.ROUND_HALF_UP).toFixed(3);
-  return `${text === '-0.000' ? '0.000' : text} ft`;
+  return units === 'm' ? `${formatMetres(v)} m` : `${formatFeetFine(v)} ft`;
 }
 
 /** Edge width as the crew reads a tape: feet-inches to 1/8" on a feet bridge, metres otherwise. */

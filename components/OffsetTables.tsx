@@ -47,7 +47,6 @@ function groupBySpan(points: OffsetPointRow[], chords: ChordOffsetSetRow[]): Spa
   return [...spans.values()].sort((a, b) => a.span - b.span);
 }
 
-/** True when a girder point matches the station-or-point text filter ("12+45", "1245", "10"). */
 /**
  * The search box: a whole number is a point number; a station with its "+" ("12+45") finds the points
  * within {@link NEAR_STATION} of it; any other text matches the printed station.

@@ -26,6 +26,11 @@ export function formatFeet(feet: number): string {
   return fixed(feet, 2);
 }
 
+/** Feet to 0.001 ft, e.g. -0.17452 → "-0.175": level-bar readings, judged to 0.01 ft. No unit text. Any finite value. */
+export function formatFeetFine(feet: number): string {
+  return fixed(feet, 3);
+}
+
 /** Metres to 0.001 m (1 mm), e.g. 1.23456 → "1.235". No unit text. Any finite value. */
 export function formatMetres(metres: number): string {
   return fixed(metres, 3);
