@@ -1,4 +1,4 @@
-import type { ApiError } from './api-client';
+import type { ApiError } from '@/lib/client/api-client';
 
 /** A failed SWR read: the server's message and a button that asks again. */
 export function LoadFailed({ error, retry }: { error: ApiError; retry: () => void }) {

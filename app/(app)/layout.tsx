@@ -1,7 +1,7 @@
 import AppRail from '@/components/AppRail';
 import SessionProvider from '@/components/SessionProvider';
-import SignInRedirect from '@/components/SignInRedirect';
-import { currentUser } from '@/components/server-session';
+import SignInRedirect from '@/components/signin/SignInRedirect';
+import { currentUser } from '@/lib/auth/server-session';
 
 export const dynamic = 'force-dynamic';
 

@@ -1,10 +1,10 @@
 import type { Metadata } from 'next';
 import { redirect } from 'next/navigation';
 import SessionProvider from '@/components/SessionProvider';
-import SignInForm from '@/components/SignInForm';
+import SignInForm from '@/components/signin/SignInForm';
 import Wordmark, { ChordlineMark } from '@/components/Wordmark';
-import { currentUser } from '@/components/server-session';
-import { safeCallbackPath } from '@/components/safe-callback';
+import { currentUser } from '@/lib/auth/server-session';
+import { safeCallbackPath } from '@/lib/auth/safe-callback';
 
 export const metadata: Metadata = { title: 'Sign in' };
 export const dynamic = 'force-dynamic';

@@ -49,8 +49,8 @@ export {
   type StationOffset,
 } from './alignment';
 export { Profile, createProfile, type PviInput, type VerticalCurve } from './profile';
-export { DeckSurface, crossSlopeAt, gutterOffsets, sideOfOffset, type CrossSlopeInput, type DeckSide } from './crossSection';
+export { DeckSurface, crossSlopeAt, gutterOffsets, sideOfOffset, type CrossSlopeInput, type DeckSide } from '@/lib/geometry/cross-section';
 export { bentLinePoint, girderPoints, exteriorSides, type GirderPoint, type LocatedPoint } from './framing';
 export { chordEdgePoint, curvedEdgePoint, overhangElevations, outwardNormal, type EdgePoint } from './overhang';
-export { chordOffsetSet, chordOffsetAt, edgeMiddleOrdinate } from './chordOffsets';
+export { chordOffsetSet, chordOffsetAt, edgeMiddleOrdinate } from '@/lib/geometry/chord-offsets';
 export { createBridgeModel, type BridgeModel } from './table';

@@ -2,7 +2,7 @@
  * Overhang numbers at exterior girder points: edge point, edge width and the elevations a crew sets.
  */
 import { distanceAlongRayToOffset, type Alignment, type PlanPoint } from './alignment';
-import type { DeckSurface } from './crossSection';
+import type { DeckSurface } from '@/lib/geometry/cross-section';
 import type { GirderPoint } from './framing';
 
 /** Edge point Ek of a girder point and the signed edge width (≤ 0 when the girder is at or past the edge). */

@@ -4,8 +4,8 @@
  * validation and computation share one pass.
  */
 import { createAlignment, SolveError, type Alignment } from './alignment';
-import { chordOffsetSet, edgeMiddleOrdinate } from './chordOffsets';
-import { DeckSurface } from './crossSection';
+import { chordOffsetSet, edgeMiddleOrdinate } from '@/lib/geometry/chord-offsets';
+import { DeckSurface } from '@/lib/geometry/cross-section';
 import type { GeometryIssue } from './errors';
 import { formatLength } from './format';
 import { bentLinePoint, exteriorSides, girderPoints, type LocatedPoint } from './framing';

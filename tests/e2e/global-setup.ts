@@ -13,7 +13,7 @@ declare module 'vitest' {
 }
 
 const root = path.resolve(__dirname, '../..');
-const distDir = '.next-test';
+const distDir = process.env.E2E_DIST_DIR || '.next-test';
 
 function freePort(): Promise<number> {
   return new Promise((resolve, reject) => {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { deviationText, fixHint, parseLength, readingLength, toleranceText } from '@/components/FieldUnits';
+import { deviationText, fixHint, parseLength, readingLength, toleranceText } from '@/lib/units/field-units';
 
 // Feet-inches arithmetic worked by hand: 4'-6 3/8" = 4 + 6.375/12 = 4.53125 ft.
 describe('field-mode length entry', () => {

@@ -1,8 +1,8 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import BridgeList from '@/components/BridgeList';
+import BridgeList from '@/components/bridges/BridgeList';
 import PageHeader from '@/components/PageHeader';
-import { requireUser } from '@/components/server-session';
+import { requireUser } from '@/lib/auth/server-session';
 import { roleAllows } from '@/lib/auth/roles';
 
 export const metadata: Metadata = { title: 'Bridges' };

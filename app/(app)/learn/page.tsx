@@ -1,8 +1,8 @@
 import type { Metadata } from 'next';
 import PageHeader from '@/components/PageHeader';
 import SafetyCaution from '@/components/SafetyCaution';
-import { requireUser } from '@/components/server-session';
-import Walkthrough from '@/scene/Walkthrough';
+import { requireUser } from '@/lib/auth/server-session';
+import Walkthrough from '@/components/learn/Walkthrough';
 
 export const metadata: Metadata = { title: 'Learn' };
 

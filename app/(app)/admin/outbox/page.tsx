@@ -1,8 +1,8 @@
 import type { Metadata } from 'next';
-import OutboxList from '@/components/OutboxList';
+import OutboxList from '@/components/admin/OutboxList';
 import PageHeader from '@/components/PageHeader';
 import RoleNotice from '@/components/RoleNotice';
-import { requireUser } from '@/components/server-session';
+import { requireUser } from '@/lib/auth/server-session';
 import { listOutbox } from '@/lib/mail/outbox';
 import { smtpUrl } from '@/lib/mail/send';
 

@@ -1,8 +1,8 @@
 import type { Metadata } from 'next';
 import PageHeader from '@/components/PageHeader';
 import RoleNotice from '@/components/RoleNotice';
-import UserAdmin from '@/components/UserAdmin';
-import { requireUser } from '@/components/server-session';
+import UserAdmin from '@/components/admin/UserAdmin';
+import { requireUser } from '@/lib/auth/server-session';
 
 export const metadata: Metadata = { title: 'Users' };
 

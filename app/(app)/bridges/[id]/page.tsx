@@ -1,11 +1,11 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import DeleteBridgeButton from '@/components/DeleteBridgeButton';
-import GeometrySummary from '@/components/GeometrySummary';
-import RenameBridgeForm from '@/components/RenameBridgeForm';
-import RevisionHistory from '@/components/RevisionHistory';
-import { requireUser } from '@/components/server-session';
-import { dateTimeText } from '@/components/station-text';
+import DeleteBridgeButton from '@/components/bridges/DeleteBridgeButton';
+import GeometrySummary from '@/components/bridges/GeometrySummary';
+import RenameBridgeForm from '@/components/bridges/RenameBridgeForm';
+import RevisionHistory from '@/components/history/RevisionHistory';
+import { requireUser } from '@/lib/auth/server-session';
+import { dateTimeText } from '@/lib/units/station-text';
 import { roleAllows } from '@/lib/auth/roles';
 import { loadBridge } from './load-bridge';
 import BridgeBreadcrumb from '@/components/BridgeBreadcrumb';

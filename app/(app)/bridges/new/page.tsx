@@ -1,8 +1,8 @@
 import type { Metadata } from 'next';
-import NewBridgeForm from '@/components/NewBridgeForm';
+import NewBridgeForm from '@/components/bridges/NewBridgeForm';
 import PageHeader from '@/components/PageHeader';
 import RoleNotice from '@/components/RoleNotice';
-import { requireUser } from '@/components/server-session';
+import { requireUser } from '@/lib/auth/server-session';
 import { roleAllows } from '@/lib/auth/roles';
 
 export const metadata: Metadata = { title: 'New bridge' };

@@ -1,8 +1,8 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import EditorForm from '@/components/EditorForm';
+import EditorForm from '@/components/editor/EditorForm';
 import RoleNotice from '@/components/RoleNotice';
-import { requireUser } from '@/components/server-session';
+import { requireUser } from '@/lib/auth/server-session';
 import { roleAllows } from '@/lib/auth/roles';
 import { loadBridge } from '../load-bridge';
 import BridgeBreadcrumb from '@/components/BridgeBreadcrumb';

@@ -1,8 +1,8 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import FieldMode from '@/components/FieldMode';
-import GeometryProblem from '@/components/GeometryProblem';
-import { requireUser } from '@/components/server-session';
+import FieldMode from '@/components/field/FieldMode';
+import GeometryProblem from '@/components/editor/GeometryProblem';
+import { requireUser } from '@/lib/auth/server-session';
 import { roleAllows } from '@/lib/auth/roles';
 import { loadFieldView } from '@/lib/services/field-view';
 

@@ -1,10 +1,10 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import HistoryCompareForm from '@/components/HistoryCompareForm';
-import HistoryEdgeWidthChanges from '@/components/HistoryEdgeWidthChanges';
-import HistoryFieldChanges from '@/components/HistoryFieldChanges';
-import HistoryRevisionList from '@/components/HistoryRevisionList';
-import { requireUser } from '@/components/server-session';
+import HistoryCompareForm from '@/components/history/HistoryCompareForm';
+import HistoryEdgeWidthChanges from '@/components/history/HistoryEdgeWidthChanges';
+import HistoryFieldChanges from '@/components/history/HistoryFieldChanges';
+import HistoryRevisionList from '@/components/history/HistoryRevisionList';
+import { requireUser } from '@/lib/auth/server-session';
 import { roleAllows } from '@/lib/auth/roles';
 import { getRevision } from '@/lib/services/bridges';
 import { diffRevisions } from '@/lib/services/revision-diff';

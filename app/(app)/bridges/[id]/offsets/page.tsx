@@ -1,11 +1,11 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import OffsetTables from '@/components/OffsetTables';
+import OffsetTables from '@/components/offsets/OffsetTables';
 import SafetyCaution from '@/components/SafetyCaution';
-import { requireUser } from '@/components/server-session';
+import { requireUser } from '@/lib/auth/server-session';
 import { roleAllows } from '@/lib/auth/roles';
 import { getBridge } from '@/lib/services/bridges';
-import OffsetPrintStamp from '@/components/OffsetPrintStamp';
+import OffsetPrintStamp from '@/components/offsets/OffsetPrintStamp';
 import styles from './offsets-print.module.css';
 import BridgeBreadcrumb from '@/components/BridgeBreadcrumb';
 import { orNotFound } from '../load-bridge';

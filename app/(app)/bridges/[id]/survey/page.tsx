@@ -1,9 +1,9 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import SurveyImportForm from '@/components/SurveyImportForm';
-import SurveyImportLog from '@/components/SurveyImportLog';
-import SurveyValuesTable from '@/components/SurveyValuesTable';
-import { requireUser } from '@/components/server-session';
+import SurveyImportForm from '@/components/survey/SurveyImportForm';
+import SurveyImportLog from '@/components/survey/SurveyImportLog';
+import SurveyValuesTable from '@/components/survey/SurveyValuesTable';
+import { requireUser } from '@/lib/auth/server-session';
 import { roleAllows } from '@/lib/auth/roles';
 import { getBridge } from '@/lib/services/bridges';
 import { framingOf, listSurvey } from '@/lib/services/survey';

@@ -3,7 +3,7 @@ import Link from 'next/link';
 import BridgeBreadcrumb from '@/components/BridgeBreadcrumb';
 import PageHeader from '@/components/PageHeader';
 import SafetyCaution from '@/components/SafetyCaution';
-import { requireUser } from '@/components/server-session';
+import { requireUser } from '@/lib/auth/server-session';
 import { sceneDataForBridge } from '@/lib/scene-data/bridge';
 import LazyBridgeViewer from '@/scene/LazyBridgeViewer';
 import EdgeWidthSummary from '@/scene/EdgeWidthSummary';

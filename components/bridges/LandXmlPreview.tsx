@@ -1,0 +1,83 @@
+import { lengthText, stationText } from '@/lib/units/station-text';
+import type { ImportedAlignment } from '@/lib/import/landxml';
+
+/** What a LandXML alignment holds, before it replaces the editor's alignment and profile. */
+export default function LandXmlPreview({ item, units }: { item: ImportedAlignment; units: 'ft' | 'm' }) {
+  const al = item.alignment;
+  let station = al.start_station;
+  const rows = al.elements.map((e, i) => {
+    const from = station;
+    station += e.length;
+    return { i, e, from, to: station };
+  });
+  return (
+    <div className="space-y-3" data-testid="landxml-preview">
+      <p className="text-sm text-concrete-700">
+        Starts at station <span className="tabular font-semibold">{stationText(al.start_station, units)}</span>, easting{' '}
+        <span className="tabular">{lengthText(al.start_x, units)}</span>, northing <span className="tabular">{lengthText(al.start_y, units)}</span>, bearing{' '}
+        <span className="tabular">{al.start_bearing_deg.toFixed(6)}°</span>; ends at <span className="tabular font-semibold">{stationText(station, units)}</span>.
+      </p>
+      <div className="overflow-x-auto">
+        <table className="w-full text-sm">
+          <caption className="mb-1 text-left font-bold text-concrete-800">Alignment elements</caption>
+          <thead>
+            <tr className="border-b border-concrete-200 text-left text-xs text-concrete-600">
+              <th className="py-1 pr-2 font-semibold">#</th>
+              <th className="py-1 pr-2 font-semibold">Element</th>
+              <th className="py-1 pr-2 font-semibold">From</th>
+              <th className="py-1 pr-2 font-semibold">To</th>
+              <th className="py-1 pr-2 text-right font-semibold">Length ({units})</th>
+              <th className="py-1 pr-2 text-right font-semibold">Radius ({units})</th>
+              <th className="py-1 font-semibold">Turns</th>
+            </tr>
+          </thead>
+          <tbody>
+            {rows.map(({ i, e, from, to }) => (
+              <tr key={i} className="border-b border-concrete-100">
+                <td className="py-1 pr-2">{i + 1}</td>
+                <td className="py-1 pr-2">{e.type === 'line' ? 'Tangent (Line)' : 'Arc (Curve)'}</td>
+                <td className="py-1 pr-2 tabular">{stationText(from, units)}</td>
+                <td className="py-1 pr-2 tabular">{stationText(to, units)}</td>
+                <td className="py-1 pr-2 text-right">{lengthText(e.length, units, false)}</td>
+                <td className="py-1 pr-2 text-right">{e.type === 'arc' ? lengthText(e.radius, units, false) : '—'}</td>
+                <td className="py-1">{e.type === 'arc' ? (e.direction === 'right' ? 'Right (cw)' : 'Left (ccw)') : '—'}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+      {item.profile ? (
+        <div className="overflow-x-auto">
+          <table className="w-full text-sm">
+            <caption className="mb-1 text-left font-bold text-concrete-800">Profile{item.profile_name ? `: ${item.profile_name}` : ''}</caption>
+            <thead>
+              <tr className="border-b border-concrete-200 text-left text-xs text-concrete-600">
+                <th className="py-1 pr-2 font-semibold">PVI</th>
+                <th className="py-1 pr-2 font-semibold">Station</th>
+                <th className="py-1 pr-2 text-right font-semibold">Elevation ({units})</th>
+                <th className="py-1 text-right font-semibold">Vertical curve ({units})</th>
+              </tr>
+            </thead>
+            <tbody>
+              {item.profile.pvis.map((p, i) => (
+                <tr key={i} className="border-b border-concrete-100">
+                  <td className="py-1 pr-2">{i + 1}</td>
+                  <td className="py-1 pr-2 tabular">{stationText(p.station, units)}</td>
+                  <td className="py-1 pr-2 text-right">{lengthText(p.elevation, units, false)}</td>
+                  <td className="py-1 text-right">{p.curve_length ? lengthText(p.curve_length, units, false) : '—'}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      ) : null}
+      {item.notes.length > 0 ? (
+        <ul className="list-disc pl-5 text-sm text-concrete-700">
+          {item.notes.map((n) => (
+            <li key={n}>{n}</li>
+          ))}
+        </ul>
+      ) : null}
+    </div>
+  );
+}

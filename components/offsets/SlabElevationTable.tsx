@@ -1,0 +1,57 @@
+import type { OffsetPointRow } from '@/components/offsets/offset-table-types';
+import { elevationCell, type Units } from '@/lib/units/offset-display';
+import { stationText } from '@/lib/units/station-text';
+
+/**
+ * Bottom-of-slab elevation over every girder's centreline (interior girders too) at each girder point
+ * of one span: the construction elevations a designer puts on the plans. Folded by default.
+ */
+export default function SlabElevationTable({ span, points, units }: { span: number; points: OffsetPointRow[]; units: Units }) {
+  const girders = [...new Set(points.map((p) => p.girder))];
+  const byKey = new Map(points.map((p) => [`${p.girder}\u0000${p.point}`, p]));
+  const pointNumbers = [...new Set(points.map((p) => p.point))].sort((a, b) => a - b);
+  if (girders.length === 0) return null;
+  return (
+    <details className="card overflow-hidden">
+      <summary className="cursor-pointer select-none px-4 py-3 font-semibold text-brand-700">
+        Bottom of slab over every girder, span {span} ({girders.length} girders, elevations in {units === 'm' ? 'm' : 'ft'})
+      </summary>
+      <div className="overflow-x-auto">
+        <table className="w-full text-sm">
+          <caption className="sr-only">
+            Span {span}: bottom-of-slab elevation over each girder centreline at each girder point
+          </caption>
+          <thead className="bg-concrete-100 text-concrete-700">
+            <tr>
+              <th scope="col" className="sticky left-0 bg-concrete-100 px-3 py-2 text-right font-semibold">
+                Point
+              </th>
+              {girders.map((g) => (
+                <th key={g} scope="col" className="px-3 py-2 text-right font-semibold">
+                  {g}
+                </th>
+              ))}
+            </tr>
+          </thead>
+          <tbody>
+            {pointNumbers.map((k) => (
+              <tr key={k} className="border-t border-concrete-100 bg-white even:bg-concrete-50">
+                <th scope="row" className="sticky left-0 bg-inherit px-3 py-1.5 text-right font-semibold text-concrete-800">
+                  {k}
+                </th>
+                {girders.map((g) => {
+                  const p = byKey.get(`${g}\u0000${k}`);
+                  return (
+                    <td key={g} className="px-3 py-1.5 text-right tabular" title={p ? `${g} at ${stationText(p.station, units)}` : undefined}>
+                      {p ? elevationCell(p.bottom_of_slab, units) : '—'}
+                    </td>
+                  );
+                })}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+    </details>
+  );
+}
