@@ -3,6 +3,7 @@ import * as m0001 from './0001-initial';
 import * as m0002 from './0002-field-work';
 import * as m0003 from './0003-girder-survey';
 import * as m0004 from './0004-check-client-key';
+import * as m0005 from './0005-bridge-record';
 
 export type Migration = {
   name: string;
@@ -19,4 +20,5 @@ export const migrations: Migration[] = [
   { name: '0002-field-work', ...m0002 },
   { name: '0003-girder-survey', ...m0003 },
   { name: '0004-check-client-key', ...m0004 },
+  { name: '0005-bridge-record', ...m0005 },
 ];

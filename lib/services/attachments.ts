@@ -10,6 +10,7 @@ import { thumbnailOf } from '@/lib/uploads/thumbnail';
 import { Attachment, FieldCheck, User } from '@/models';
 import { attachmentUrls } from './attachment-urls';
 import { audit } from './audit';
+import { markFieldActivity } from './bridge-status';
 import { findBridgeById } from './tolerances';
 
 export type AttachmentJson = {
@@ -103,6 +104,7 @@ export async function uploadAttachment(user: SessionUser, bridgeId: string, req:
         { attachment: a.id, check: a.checkId, name: a.originalName, content_type: a.contentType, size: a.size },
         transaction,
       );
+      await markFieldActivity(bridge.id, transaction);
       return a;
     });
     // Make the thumbnail now, while the uploader waits anyway, so lists never wait for it. Best

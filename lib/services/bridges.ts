@@ -7,6 +7,9 @@ import type { SessionUser } from '@/lib/auth/session';
 import type { BridgeDescription } from '@/lib/geometry';
 import { checkedDescription } from './description';
 import { audit } from './audit';
+import { bridgeRecordSchema, recordAttributes, recordOf, RECORD_KEYS, type BridgeRecord } from './bridge-record';
+import { markActivity, refreshStatus } from './bridge-status';
+import { listBridgePage, MAX_LIMIT, type BridgeRow } from './bridge-list';
 
 export const bridgeNameSchema = z
   .string({ error: 'Give the bridge a name.' })
@@ -14,20 +17,23 @@ export const bridgeNameSchema = z
   .min(1, 'Give the bridge a name.')
   .max(200, 'Keep the name under 200 characters.');
 
-export const createBridgeSchema = z.object({ name: bridgeNameSchema, description: z.unknown() });
-export const renameBridgeSchema = z.object({ name: bridgeNameSchema });
+export const createBridgeSchema = bridgeRecordSchema.extend({ name: bridgeNameSchema, description: z.unknown() });
+/** PATCH body: a new name and/or any field of the bridge record; at least one. */
+export const updateBridgeSchema = bridgeRecordSchema
+  .extend({ name: bridgeNameSchema.optional() })
+  .refine((v) => Object.values(v).some((x) => x !== undefined), { message: 'Send a new name or a field of the bridge record to change.', path: ['name'] });
 export const createRevisionSchema = z.object({
   base_revision: z.number({ error: 'base_revision must be the revision number you edited.' }).int().positive(),
   description: z.unknown(),
   note: z.string().trim().max(500, 'Keep the note under 500 characters.').optional().default(''),
 });
 
-export type BridgeSummary = { id: number; name: string; units: string; revision: number; updatedAt: string };
+export type BridgeSummary = BridgeRecord & { id: number; name: string; units: string; revision: number; updatedAt: string };
 export type BridgeDetail = BridgeSummary & { description: BridgeDescription };
 export type RevisionSummary = { revision: number; author: string | null; note: string; createdAt: string };
 
 function summary(b: Bridge): BridgeSummary {
-  return { id: b.id, name: b.name, units: b.units, revision: b.currentRevision, updatedAt: b.updatedAt.toISOString() };
+  return { id: b.id, name: b.name, units: b.units, revision: b.currentRevision, updatedAt: b.updatedAt.toISOString(), ...recordOf(b) };
 }
 
 function parseId(id: string | number): number {
@@ -41,12 +47,6 @@ async function findBridge(id: string | number): Promise<Bridge> {
   const bridge = await Bridge.findByPk(parseId(id));
   if (!bridge) throw new HttpError(404, 'There is no bridge with that id.');
   return bridge;
-}
-
-export async function listBridges(): Promise<BridgeSummary[]> {
-  await db();
-  const rows = await Bridge.findAll({ order: [['name', 'ASC']] });
-  return rows.map(summary);
 }
 
 /** The stored description of one revision (the latest when `revision` is omitted). */
@@ -65,7 +65,7 @@ export async function createBridge(user: SessionUser, input: z.infer<typeof crea
   const description = checkedDescription(input.description);
   const sequelize = await db();
   const bridge = await sequelize.transaction(async (transaction) => {
-    const created = await Bridge.create({ name: input.name, units: description.units, currentRevision: 1 }, { transaction });
+    const created = await Bridge.create({ name: input.name, units: description.units, currentRevision: 1, ...recordAttributes(input) }, { transaction });
     await GeometryRevision.create(
       { bridgeId: created.id, revision: 1, description: JSON.stringify(description), authorId: user.id, note: 'Created' },
       { transaction },
@@ -73,17 +73,36 @@ export async function createBridge(user: SessionUser, input: z.infer<typeof crea
     await audit(user.id, 'bridge.create', 'bridge', created.id, { name: created.name }, transaction);
     return created;
   });
+  await refreshStatus(bridge.id);
   return { id: bridge.id, name: bridge.name, revision: 1 };
 }
 
+/** Renames a bridge (kept for callers that only rename). */
 export async function renameBridge(user: SessionUser, id: string, name: string): Promise<BridgeSummary> {
+  return updateBridge(user, id, { name });
+}
+
+/** The first page of bridges by name (at most 500): scripts and tests; the portfolio pages through listBridgePage. */
+export async function listBridges(): Promise<BridgeRow[]> {
+  return (await listBridgePage({ sort: 'name', limit: MAX_LIMIT })).rows;
+}
+
+/** Renames a bridge and/or changes its record; one audit event for each. */
+export async function updateBridge(user: SessionUser, id: string, input: z.infer<typeof updateBridgeSchema>): Promise<BridgeSummary> {
   const bridge = await findBridge(id);
   const sequelize = await db();
   await sequelize.transaction(async (transaction) => {
     const before = bridge.name;
-    bridge.name = name;
+    const record = recordAttributes(input);
+    const changed = RECORD_KEYS.filter((k) => record[k] !== undefined && record[k] !== bridge[k]);
+    if (input.name !== undefined) bridge.name = input.name;
+    bridge.set(record);
     await bridge.save({ transaction });
-    await audit(user.id, 'bridge.rename', 'bridge', bridge.id, { from: before, to: name }, transaction);
+    if (input.name !== undefined && input.name !== before) {
+      await audit(user.id, 'bridge.rename', 'bridge', bridge.id, { from: before, to: input.name }, transaction);
+    }
+    if (changed.length > 0) await audit(user.id, 'bridge.record', 'bridge', bridge.id, { fields: changed }, transaction);
+    await markActivity(bridge.id, transaction);
   });
   return summary(bridge);
 }
@@ -145,6 +164,8 @@ export async function createRevision(user: SessionUser, id: string, input: z.inf
     if ((err as Error).name === 'SequelizeUniqueConstraintError') throw stale();
     throw err;
   }
+  // New geometry: every bracket and span is counted again against the new revision.
+  await refreshStatus(bridge.id);
   return { revision: next };
 }
 

@@ -6,6 +6,7 @@ import type { OffsetPoint, OffsetTable } from '@/lib/geometry';
 import { Attachment, FieldCheck, User } from '@/models';
 import { attachmentUrls } from './attachment-urls';
 import { audit } from './audit';
+import { refreshStatus } from './bridge-status';
 import { offsetsForBridge } from './offsets';
 import { fieldSettingsOf, findBridgeById } from './tolerances';
 
@@ -222,6 +223,7 @@ export async function recordCheck(user: SessionUser, bridgeId: string, input: Ch
     if (raced) return raced;
     throw err;
   }
+  await refreshStatus(bridge.id, { fieldWork: true });
   return { ...toJson(created, user.name, null, []), replayed: false };
 }
 

@@ -5,6 +5,7 @@ import { db } from '@/lib/db/connection';
 import type { OffsetTable } from '@/lib/geometry';
 import { FieldCheck, SignOff, User } from '@/models';
 import { audit } from './audit';
+import { refreshStatus } from './bridge-status';
 import { bracketRows } from './checks';
 import { offsetsForBridge } from './offsets';
 
@@ -136,5 +137,6 @@ export async function signOffSpan(user: SessionUser, bridgeId: string, input: z.
     await audit(user.id, 'signoff.create', 'bridge', bridge.id, { signoff: s.id, span: input.span, revision: bridge.currentRevision }, transaction);
     return s;
   });
+  await refreshStatus(bridge.id, { fieldWork: true });
   return { ...signOffJson(created, bridge.currentRevision), by: user.name };
 }

@@ -13,6 +13,7 @@ import { DEFAULT_POINTS_PER_SPAN, type BridgeDescription } from '@/lib/geometry'
 import { parseSurveyCsv, type SurveyCsvReport, type SurveyFraming } from '@/lib/import/survey-csv';
 import { getRevisionDescription } from './bridges';
 import { audit } from './audit';
+import { refreshStatus } from './bridge-status';
 import type { SurveyCsvRow } from '@/lib/import/survey-csv';
 
 /** Largest survey CSV text accepted, in characters (the JSON body limit is 1 MB). */
@@ -202,7 +203,7 @@ export async function commitSurvey(user: SessionUser, id: string, input: SurveyU
     throw new HttpError(400, message, reportFields(preview));
   }
   const sequelize = await db();
-  return sequelize.transaction(async (transaction) => {
+  const stored = await sequelize.transaction(async (transaction) => {
     const now = new Date();
     const record = await SurveyImport.create(
       { bridgeId: bridge.id, userId: user.id, filename: input.filename, revision: bridge.currentRevision, rowCount: report.rows.length, replacedCount: 0 },
@@ -231,6 +232,9 @@ export async function commitSurvey(user: SessionUser, id: string, input: SurveyU
     );
     return { import_id: record.id, stored: report.rows.length, replaced, revision: bridge.currentRevision };
   });
+  // Surveyed points add level-bar readings to check, which changes what passes.
+  await refreshStatus(bridge.id);
+  return stored;
 }
 
 /** Stored values (current with their history) and the import log of a bridge, for the survey page and API. */

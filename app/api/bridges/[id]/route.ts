@@ -1,12 +1,12 @@
 import { withRole, ok } from '@/lib/api/with-role';
-import { deleteBridge, getBridge, renameBridge, renameBridgeSchema } from '@/lib/services/bridges';
+import { deleteBridge, getBridge, updateBridge, updateBridgeSchema } from '@/lib/services/bridges';
 
 type P = { id: string };
 
 export const GET = withRole<P>('signed-in', undefined, async ({ params }) => ok(await getBridge(params.id)));
 
-export const PATCH = withRole<P, typeof renameBridgeSchema>(['engineer'], renameBridgeSchema, async ({ user, params, body }) =>
-  ok(await renameBridge(user, params.id, body.name)),
+export const PATCH = withRole<P, typeof updateBridgeSchema>(['engineer'], updateBridgeSchema, async ({ user, params, body }) =>
+  ok(await updateBridge(user, params.id, body)),
 );
 
 export const DELETE = withRole<P>(['admin'], undefined, async ({ user, params }) => {
