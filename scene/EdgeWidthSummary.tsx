@@ -1,4 +1,5 @@
-import { formatLength, type OffsetTable } from '@/lib/geometry';
+import type { OffsetTable } from '@/lib/geometry';
+import { lengthText } from '@/lib/units';
 
 /**
  * Edge width range per span and side, straight from the engine's span summaries: the numbers the
@@ -27,9 +28,9 @@ export default function EdgeWidthSummary({ table, caption = 'Edge width per span
               <td className="px-4 py-2">{s.span}</td>
               <td className="px-4 py-2">{s.side === 'left' ? 'Left' : 'Right'}</td>
               <td className="px-4 py-2">{s.girder}</td>
-              <td className="px-4 py-2 text-right">{formatLength(s.min_edge_width, u)}</td>
-              <td className="px-4 py-2 text-right">{formatLength(s.max_edge_width, u)}</td>
-              <td className="px-4 py-2 text-right">{formatLength(s.middle_ordinate, u)}</td>
+              <td className="px-4 py-2 text-right">{lengthText(s.min_edge_width, u)}</td>
+              <td className="px-4 py-2 text-right">{lengthText(s.max_edge_width, u)}</td>
+              <td className="px-4 py-2 text-right">{lengthText(s.middle_ordinate, u)}</td>
             </tr>
           ))}
         </tbody>

@@ -1,21 +1,21 @@
-import { formatLength } from '@/lib/geometry';
 import { rampCss } from './builders/ramp';
+import { lengthText, type Units } from '@/lib/units';
 
 /** Colour legend for edge width, in the bridge's units, plus what each line colour means. */
-export default function Legend({ range, units, points = true }: { range: [number, number]; units: 'ft' | 'm'; points?: boolean }) {
+export default function Legend({ range, units, points = true }: { range: [number, number]; units: Units; points?: boolean }) {
   const mid = (range[0] + range[1]) / 2;
   return (
     <div className="space-y-3 text-sm" data-testid="edge-legend">
       <div>
         <div className="font-semibold text-concrete-800">Edge width, girder centreline to deck edge</div>
         <div className="mt-1 h-3 rounded" style={{ background: rampCss() }} aria-hidden="true" />
-        {formatLength(range[0], units) === formatLength(range[1], units) ? (
-          <div className="mt-1 tabular text-concrete-700">{formatLength(range[0], units)} all along: the width does not change on this bridge</div>
+        {lengthText(range[0], units) === lengthText(range[1], units) ? (
+          <div className="mt-1 tabular text-concrete-700">{lengthText(range[0], units)} all along: the width does not change on this bridge</div>
         ) : (
           <div className="mt-1 flex justify-between tabular text-concrete-700">
-            <span>{formatLength(range[0], units)}</span>
-            <span>{formatLength(mid, units)}</span>
-            <span>{formatLength(range[1], units)}</span>
+            <span>{lengthText(range[0], units)}</span>
+            <span>{lengthText(mid, units)}</span>
+            <span>{lengthText(range[1], units)}</span>
           </div>
         )}
       </div>

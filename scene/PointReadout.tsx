@@ -1,14 +1,15 @@
-import { formatLength, formatOffset, formatStation, type OffsetPoint } from '@/lib/geometry';
+import type { OffsetPoint } from '@/lib/geometry';
+import { lengthText, offsetText, stationText, type Units } from '@/lib/units';
 
 /** The numbers of one girder point, as the offset table has them, with units. */
-export default function PointReadout({ row, units }: { row: OffsetPoint | null; units: 'ft' | 'm' }) {
+export default function PointReadout({ row, units }: { row: OffsetPoint | null; units: Units }) {
   if (!row) {
     return <p className="text-sm text-concrete-600">Click a dark dot on an outside girder, or pick a point from the list, to see its numbers.</p>;
   }
-  const len = (v: number | null) => (v === null ? '—' : formatLength(v, units));
+  const len = (v: number | null) => (v === null ? '—' : lengthText(v, units));
   const items: Array<[string, string]> = [
-    ['Station', formatStation(row.station, units)],
-    ['Offset', formatOffset(row.offset, units)],
+    ['Station', stationText(row.station, units)],
+    ['Offset', offsetText(row.offset, units)],
     ['Edge width', len(row.edge_width)],
     ['Edge drop', len(row.edge_drop)],
     ['Form target', len(row.form_target)],

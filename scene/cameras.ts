@@ -5,6 +5,7 @@
 import type { OffsetPoint, OffsetTable } from '@/lib/geometry';
 import { overhangRuns } from './builders/runs';
 import { sceneY, type SceneFrame } from './builders/frame';
+import type { Units } from '@/lib/units';
 
 export type ViewName = 'plan' | 'edge' | 'crew' | 'orbit' | 'string' | 'section' | 'span' | 'side';
 
@@ -48,7 +49,7 @@ export function cameraPose(
   view: ViewName,
   table: Pick<OffsetTable, 'points'>,
   frame: SceneFrame,
-  units: 'ft' | 'm',
+  units: Units,
   opts: { side?: 'left' | 'right'; span?: number; bent?: number } = {},
 ): CameraPose {
   const u = units === 'm' ? 0.3048 : 1;

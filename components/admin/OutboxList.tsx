@@ -1,4 +1,4 @@
-import { dateTimeText } from '@/lib/units/station-text';
+import { dateTimeText } from '@/lib/units';
 
 type Message = {
   id: number;

@@ -5,7 +5,7 @@ import { mutate } from 'swr';
 import { ROLES, ROLE_LABELS, isRole } from '@/lib/auth/roles';
 import { ApiError, sendJson } from '@/lib/client/api-client';
 import type { PublicUserRow } from '@/components/admin/public-user';
-import { dateTimeText } from '@/lib/units/station-text';
+import { dateTimeText } from '@/lib/units';
 
 /** One user: change the role, or set a new password (PATCH /api/admin/users/[id]). */
 export default function UserRow({ user, isSelf }: { user: PublicUserRow; isSelf: boolean }) {

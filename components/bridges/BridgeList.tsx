@@ -4,9 +4,9 @@ import Link from 'next/link';
 import useSWR from 'swr';
 import { fetcher, type ApiError } from '@/lib/client/api-client';
 import { LoadFailed, Loading } from '@/components/LoadState';
-import { dateTimeText } from '@/lib/units/station-text';
+import { dateTimeText, type Units } from '@/lib/units';
 
-type BridgeSummary = { id: number; name: string; units: 'ft' | 'm'; revision: number; updatedAt: string };
+type BridgeSummary = { id: number; name: string; units: Units; revision: number; updatedAt: string };
 
 const UNIT_NAMES: Record<string, string> = { ft: 'feet (ft)', m: 'metres (m)' };
 

@@ -1,6 +1,6 @@
 import type { BridgeDescription } from '@/lib/geometry/schema';
 import SummaryTable from '@/components/offsets/SummaryTable';
-import { enteredLengthText, lengthText, offsetText, slopeText, stationText, type Units } from '@/lib/units/station-text';
+import { enteredLengthText, lengthText, offsetText, slopeText, stationText, type Units } from '@/lib/units';
 
 /** Plain-language summary of a stored description: alignment, profile, section, bents, spans, girders. */
 export default function GeometrySummary({ description }: { description: BridgeDescription }) {

@@ -3,6 +3,7 @@
 import { useId, useRef, useState } from 'react';
 import LandXmlPreview from '@/components/bridges/LandXmlPreview';
 import type { ImportedAlignment } from '@/lib/import/landxml';
+import type { Units } from '@/lib/units';
 
 type ImportAnswer = { alignments: ImportedAlignment[]; skipped: { name: string; reason: string }[]; linear_unit: string };
 
@@ -12,7 +13,7 @@ const MAX_BYTES = 5 * 1024 * 1024;
  * Reads a LandXML 1.2 file on the server (nothing is stored), lets the user pick one of its
  * alignments, shows its elements and PVIs, and hands the chosen alignment and profile to the editor.
  */
-export default function LandXmlImport({ units, onApply }: { units: 'ft' | 'm'; onApply: (item: ImportedAlignment, fileName: string) => void }) {
+export default function LandXmlImport({ units, onApply }: { units: Units; onApply: (item: ImportedAlignment, fileName: string) => void }) {
   const ids = useId();
   const input = useRef<HTMLInputElement>(null);
   const [open, setOpen] = useState(false);

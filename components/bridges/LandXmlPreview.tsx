@@ -1,8 +1,8 @@
-import { lengthText, stationText } from '@/lib/units/station-text';
+import { lengthText, stationText, type Units } from '@/lib/units';
 import type { ImportedAlignment } from '@/lib/import/landxml';
 
 /** What a LandXML alignment holds, before it replaces the editor's alignment and profile. */
-export default function LandXmlPreview({ item, units }: { item: ImportedAlignment; units: 'ft' | 'm' }) {
+export default function LandXmlPreview({ item, units }: { item: ImportedAlignment; units: Units }) {
   const al = item.alignment;
   let station = al.start_station;
   const rows = al.elements.map((e, i) => {

@@ -7,8 +7,8 @@ import { ApiError, sendJson } from '@/lib/client/api-client';
 import FieldErrorList from '@/components/FieldErrorList';
 import GeometryProblem from '@/components/editor/GeometryProblem';
 import { starterBridge } from '@/lib/demo/starter-bridge';
+import type { Units } from '@/lib/units';
 
-type Units = 'ft' | 'm';
 type Source = 'starter' | 'file' | 'edited';
 
 const MAX_FILE_BYTES = 1024 * 1024;

@@ -1,4 +1,4 @@
-import { dateTimeText } from '@/lib/units/station-text';
+import { dateTimeText } from '@/lib/units';
 
 type AuditRow = { id: number; action: string; label: string; by: string | null; detail: Record<string, unknown>; created_at: string };
 

@@ -1,6 +1,5 @@
 import type { CheckRow } from '@/components/checks/check-types';
-import { deviationText, fieldLength, type Units } from '@/lib/units/field-units';
-import { dateTimeText, stationText } from '@/lib/units/station-text';
+import { dateTimeText, deviationText, lengthText, stationText, type Units } from '@/lib/units';
 
 function Verdict({ pass }: { pass: boolean | null }) {
   if (pass === null) return null;
@@ -46,7 +45,7 @@ export default function CheckHistoryTable({ checks, units, currentRevision }: { 
                   '—'
                 ) : (
                   <>
-                    {fieldLength(c.measured_edge_width, units)} / {fieldLength(c.computed_edge_width, units)}
+                    {lengthText(c.measured_edge_width, units)} / {lengthText(c.computed_edge_width, units)}
                     <div className="text-xs">
                       {deviationText(c.width_deviation, units)}
                       <Verdict pass={c.width_pass} />
@@ -59,7 +58,7 @@ export default function CheckHistoryTable({ checks, units, currentRevision }: { 
                   '—'
                 ) : (
                   <>
-                    {fieldLength(c.measured_drop_from_girder_top, units)} / {fieldLength(c.computed_drop_from_girder_top, units)}
+                    {lengthText(c.measured_drop_from_girder_top, units)} / {lengthText(c.computed_drop_from_girder_top, units)}
                     <div className="text-xs">
                       {deviationText(c.reading_deviation, units, 'reading')}
                       <Verdict pass={c.reading_pass} />

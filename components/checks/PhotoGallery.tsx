@@ -1,6 +1,6 @@
 // The server's own type, imported as a type only: nothing of the server code reaches the browser.
 import type { AttachmentJson } from '@/lib/services/attachments';
-import { dateTimeText } from '@/lib/units/station-text';
+import { dateTimeText } from '@/lib/units';
 
 type Photo = AttachmentJson;
 

@@ -3,7 +3,7 @@
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { ApiError, sendJson } from '@/lib/client/api-client';
-import { dateTimeText, stationText } from '@/lib/units/station-text';
+import { dateTimeText, stationText, type Units } from '@/lib/units';
 
 type Missing = { girder: string; point: number; station: number; measure: string; reason: string };
 type SignOffRow = { id: number; span: number; revision: number; by: string | null; note: string; created_at: string; out_of_date: boolean };
@@ -13,7 +13,7 @@ export type SpanStatusRow = { span: number; girders: string[]; brackets: number;
  * Sign-off state of each span: signed (and whether a later revision made it out of date), ready, or
  * what is still missing. Inspectors sign a span off when every bracket has a passing latest check.
  */
-export default function SignOffPanel({ bridgeId, units, spans, canSign }: { bridgeId: number; units: 'ft' | 'm'; spans: SpanStatusRow[]; canSign: boolean }) {
+export default function SignOffPanel({ bridgeId, units, spans, canSign }: { bridgeId: number; units: Units; spans: SpanStatusRow[]; canSign: boolean }) {
   const router = useRouter();
   const [busy, setBusy] = useState<number | null>(null);
   const [errors, setErrors] = useState<Record<number, string>>({});

@@ -3,9 +3,10 @@
 import { useRouter } from 'next/navigation';
 import { useId, useState } from 'react';
 import { ApiError, sendJson } from '@/lib/client/api-client';
+import type { Units } from '@/lib/units';
 
 type Settings = {
-  units: 'ft' | 'm';
+  units: Units;
   width_tolerance: number;
   reading_tolerance: number;
   base_rod_length: number;

@@ -1,8 +1,8 @@
-import { lengthText } from '@/lib/units/station-text';
+import { lengthText, type Units } from '@/lib/units';
 import type { SpanSummary } from '@/lib/geometry';
 
 /** Edge-width range (girder point → deck edge) of each span and side, from the engine's span summaries. */
-export default function PlanSketchSpanTable({ summaries, units }: { summaries: SpanSummary[]; units: 'ft' | 'm' }) {
+export default function PlanSketchSpanTable({ summaries, units }: { summaries: SpanSummary[]; units: Units }) {
   return (
     <div className="overflow-x-auto">
       <table className="w-full text-sm" data-testid="span-widths">

@@ -11,8 +11,8 @@ import FieldTargets from '@/components/field/FieldTargets';
 import PhotoCaptureButton from '@/components/field/PhotoCaptureButton';
 import SafetyCaution from '@/components/SafetyCaution';
 import { useFieldQueue, type PendingCheck } from '@/components/field/use-field-queue';
-import { parseLength, type Units } from '@/lib/units/field-units';
-import { stationText } from '@/lib/units/station-text';
+import { bracketVerdict } from '@/lib/field/verdict';
+import { parseLength, stationText, type Units } from '@/lib/units';
 
 type Props = {
   bridge: { id: number; name: string; revision: number };
@@ -27,16 +27,12 @@ const bracketKey = (span: number, girder: string, point: number) => `${span}|${g
 
 /** The verdict the server would give, worked out at once on the phone (the server's answer replaces it). */
 function localVerdict(p: PendingCheck, targets: { width: number; reading: number | null }, tol: { width: number; reading: number }): Verdict {
-  const w = p.measured_edge_width === null ? null : p.measured_edge_width - targets.width;
-  const r = p.measured_drop_from_girder_top === null || targets.reading === null ? null : p.measured_drop_from_girder_top - targets.reading;
-  const widthPass = w === null ? null : Math.abs(w) <= tol.width + 1e-9;
-  const readingPass = r === null ? null : Math.abs(r) <= tol.reading + 1e-9;
+  const judged = bracketVerdict(
+    { measuredWidth: p.measured_edge_width, computedWidth: targets.width, measuredReading: p.measured_drop_from_girder_top, computedReading: targets.reading },
+    tol,
+  );
   return {
-    widthDeviation: w,
-    readingDeviation: r,
-    widthPass,
-    readingPass,
-    pass: widthPass !== false && readingPass !== false,
+    ...judged,
     measuredWidth: p.measured_edge_width,
     measuredReading: p.measured_drop_from_girder_top,
     state: p.lastError ? 'waiting' : 'sending',

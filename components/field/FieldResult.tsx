@@ -1,5 +1,5 @@
-import { dateTimeText } from '@/lib/units/station-text';
-import { deviationText, fixHint, readingLength, tapeLength, toleranceText, type Units } from '@/lib/units/field-units';
+import { dateTimeText, deviationText, readingLength, tapeLength, toleranceText, type Units } from '@/lib/units';
+import { fixHint, verdictWord } from '@/lib/field/verdict';
 
 /** What the screen knows about a bracket's latest measurement: from the server, or worked out on the phone. */
 export type Verdict = {
@@ -25,7 +25,7 @@ function Line({ kind, measured, deviation, pass, tolerance, units }: { kind: 'wi
           {kind === 'width' ? `Width ${tapeLength(measured, units)}` : `Reading ${readingLength(measured, units)}`}
         </span>
         <span className="tabular text-2xl font-bold">
-          {deviationText(deviation, units, kind)} <span className="text-sm font-semibold">{pass ? 'OK' : `over ${toleranceText(tolerance, units, kind)}`}</span>
+          {deviationText(deviation, units, kind)} <span className="text-sm font-semibold">{verdictWord(pass, tolerance, units, kind)}</span>
         </span>
       </div>
       {pass === false && deviation !== null ? (

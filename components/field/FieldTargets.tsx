@@ -1,5 +1,5 @@
 import type { BracketRow } from '@/components/checks/check-types';
-import { fieldLength, readingLength, type Units } from '@/lib/units/field-units';
+import { lengthText, readingLength, type Units } from '@/lib/units';
 
 /** The numbers to set at one bracket, large enough to read at arm's length. */
 export default function FieldTargets({ row, units }: { row: BracketRow; units: Units }) {
@@ -24,7 +24,7 @@ export default function FieldTargets({ row, units }: { row: BracketRow; units: U
       </div>
       <div className="rounded-lg border border-concrete-200 bg-white p-3">
         <dt className="text-sm font-semibold text-concrete-600">Form target elev.</dt>
-        <dd className="tabular text-2xl font-bold text-concrete-900">{fieldLength(row.form_target, units)}</dd>
+        <dd className="tabular text-2xl font-bold text-concrete-900">{lengthText(row.form_target, units)}</dd>
       </div>
       {row.girder_rod !== null && row.form_rod !== null ? (
         <div className="col-span-2 rounded-lg border border-concrete-200 bg-white p-3">

@@ -1,13 +1,6 @@
-import { lengthText } from '@/lib/units/station-text';
+import { differenceText, lengthText } from '@/lib/units';
 import type { RevisionDiff } from '@/lib/services/revision-diff';
 
-/** A signed difference; one that rounds to zero at display precision is shown to 0.001 ft / 0.0001 m. */
-const signed = (v: number | null, units: 'ft' | 'm') => {
-  if (v === null) return '—';
-  let text = lengthText(Math.abs(v), units, false);
-  if (/^0\.0+$/.test(text)) text = Math.abs(v).toFixed(units === 'm' ? 4 : 3);
-  return /^0\.0+$/.test(text) ? text : `${v > 0 ? '+' : '−'}${text}`;
-};
 const side = (s: 'left' | 'right') => (s === 'left' ? 'LT' : 'RT');
 
 /**
@@ -78,7 +71,7 @@ export default function HistoryEdgeWidthChanges({ diff, from, to }: { diff: Revi
                   <td className="px-2 py-1 text-right">{c.point}</td>
                   <td className="px-2 py-1 text-right">{c.before === null ? '—' : lengthText(c.before, u, false)}</td>
                   <td className="px-2 py-1 text-right">{c.after === null ? '—' : lengthText(c.after, u, false)}</td>
-                  <td className="px-4 py-1 text-right font-semibold">{signed(c.difference, u)}</td>
+                  <td className="px-4 py-1 text-right font-semibold">{differenceText(c.difference, u)}</td>
                 </tr>
               ))}
             </tbody>

@@ -1,8 +1,8 @@
-import { offsetText, stationText } from '@/lib/units/station-text';
+import { offsetText, stationText, type Units } from '@/lib/units';
 import { fieldKind, fieldLabel, type FieldChange, type Scalar } from '@/lib/services/revision-diff';
 import type { BridgeDescription } from '@/lib/geometry';
 
-function valueText(path: string, value: Scalar | undefined, units: 'ft' | 'm'): string {
+function valueText(path: string, value: Scalar | undefined, units: Units): string {
   if (value === undefined) return '(not set)';
   if (value === null) return '—';
   if (typeof value !== 'number') return String(value);

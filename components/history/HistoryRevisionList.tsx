@@ -1,5 +1,5 @@
 import Link from 'next/link';
-import { dateTimeText } from '@/lib/units/station-text';
+import { dateTimeText } from '@/lib/units';
 
 type Revision = { revision: number; author: string | null; note: string; createdAt: string };
 

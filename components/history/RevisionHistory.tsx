@@ -1,5 +1,5 @@
 import SummaryTable from '@/components/offsets/SummaryTable';
-import { dateTimeText } from '@/lib/units/station-text';
+import { dateTimeText } from '@/lib/units';
 
 type Revision = { revision: number; author: string | null; note: string; createdAt: string };
 

@@ -4,8 +4,7 @@ import type { DisplayStyle } from '@/lib/geometry/format';
 import type { SpanSummary } from '@/lib/geometry/types';
 import ChartStrip, { type ChartBent, type ChartSeries } from '@/components/offsets/ChartStrip';
 import type { OffsetPointRow } from '@/components/offsets/offset-table-types';
-import { lengthWithUnit, type Units } from '@/lib/units/offset-display';
-import { stationText } from '@/lib/units/station-text';
+import { lengthWithUnit, stationText, type Units } from '@/lib/units';
 
 // Okabe & Ito, "Color Universal Design" (2008): blue and vermillion stay apart for every common
 // colour-vision deficiency; the series also differ by marker shape and dash.

@@ -1,6 +1,7 @@
 'use client';
 
 import { useEffect, useId, useRef, useState } from 'react';
+import { atMost, LENGTH_TOLERANCE, nearlyZero } from '@/lib/units';
 
 export type ChartPoint = { x: number; y: number; label: string; marked?: boolean };
 
@@ -16,7 +17,8 @@ function niceTicks(min: number, max: number, count: number): number[] {
   const power = 10 ** Math.floor(Math.log10(raw));
   const step = [1, 2, 2.5, 5, 10].map((m) => m * power).find((s) => s >= raw) ?? raw;
   const ticks: number[] = [];
-  for (let v = Math.ceil(min / step - 1e-9) * step; v <= max + step * 1e-9; v += step) ticks.push(Math.abs(v) < step * 1e-9 ? 0 : v);
+  const noise = step * LENGTH_TOLERANCE;
+  for (let v = Math.ceil(min / step - LENGTH_TOLERANCE) * step; atMost(v, max, noise); v += step) ticks.push(nearlyZero(v, noise) ? 0 : v);
   return ticks;
 }
 

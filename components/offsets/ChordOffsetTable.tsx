@@ -3,7 +3,7 @@
 import { useMemo, useState } from 'react';
 import type { DisplayStyle } from '@/lib/geometry/format';
 import type { ChordOffsetSetRow } from '@/components/offsets/offset-table-types';
-import { lengthCell, lengthUnit, lengthWithUnit, type Units } from '@/lib/units/offset-display';
+import { lengthCell, lengthUnit, lengthWithUnit, type Units } from '@/lib/units';
 import OffsetSortHeader, { type SortDirection } from '@/components/offsets/OffsetSortHeader';
 
 type Key = 'i' | 'distance' | 'offset';

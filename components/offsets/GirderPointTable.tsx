@@ -4,9 +4,8 @@ import { useMemo, useState } from 'react';
 import type { DisplayStyle } from '@/lib/geometry/format';
 import type { SpanSummary } from '@/lib/geometry/types';
 import type { OffsetPointRow } from '@/components/offsets/offset-table-types';
-import { elevationCell, lengthCell, lengthUnit, lengthWithUnit, offsetCell, type Units } from '@/lib/units/offset-display';
+import { elevationCell, lengthCell, lengthUnit, lengthWithUnit, offsetCell, stationText, type Units } from '@/lib/units';
 import OffsetSortHeader, { type SortDirection } from '@/components/offsets/OffsetSortHeader';
-import { stationText } from '@/lib/units/station-text';
 
 const SIDE_NAME = { left: 'Left', right: 'Right' } as const;
 

@@ -1,7 +1,7 @@
 'use client';
 
 import { useEffect, useState } from 'react';
-import { dateTimeText } from '@/lib/units/station-text';
+import { dateTimeText } from '@/lib/units';
 
 /** "Printed <date>" for the paper header, refreshed when the browser starts printing. */
 export default function OffsetPrintStamp({ initial }: { initial: string }) {

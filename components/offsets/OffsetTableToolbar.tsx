@@ -2,7 +2,7 @@
 
 import { useId } from 'react';
 import type { DisplayStyle } from '@/lib/geometry/format';
-import type { Units } from '@/lib/units/offset-display';
+import type { Units } from '@/lib/units';
 
 /** How near a typed station ("12+45") a girder point must lie to be shown, either side. */
 export const NEAR_STATION = { ft: 5, m: 1.5 } as const;

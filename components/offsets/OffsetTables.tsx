@@ -14,9 +14,7 @@ import GirderPointTable from '@/components/offsets/GirderPointTable';
 import type { ChordOffsetSetRow, OffsetPointRow, OffsetTableJson } from '@/components/offsets/offset-table-types';
 import SlabElevationTable from '@/components/offsets/SlabElevationTable';
 import OffsetTableToolbar, { NEAR_STATION, type OffsetFilter } from '@/components/offsets/OffsetTableToolbar';
-import type { Units } from '@/lib/units/offset-display';
-import { parseStation } from '@/lib/editor/station-input';
-import { stationText } from '@/lib/units/station-text';
+import { parseStation, stationText, type Units } from '@/lib/units';
 
 type TableJson = OffsetTableJson & { span_summaries?: SpanSummary[] };
 type SpanGroup = { span: number; sides: { side: 'left' | 'right'; rows: OffsetPointRow[] }[]; chords: ChordOffsetSetRow[] };

@@ -1,6 +1,5 @@
 import type { OffsetPointRow } from '@/components/offsets/offset-table-types';
-import { elevationCell, type Units } from '@/lib/units/offset-display';
-import { stationText } from '@/lib/units/station-text';
+import { elevationCell, stationText, type Units } from '@/lib/units';
 
 /**
  * Bottom-of-slab elevation over every girder's centreline (interior girders too) at each girder point

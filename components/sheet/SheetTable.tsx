@@ -1,10 +1,9 @@
 import type { BracketGroup } from '@/components/checks/check-types';
-import { fieldLength, type Units } from '@/lib/units/field-units';
-import { stationText } from '@/lib/units/station-text';
+import { lengthText, stationText, type Units } from '@/lib/units';
 
 /** One printed table of the field sheet: one span and exterior girder, one row per bracket, blanks to fill in. */
 export default function SheetTable({ group, units }: { group: BracketGroup; units: Units }) {
-  const num = (v: number | null) => (v === null ? '—' : fieldLength(v, units).replace(/ (ft|m)$/, ''));
+  const num = (v: number | null) => (v === null ? '—' : lengthText(v, units).replace(/ (ft|m)$/, ''));
   return (
     <section className="sheet-group mb-8 break-inside-avoid print:mb-4" aria-labelledby={`sheet-${group.span}-${group.girder}`}>
       <h2 id={`sheet-${group.span}-${group.girder}`} className="mb-2 text-lg font-bold text-concrete-900">

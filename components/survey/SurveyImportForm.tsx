@@ -6,6 +6,7 @@ import { useEffect, useId, useState } from 'react';
 import { mutate } from 'swr';
 import { ApiError, sendJson } from '@/lib/client/api-client';
 import SurveyPreviewTable, { type SurveyPreviewJson } from '@/components/survey/SurveyPreviewTable';
+import type { Units } from '@/lib/units';
 
 /** Largest file read in the browser; the server refuses anything over its own limit too. */
 const MAX_FILE_BYTES = 900_000;
@@ -16,7 +17,7 @@ type Stored = { import_id: number; stored: number; replaced: number; revision: n
  * Top-of-girder survey upload: the file is checked row by row first (POST …/survey/preview writes
  * nothing); only a file without problems can then be stored (POST …/survey).
  */
-export default function SurveyImportForm({ bridgeId, units }: { bridgeId: number; units: 'ft' | 'm' }) {
+export default function SurveyImportForm({ bridgeId, units }: { bridgeId: number; units: Units }) {
   const router = useRouter();
   const id = useId();
   const [file, setFile] = useState<{ name: string; text: string } | null>(null);

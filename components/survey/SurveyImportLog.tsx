@@ -1,5 +1,5 @@
 import type { SurveyImportSummary } from '@/lib/services/survey';
-import { dateTimeText } from '@/lib/units/station-text';
+import { dateTimeText } from '@/lib/units';
 
 /** Every committed survey file of a bridge, newest first: who, when, against which revision. */
 export default function SurveyImportLog({ imports }: { imports: SurveyImportSummary[] }) {

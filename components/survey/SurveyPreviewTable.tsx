@@ -1,12 +1,12 @@
 'use client';
 
 import { useState } from 'react';
-import { formatFeet, formatMetres } from '@/lib/geometry/format';
+import { elevationCell, type Units } from '@/lib/units';
 
 export type SurveyPreviewJson = {
   bridge_id: number;
   revision: number;
-  units: 'ft' | 'm';
+  units: Units;
   header: boolean;
   file_problems: string[];
   rows: { line: number; girder: string; span: number | null; point: number | null; elevation: number | null; problems: string[]; replaces: number | null }[];
@@ -16,7 +16,7 @@ export type SurveyPreviewJson = {
 /** The per-row report of a survey file that has been checked but not stored. */
 export default function SurveyPreviewTable({ preview, filename }: { preview: SurveyPreviewJson; filename: string }) {
   const [onlyProblems, setOnlyProblems] = useState(preview.summary.bad > 0);
-  const elev = (v: number | null) => (v === null ? '—' : preview.units === 'm' ? formatMetres(v) : formatFeet(v));
+  const elev = (v: number | null) => elevationCell(v, preview.units);
   const rows = onlyProblems ? preview.rows.filter((r) => r.problems.length > 0) : preview.rows;
   const { summary } = preview;
   return (

@@ -1,10 +1,9 @@
 import type { SurveyListing } from '@/lib/services/survey';
-import { formatFeet, formatMetres } from '@/lib/geometry/format';
-import { dateTimeText } from '@/lib/units/station-text';
+import { dateTimeText, elevationCell } from '@/lib/units';
 
 /** The stored top-of-girder values of a bridge with who imported each and when, and earlier values. */
 export default function SurveyValuesTable({ listing }: { listing: SurveyListing }) {
-  const elev = (v: number) => (listing.units === 'm' ? formatMetres(v) : formatFeet(v));
+  const elev = (v: number) => elevationCell(v, listing.units);
   if (listing.values.length === 0) {
     return (
       <p className="card p-6 text-concrete-700">

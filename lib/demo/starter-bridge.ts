@@ -1,4 +1,5 @@
 import type { BridgeDescriptionInput } from '@/lib/geometry/schema';
+import type { Units } from '@/lib/units';
 
 /**
  * The built-in starting point for a new bridge: two equal spans of straight (chord) precast girders
@@ -6,7 +7,7 @@ import type { BridgeDescriptionInput } from '@/lib/geometry/schema';
  * transition across the bridge. Invented numbers, valid per the bridge-format contract, written
  * separately for feet and metres so that each reads as round numbers in its own units.
  */
-export function starterBridge(units: 'ft' | 'm', name = 'New two-span bridge'): BridgeDescriptionInput {
+export function starterBridge(units: Units, name = 'New two-span bridge'): BridgeDescriptionInput {
   return units === 'm' ? starterMetres(name) : starterFeet(name);
 }
 

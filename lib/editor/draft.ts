@@ -5,7 +5,7 @@
  * back into a bridge description and reports the fields it could not read, keyed by the same dotted
  * paths the schema and the engine use ("girders.0.offsets.2").
  */
-import { numberInputText, parseNumber, parsePercent, parseStation, percentInputText, stationInputText, type Parsed, type Units } from './station-input';
+import { numberInputText, type Parsed, parseNumber, parsePercent, parseStation, percentInputText, stationInputText, type Units } from '@/lib/units';
 import type { AlignmentInput, BridgeDescription, PviInput } from '@/lib/geometry';
 
 export type Side = 'LT' | 'RT';

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { HttpError } from '@/lib/api/errors';
 import type { SessionUser } from '@/lib/auth/session';
 import { db } from '@/lib/db/connection';
+import { bracketVerdict } from '@/lib/field/verdict';
 import type { OffsetPoint, OffsetTable } from '@/lib/geometry';
 import { Attachment, FieldCheck, User } from '@/models';
 import { attachmentUrls } from './attachment-urls';
@@ -68,18 +69,6 @@ export type CheckJson = {
   created_at: string;
   photos: CheckPhoto[];
 };
-
-/** Rounding noise allowance when comparing a deviation with its tolerance (bridge units). */
-const EPS = 1e-9;
-
-/**
- * Deviation and verdict of one measured value. `deviation` = measured − computed (bridge units, positive
- * when the measurement is larger); passes when |deviation| ≤ tolerance.
- */
-export function judge(measured: number, computed: number, tolerance: number): { deviation: number; pass: boolean } {
-  const deviation = measured - computed;
-  return { deviation, pass: Math.abs(deviation) <= tolerance + EPS };
-}
 
 /** Exterior girder rows of the table (the brackets), by span, girder and point. */
 export function bracketRows(table: OffsetTable): OffsetPoint[] {
@@ -167,9 +156,11 @@ export async function recordCheck(user: SessionUser, bridgeId: string, input: Ch
       { measured_drop_from_girder_top: ['No top-of-girder survey at this point; a level-bar reading cannot be checked here.'] },
     );
   }
-  const w = width !== null && row.edge_width !== null ? judge(width, row.edge_width, settings.width_tolerance) : null;
-  const r = reading !== null && row.drop_from_girder_top !== null ? judge(reading, row.drop_from_girder_top, settings.reading_tolerance) : null;
-  const pass = (w ? w.pass : true) && (r ? r.pass : true);
+  const verdict = bracketVerdict(
+    { measuredWidth: width, computedWidth: row.edge_width, measuredReading: reading, computedReading: row.drop_from_girder_top },
+    { width: settings.width_tolerance, reading: settings.reading_tolerance },
+  );
+  const pass = verdict.pass;
 
   const sequelize = await db();
   let created: FieldCheck;
@@ -191,14 +182,14 @@ export async function recordCheck(user: SessionUser, bridgeId: string, input: Ch
           station: row.station,
           measuredEdgeWidth: width,
           computedEdgeWidth: row.edge_width,
-          widthDeviation: w ? w.deviation : null,
+          widthDeviation: verdict.widthDeviation,
           widthTolerance: settings.width_tolerance,
-          widthPass: w ? w.pass : null,
+          widthPass: verdict.widthPass,
           measuredReading: reading,
           computedReading: row.drop_from_girder_top,
-          readingDeviation: r ? r.deviation : null,
+          readingDeviation: verdict.readingDeviation,
           readingTolerance: settings.reading_tolerance,
-          readingPass: r ? r.pass : null,
+          readingPass: verdict.readingPass,
           pass,
           note: input.note ?? '',
           supersedesId: previous ? previous.id : null,

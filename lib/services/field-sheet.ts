@@ -3,11 +3,12 @@
  * columns for what the inspector measures. Built from the offset table of the bridge's latest revision.
  */
 import { z } from 'zod';
-import { formatFeet, formatFeetInches, formatMetres, formatStation, type OffsetTable } from '@/lib/geometry';
+import type { OffsetTable } from '@/lib/geometry';
 import { HttpError } from '@/lib/api/errors';
 import { offsetsForBridge } from './offsets';
 import { fieldSettingsOf } from './tolerances';
 import { csvCell } from '@/lib/geometry/csv';
+import { lengthText, stationText, tapeLength, type Units } from '@/lib/units';
 
 /** The caution printed on every field sheet (domain.md, "Cautions the product must carry"). */
 export const SHEET_CAUTION =
@@ -51,7 +52,7 @@ export type SheetGroup = { span: number; girder: string; side: 'left' | 'right';
 
 export type FieldSheet = {
   bridge: { id: number; name: string };
-  units: 'ft' | 'm';
+  units: Units;
   revision: number;
   base_rod_length: number;
   span: number | null;
@@ -61,7 +62,8 @@ export type FieldSheet = {
   rod_definition: string;
 };
 
-const decimal = (v: number, units: 'ft' | 'm') => (units === 'm' ? formatMetres(v) : formatFeet(v));
+/** A length without its unit, as the CSV and the sheet's decimal column show it. */
+const decimal = (v: number, units: Units) => lengthText(v, units, false);
 
 /**
  * Groups the exterior-girder rows of an offset table into field-sheet tables (pure). `span` limits
@@ -81,8 +83,8 @@ export function buildSheetGroups(table: OffsetTable, baseRod: number, span: numb
       fraction: p.fraction,
       station: p.station,
       edge_width: p.edge_width,
-      edge_width_text: table.units === 'm' ? `${formatMetres(p.edge_width)} m` : formatFeetInches(p.edge_width),
-      edge_width_decimal_text: `${decimal(p.edge_width, table.units)} ${table.units}`,
+      edge_width_text: tapeLength(p.edge_width, table.units),
+      edge_width_decimal_text: lengthText(p.edge_width, table.units),
       form_target: p.form_target,
       top_of_girder: p.top_of_girder,
       buildup: p.buildup,
@@ -138,8 +140,8 @@ export function fieldSheetCsv(sheet: FieldSheet): string {
           g.girder,
           g.side,
           String(r.point),
-          formatStation(r.station, u),
-          ...(u === 'ft' ? [formatFeetInches(r.edge_width)] : []),
+          stationText(r.station, u),
+          ...(u === 'ft' ? [tapeLength(r.edge_width, u)] : []),
           decimal(r.edge_width, u),
           opt(r.reading),
           opt(r.girder_rod),

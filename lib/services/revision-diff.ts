@@ -4,6 +4,7 @@
  * side. Pure: the caller loads the two descriptions.
  */
 import { computeOffsetTable, GeometryError, type BridgeDescription, type OffsetTable } from '@/lib/geometry';
+import { LENGTH_TOLERANCE, type Units } from '@/lib/units';
 
 export type Scalar = string | number | boolean | null;
 
@@ -39,7 +40,7 @@ export interface SpanWidthChange {
 }
 
 export interface RevisionDiff {
-  units: 'ft' | 'm';
+  units: Units;
   fields: FieldChange[];
   edge_widths: EdgeWidthChange[];
   spans: SpanWidthChange[];
@@ -49,7 +50,7 @@ export interface RevisionDiff {
 }
 
 /** Edge widths that differ by less than this (bridge units) count as unchanged: far below any display rounding. */
-export const EDGE_WIDTH_TOLERANCE = 1e-9;
+export const EDGE_WIDTH_TOLERANCE = LENGTH_TOLERANCE;
 
 function flatten(value: unknown, path: string, out: Map<string, Scalar>): void {
   if (Array.isArray(value)) {

@@ -1,10 +1,10 @@
 import { z } from 'zod';
 import type { SessionUser } from '@/lib/auth/session';
 import { db } from '@/lib/db/connection';
-import { formatFeet, formatFeetInches, formatMetres } from '@/lib/geometry';
 import { sendMail, type MailResult } from '@/lib/mail/send';
 import { audit } from './audit';
 import { fieldSheetCsv, loadFieldSheet, safeFileName, type FieldSheet } from './field-sheet';
+import { lengthText, tapeAndDecimalLength } from '@/lib/units';
 
 /** Body of POST /api/bridges/:id/send-sheet. */
 export const sendSheetSchema = z.object({
@@ -15,12 +15,10 @@ export const sendSheetSchema = z.object({
   span: z.number({ error: 'Span must be a span number (1, 2, …).' }).int('Span must be a whole number.').positive('Span numbers start at 1.').nullable().optional(),
 });
 
-const width = (v: number, units: 'ft' | 'm') => (units === 'm' ? `${formatMetres(v)} m` : `${formatFeetInches(v)} (${formatFeet(v)} ft)`);
-
 /** Plain-text summary for the e-mail body: what the sheet covers, the rods rule and the caution. */
 export function sheetSummary(sheet: FieldSheet, sender: string): string {
   const u = sheet.units;
-  const len = (v: number) => (u === 'm' ? `${formatMetres(v)} m` : `${formatFeet(v)} ft`);
+  const len = (v: number) => lengthText(v, u);
   const lines = [
     `Field sheet for ${sheet.bridge.name}, computed from geometry revision ${sheet.revision}.`,
     sheet.span ? `Span ${sheet.span}.` : `All spans (${sheet.spans.join(', ')}).`,
@@ -31,7 +29,7 @@ export function sheetSummary(sheet: FieldSheet, sender: string): string {
     const widths = g.rows.map((r) => r.edge_width);
     const surveyed = g.rows.filter((r) => r.reading !== null).length;
     lines.push(
-      `Span ${g.span}, ${g.girder} (${g.side} overhang): ${g.rows.length} brackets, edge width ${width(Math.min(...widths), u)} to ${width(Math.max(...widths), u)}; level-bar readings at ${surveyed} surveyed ${surveyed === 1 ? 'point' : 'points'}.`,
+      `Span ${g.span}, ${g.girder} (${g.side} overhang): ${g.rows.length} brackets, edge width ${tapeAndDecimalLength(Math.min(...widths), u)} to ${tapeAndDecimalLength(Math.max(...widths), u)}; level-bar readings at ${surveyed} surveyed ${surveyed === 1 ? 'point' : 'points'}.`,
     );
   }
   lines.push(

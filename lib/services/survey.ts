@@ -15,6 +15,7 @@ import { getRevisionDescription } from './bridges';
 import { audit } from './audit';
 import { refreshStatus } from './bridge-status';
 import type { SurveyCsvRow } from '@/lib/import/survey-csv';
+import { nearlyZero, type Units } from '@/lib/units';
 
 /** Largest survey CSV text accepted, in characters (the JSON body limit is 1 MB). */
 export const MAX_SURVEY_CSV_CHARS = 900_000;
@@ -36,7 +37,7 @@ export type SurveyPreviewRow = SurveyCsvRow & { replaces: number | null };
 export type SurveyPreview = {
   bridge_id: number;
   revision: number;
-  units: 'ft' | 'm';
+  units: Units;
   header: boolean;
   file_problems: string[];
   rows: SurveyPreviewRow[];
@@ -66,7 +67,7 @@ export type SurveyImportSummary = { id: number; filename: string; revision: numb
 export type SurveyListing = {
   bridge_id: number;
   revision: number;
-  units: 'ft' | 'm';
+  units: Units;
   /** Points per span of the current revision. */
   points_per_span: number;
   values: SurveyValue[];
@@ -85,7 +86,7 @@ const placeOf = (girder: string, span: number, point: number, divisions: number)
 function pointAt(point: number, pointsAtImport: number, divisions: number): number | null {
   const k = (point * divisions) / pointsAtImport;
   const r = Math.round(k);
-  return Math.abs(k - r) < 1e-9 ? r : null;
+  return nearlyZero(k - r) ? r : null;
 }
 
 /** A stored value with the points per span of the revision its import was checked against. */

@@ -4,8 +4,8 @@ import type { SessionUser } from '@/lib/auth/session';
 import { db } from '@/lib/db/connection';
 import { Bridge } from '@/models';
 import { audit } from './audit';
+import type { Units } from '@/lib/units';
 
-type Units = 'ft' | 'm';
 
 /**
  * Default field-check tolerances and base rod length per unit system, in that unit. Common practice:

@@ -5,6 +5,7 @@
  */
 import { girderTopOf, type GirderRun } from './runs';
 import { sceneY, type SceneFrame } from './frame';
+import type { Units } from '@/lib/units';
 
 export interface GirderShape {
   /** Overall depth, bridge units (true size, not exaggerated). */
@@ -21,7 +22,7 @@ export interface GirderShape {
 }
 
 /** Default girder depth: 6 ft, or 1.8 m. */
-export function defaultGirderShape(units: 'ft' | 'm'): GirderShape {
+export function defaultGirderShape(units: Units): GirderShape {
   return units === 'm' ? { depth: 1.8, flangeWidth: 0.9 } : { depth: 6, flangeWidth: 3 };
 }
 

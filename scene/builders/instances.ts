@@ -3,6 +3,7 @@
  * columns): a unit cube centred on the origin is stretched between two scene points. Column-major,
  * as three.js Matrix4.elements and InstancedMesh.instanceMatrix expect.
  */
+import { nearlyZero, POINT_TOLERANCE } from '@/lib/units';
 
 /**
  * Writes at `out[16*index]` the matrix that maps the unit cube to a box from a to b (its length
@@ -21,7 +22,7 @@ export function writeBeamMatrix(
   let dy = by - ay;
   let dz = bz - az;
   const len = Math.hypot(dx, dy, dz);
-  if (len < 1e-9) {
+  if (nearlyZero(len)) {
     dx = 1; dy = 0; dz = 0;
   } else {
     dx /= len; dy /= len; dz /= len;
@@ -40,7 +41,7 @@ export function writeBeamMatrix(
   const yy = zz * dx - zx * dz;
   const yz = zx * dy - zy * dx;
   const o = index * 16;
-  const l = Math.max(len, 1e-6);
+  const l = Math.max(len, POINT_TOLERANCE);
   const hx = vertical ? width : height;
   const wz = vertical ? height : width;
   out[o] = dx * l; out[o + 1] = dy * l; out[o + 2] = dz * l; out[o + 3] = 0;

@@ -6,9 +6,10 @@
 import type { BridgeDescription, BridgeModel, OffsetTable } from '@/lib/geometry';
 import { girderTopOf, overhangRuns } from './runs';
 import { writeScenePoint, type SceneFrame } from './frame';
+import type { Units } from '@/lib/units';
 
 /** How far above the top flange the string line is drawn (bridge units, true size): 1 in / 25 mm. */
-export function stringLineLift(units: 'ft' | 'm'): number {
+export function stringLineLift(units: Units): number {
   return units === 'm' ? 0.025 : 1 / 12;
 }
 

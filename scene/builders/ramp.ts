@@ -3,6 +3,7 @@
  * colour blindness and in greyscale). Stops are the published matplotlib viridis values at
  * 0, 1/8, ..., 1.
  */
+import { nearlyEqual } from '@/lib/units';
 export const RAMP_STOPS: ReadonlyArray<readonly [number, number, number]> = [
   [0.267, 0.005, 0.329],
   [0.283, 0.141, 0.458],
@@ -35,7 +36,7 @@ export function rampColor(t: number, out: Float32Array | number[], i: number): v
 
 /** Position of `value` between lo and hi (0.5 when the range is empty). */
 export function rampPosition(value: number, lo: number, hi: number): number {
-  return hi - lo > 1e-12 ? (value - lo) / (hi - lo) : 0.5;
+  return !nearlyEqual(hi, lo) ? (value - lo) / (hi - lo) : 0.5;
 }
 
 /** CSS linear-gradient of the ramp, left (low) to right (high), for the legend. */

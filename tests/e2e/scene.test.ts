@@ -9,6 +9,7 @@ import { chromium, type Browser, type Page } from 'playwright-core';
 import { signIn, trackPageErrors } from './browser';
 import { computeOffsetTable, formatLength } from '@/lib/geometry';
 import { DEFAULT_SANDBOX, sandboxBridge } from '@/lib/scene-data/sandbox';
+import type { Units } from '@/lib/units';
 
 const NETWORK_FLAGS = ['--no-sandbox', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'];
 // launchChromium() passes --disable-gpu, which leaves no WebGL at all in this headless build; the
@@ -111,7 +112,7 @@ describe('3D view and walkthrough', () => {
     const first = (Array.isArray(body) ? body : body.bridges)[0];
     const table = await (await page.request.get(`${baseUrl}/api/bridges/${first.id}/offsets`)).json();
     const rows: Row[] = table.points;
-    const units: 'ft' | 'm' = table.units;
+    const units: Units = table.units;
     await page.goto(`${baseUrl}/bridges/${first.id}/view`);
     // Span 1, left side: narrowest and widest over the API's rows.
     const left1 = rows.filter((r) => r.span === 1 && r.side === 'left').map((r) => r.edge_width as number);

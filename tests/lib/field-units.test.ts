@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { deviationText, fixHint, parseLength, readingLength, toleranceText } from '@/lib/units/field-units';
+import { deviationText, parseLength, readingLength, toleranceText } from '@/lib/units';
+import { fixHint } from '@/lib/field/verdict';
 
 // Feet-inches arithmetic worked by hand: 4'-6 3/8" = 4 + 6.375/12 = 4.53125 ft.
 describe('field-mode length entry', () => {

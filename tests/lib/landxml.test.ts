@@ -5,11 +5,12 @@ import { describe, expect, it } from 'vitest';
 import { LandXmlError, parseLandXml } from '@/lib/import/landxml';
 import { hasDtdOrEntity } from '@/lib/import/xml-tree';
 import { createAlignment, createProfile } from '@/lib/geometry';
+import type { Units } from '@/lib/units';
 
 const fixture = (name: string) => fs.readFileSync(path.resolve(__dirname, '../fixtures/landxml', name), 'utf8');
 
 /** Expects parseLandXml to refuse the text with this status and a message matching `pattern`. */
-function expectRefused(text: string, status: number, pattern: RegExp, units?: 'ft' | 'm') {
+function expectRefused(text: string, status: number, pattern: RegExp, units?: Units) {
   let caught: unknown;
   try {
     parseLandXml(text, units);

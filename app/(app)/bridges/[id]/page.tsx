@@ -5,7 +5,7 @@ import GeometrySummary from '@/components/bridges/GeometrySummary';
 import RenameBridgeForm from '@/components/bridges/RenameBridgeForm';
 import RevisionHistory from '@/components/history/RevisionHistory';
 import { requireUser } from '@/lib/auth/server-session';
-import { dateTimeText } from '@/lib/units/station-text';
+import { dateTimeText } from '@/lib/units';
 import { roleAllows } from '@/lib/auth/roles';
 import { loadBridge } from './load-bridge';
 import BridgeBreadcrumb from '@/components/BridgeBreadcrumb';

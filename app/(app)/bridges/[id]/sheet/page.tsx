@@ -5,8 +5,7 @@ import SafetyCaution from '@/components/SafetyCaution';
 import SheetPrintButton from '@/components/sheet/SheetPrintButton';
 import SheetSendForm from '@/components/sheet/SheetSendForm';
 import SheetTable from '@/components/sheet/SheetTable';
-import { fieldLength } from '@/lib/units/field-units';
-import { dateTimeText } from '@/lib/units/station-text';
+import { dateTimeText, lengthText } from '@/lib/units';
 import { requireUser } from '@/lib/auth/server-session';
 import { roleAllows } from '@/lib/auth/roles';
 import { loadFieldView } from '@/lib/services/field-view';
@@ -54,7 +53,7 @@ export default async function SheetPage({ params, searchParams }: { params: Para
             <span className="tabular font-semibold">{view.bridge.revision}</span> · printed {printedAt}
           </p>
           <p className="text-sm text-concrete-600">
-            Lengths and elevations in {units === 'm' ? 'metres' : 'feet'}; base rod {fieldLength(view.settings.base_rod_length, units)}
+            Lengths and elevations in {units === 'm' ? 'metres' : 'feet'}; base rod {lengthText(view.settings.base_rod_length, units)}
             {view.settings.is_default.base_rod_length ? ' (default)' : ''}.
           </p>
         </div>

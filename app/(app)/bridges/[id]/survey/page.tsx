@@ -9,6 +9,7 @@ import { getBridge } from '@/lib/services/bridges';
 import { framingOf, listSurvey } from '@/lib/services/survey';
 import BridgeBreadcrumb from '@/components/BridgeBreadcrumb';
 import { orNotFound } from '../load-bridge';
+import type { Units } from '@/lib/units';
 
 type Params = Promise<{ id: string }>;
 
@@ -57,7 +58,7 @@ export default async function SurveyPage({ params }: { params: Params }) {
       </p>
       <div className="space-y-6">
         {canImport ? (
-          <SurveyImportForm bridgeId={bridge.id} units={bridge.units as 'ft' | 'm'} />
+          <SurveyImportForm bridgeId={bridge.id} units={bridge.units as Units} />
         ) : (
           <p className="card p-4 text-sm text-concrete-700">
             Your role ({user.role}) can read the stored survey. Engineers and inspectors import survey files.

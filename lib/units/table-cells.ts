@@ -3,9 +3,11 @@
  * screen, the print and the CSV export round the same way. Lengths (widths, drops, buildups, offsets,
  * chord offsets) follow the style; elevations stay decimal because they are read against a level.
  */
-import { formatFeet, formatFeetInches, formatMetres, formatOffset, type DisplayStyle } from '@/lib/geometry/format';
+import { formatFeet, formatFeetInches, formatMetres, formatOffset, type DisplayStyle } from '@/lib/geometry';
+import { lengthText } from './length-text';
+import type { Units } from './units';
 
-export type Units = 'ft' | 'm';
+export type { DisplayStyle };
 
 /** The style actually used: a metric bridge always shows metres; 'metric' on a feet bridge shows decimal feet. */
 export function effectiveStyle(units: Units, style: DisplayStyle): DisplayStyle {
@@ -28,8 +30,7 @@ export function lengthCell(value: number | null | undefined, units: Units, style
 
 /** An elevation without its unit: 0.01 ft or 0.001 m in every style. */
 export function elevationCell(value: number | null | undefined, units: Units): string {
-  if (value === null || value === undefined || !Number.isFinite(value)) return '—';
-  return units === 'm' ? formatMetres(value) : formatFeet(value);
+  return lengthText(value, units, false);
 }
 
 /** An offset from the alignment as "18.00 LT" / `18'-0" RT`. */

@@ -5,11 +5,7 @@
  * drift), and a value shown for editing carries every digit of the stored number.
  */
 import Decimal from 'decimal.js';
-
-export type Units = 'ft' | 'm';
-
-/** Length of one station block: 100 ft or 1000 m. */
-export const stationBlock = (units: Units) => (units === 'm' ? 1000 : 100);
+import { stationBlock, type Units } from './units';
 
 /** The outcome of reading a field: a number, nothing typed (`empty`), or a sentence saying what to type. */
 export type Parsed = { ok: true; value: number } | { ok: false; empty: boolean; message: string };
