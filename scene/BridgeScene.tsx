@@ -3,7 +3,7 @@
 import { Canvas } from '@react-three/fiber';
 import { Html, OrbitControls } from '@react-three/drei';
 import { useMemo, useRef, type RefObject } from 'react';
-import { createBridgeModel, formatStation, type BridgeDescription, type OffsetPoint, type OffsetTable } from '@/lib/geometry';
+import { createBridgeModel, edgeOffsetAt, formatStation, type BridgeDescription, type OffsetPoint, type OffsetTable } from '@/lib/geometry';
 import type { SceneFrame } from './builders/frame';
 import { girderRuns } from './builders/runs';
 import { buildGirderMesh, defaultGirderShape } from './builders/girders';
@@ -103,10 +103,10 @@ export default function BridgeScene(props: BridgeSceneProps) {
     const s0 = desc.bents[0].station;
     const s1 = desc.bents[desc.bents.length - 1].station;
     const out: Array<{ s: number; pos: [number, number, number] }> = [];
-    const off = desc.deck.right_edge_offset + 6 * u;
     for (let s = Math.ceil(s0 / every) * every; s <= s1 + 1e-9; s += every) {
-      const p = model.alignment.pointAt(s, off);
-      const z = model.surface.topOfDeckAtStationOffset(s, desc.deck.right_edge_offset);
+      const edge = edgeOffsetAt(desc.deck, 'right', s);
+      const p = model.alignment.pointAt(s, edge + 6 * u);
+      const z = model.surface.topOfDeckAtStationOffset(s, edge);
       out.push({ s, pos: [p.x - frame.originX, (z - frame.refElevation) * frame.exaggeration + 2 * u, -(p.y - frame.originY)] });
     }
     return out.slice(0, 40);

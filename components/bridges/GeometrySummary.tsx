@@ -8,6 +8,9 @@ export default function GeometrySummary({ description }: { description: BridgeDe
   const len = (v: number | undefined) => lengthText(v, units);
   const entered = (v: number | undefined) => enteredLengthText(v, units);
   const sta = (v: number) => stationText(v, units);
+  // A flared edge is a station/offset list: show each row.
+  const edgeText = (e: BridgeDescription['deck']['left_edge_offset']) =>
+    typeof e === 'number' ? offsetText(e, units, true) : `flared: ${e.map((r) => `${sta(r.station)} ${offsetText(r.offset, units, true)}`).join(' · ')}`;
 
   let station = description.alignment.start_station;
   const elements = description.alignment.elements.map((el, i) => {
@@ -30,8 +33,8 @@ export default function GeometrySummary({ description }: { description: BridgeDe
   const deck = description.deck;
   const settlement = deck.form_settlement ?? (units === 'm' ? 0.005 : 0.02);
   const section: React.ReactNode[][] = [
-    ['Left deck edge', offsetText(deck.left_edge_offset, units, true)],
-    ['Right deck edge', offsetText(deck.right_edge_offset, units, true)],
+    ['Left deck edge', edgeText(deck.left_edge_offset)],
+    ['Right deck edge', edgeText(deck.right_edge_offset)],
     ['Slab thickness over girders', entered(deck.slab_thickness)],
     ['Edge thickness', entered(deck.edge_thickness)],
     ['Left barrier width', entered(deck.left_barrier_width)],

@@ -4,13 +4,18 @@
  */
 import type { BridgeDescription } from '@/lib/geometry';
 
+/** A description whose deck edges are constant offsets (numbers, not flared lists). */
+export type ConstantEdgeBridge = BridgeDescription & {
+  deck: BridgeDescription['deck'] & { left_edge_offset: number; right_edge_offset: number };
+};
+
 /**
  * Three spans of straight precast girders (chords) on a 1000 ft curve to the right, with the crown
  * rolling into full superelevation across the bridge, a crest vertical curve and skewed bents.
  * Exterior girders sit further out at the bents on the outside of the curve and further in on the
  * inside, so the overhang stays buildable where the chord bows away from or toward the edge.
  */
-const marlowCreek: BridgeDescription = {
+const marlowCreek: ConstantEdgeBridge = {
   name: 'Marlow Creek Overpass',
   units: 'ft',
   alignment: {
@@ -75,7 +80,7 @@ const marlowCreek: BridgeDescription = {
  * Two spans of curved steel plate girders, concentric with an 850 ft curve to the left, on a sag
  * vertical curve with the deck banked down to the left.
  */
-const quarryLane: BridgeDescription = {
+const quarryLane: ConstantEdgeBridge = {
   name: 'Quarry Lane Connector',
   units: 'ft',
   alignment: {
@@ -121,4 +126,4 @@ const quarryLane: BridgeDescription = {
 };
 
 /** The demonstration bridges: [0] the precast chorded bridge, [1] the curved steel bridge. */
-export const demoBridges: BridgeDescription[] = [marlowCreek, quarryLane];
+export const demoBridges: [ConstantEdgeBridge, ConstantEdgeBridge, ...BridgeDescription[]] = [marlowCreek, quarryLane];

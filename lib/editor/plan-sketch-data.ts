@@ -3,7 +3,7 @@
  * the bent lines and the girders, turned so that the bridge runs left to right (up-station to the
  * right, the left side of the alignment up) and scaled into an SVG box. Pure; no React.
  */
-import { bentLinePoint, createAlignment, type BridgeDescription, type OffsetTable, type PlanPoint } from '@/lib/geometry';
+import { bentLinePoint, createAlignment, edgeOffsetAt, type BridgeDescription, type OffsetTable, type PlanPoint } from '@/lib/geometry';
 
 export interface SketchPolyline {
   points: string;
@@ -55,15 +55,23 @@ export function planSketchData(bridge: BridgeDescription, table: OffsetTable | n
 
     const steps = 120;
     const centre = Array.from({ length: steps + 1 }, (_, i) => local(al.pointAt(s0 + ((s1 - s0) * i) / steps)));
-    const { left_edge_offset: le, right_edge_offset: re } = bridge.deck;
+    // A flared edge changes its offset with station: each edge point takes the offset at its own station.
+    const edgeAt = (side: 'left' | 'right', s: number) => edgeOffsetAt(bridge.deck, side, s);
+    const lastBent = bents.length - 1;
+    const le = edgeAt('left', bents[0].station);
+    const re = edgeAt('right', bents[0].station);
     const corner = (i: number, o: number) => bentLinePoint(al, bents[i], o);
     const cl0 = corner(0, le);
     const cr0 = corner(0, re);
-    const cl1 = corner(bents.length - 1, le);
-    const cr1 = corner(bents.length - 1, re);
-    const edge = (from: number, to: number, o: number) => Array.from({ length: 61 }, (_, i) => local(al.pointAt(from + ((to - from) * i) / 60, o)));
-    const leftEdge = edge(cl0.station, cl1.station, le);
-    const rightEdge = edge(cr0.station, cr1.station, re);
+    const cl1 = corner(lastBent, edgeAt('left', bents[lastBent].station));
+    const cr1 = corner(lastBent, edgeAt('right', bents[lastBent].station));
+    const edge = (from: number, to: number, side: 'left' | 'right') =>
+      Array.from({ length: 61 }, (_, i) => {
+        const s = from + ((to - from) * i) / 60;
+        return local(al.pointAt(s, edgeAt(side, s)));
+      });
+    const leftEdge = edge(cl0.station, cl1.station, 'left');
+    const rightEdge = edge(cr0.station, cr1.station, 'right');
     const deckLocal = [...leftEdge, ...rightEdge.reverse()];
     const over = Math.max(2, 0.08 * (re - le));
     const bentLocal = bents.map((bent, i) => ({ name: bent.name, p: local(corner(i, le - over)), q: local(corner(i, re + over)) }));

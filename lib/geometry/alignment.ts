@@ -20,7 +20,19 @@ export interface ArcElementInput {
   direction: 'left' | 'right';
 }
 
-export type AlignmentElementInput = LineElementInput | ArcElementInput;
+/**
+ * A clothoid of `length` whose curvature changes linearly from 1/radius_start to 1/radius_end;
+ * null for a radius means infinite (curvature 0).
+ */
+export interface SpiralElementInput {
+  type: 'spiral';
+  length: number;
+  radius_start: number | null;
+  radius_end: number | null;
+  direction: 'left' | 'right';
+}
+
+export type AlignmentElementInput = LineElementInput | ArcElementInput | SpiralElementInput;
 
 /** What the alignment needs from the bridge description. */
 export interface AlignmentInput {
@@ -219,7 +231,7 @@ export class Alignment {
       const radius = el.type === 'arc' ? el.radius : Infinity;
       const rn = rightNormalOf(bearing);
       const e: Element = {
-        kind: el.type,
+        kind: el.type === 'spiral' ? 'line' : el.type,
         startStation: station,
         length: el.length,
         x0: x,

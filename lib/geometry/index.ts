@@ -12,7 +12,19 @@ export {
   DEFAULT_POINTS_PER_SPAN,
   type BridgeDescription,
   type BridgeDescriptionInput,
+  type DeflectionInput,
+  type EdgeOffsetInput,
+  type SpiralElementDescription,
+  SIZE_LIMITS,
 } from './schema';
+export {
+  edgeOffsetAt,
+  edgeSpecOffsetAt,
+  isConstantEdge,
+  type DeckEdgeSpecs,
+  type EdgeOffsetSpec,
+  type EdgeStationOffset,
+} from './deck-edges';
 export { parseBridge, parseBridgeSchema, validateGeometry, MAX_GIRDER_POINTS, MAX_CHORD_POINTS, type ParseBridgeResult } from './validate';
 export { GeometryError, type GeometryIssue } from './errors';
 export {
@@ -44,6 +56,7 @@ export {
   SolveError,
   type AlignmentInput,
   type AlignmentElementInput,
+  type SpiralElementInput,
   type AlignmentPoint,
   type PlanPoint,
   type StationOffset,

@@ -23,6 +23,28 @@ const arcElement = z.looseObject({
   direction: z.enum(['left', 'right'], { error: 'Arc direction must be "left" or "right"' }),
 });
 
+/** A radius or null (infinite: curvature 0, a tangent). */
+const spiralRadius = (what: string) => positive(what).nullable();
+
+const spiralElement = z.looseObject({
+  type: z.literal('spiral'),
+  length: positive('Element length'),
+  radius_start: spiralRadius('Spiral start radius'),
+  radius_end: spiralRadius('Spiral end radius'),
+  direction: z.enum(['left', 'right'], { error: 'Spiral direction must be "left" or "right"' }),
+});
+
+/** Most alignment elements, bents, girders, surveyed tops and deflection values a description may hold. */
+export const SIZE_LIMITS = {
+  elements: 10_000,
+  bents: 200,
+  girders: 40,
+  topOfGirder: 50_000,
+  deflectionValues: 201,
+  pointsPerSpan: 200,
+  chordSpaces: 200,
+} as const;
+
 const alignmentSchema = z.looseObject({
   start_station: finite('Start station'),
   start_x: finite('Start x (easting)'),
@@ -30,11 +52,12 @@ const alignmentSchema = z.looseObject({
   start_bearing_deg: finite('Start bearing'),
   elements: z
     .array(
-      z.discriminatedUnion('type', [lineElement, arcElement], {
-        error: 'Element type must be "line" or "arc"',
+      z.discriminatedUnion('type', [lineElement, arcElement, spiralElement], {
+        error: 'Element type must be "line", "arc" or "spiral"',
       }),
     )
-    .min(1, { error: 'The alignment needs at least one element' }),
+    .min(1, { error: 'The alignment needs at least one element' })
+    .max(SIZE_LIMITS.elements, { error: `The alignment may have at most ${SIZE_LIMITS.elements} elements` }),
 });
 
 const pviSchema = z.looseObject({
@@ -45,17 +68,28 @@ const pviSchema = z.looseObject({
 
 const crossSlopeSchema = z.looseObject({
   station: finite('Cross-slope station'),
-  left: finite('Left cross slope').min(-1, { error: 'Left cross slope must be between -1 and 1 (rise/run)' }).max(1, {
-    error: 'Left cross slope must be between -1 and 1 (rise/run)',
+  left: finite('Left cross slope').min(-1, { error: 'Left cross slope must be from -1 to 1 (rise/run, both included)' }).max(1, {
+    error: 'Left cross slope must be from -1 to 1 (rise/run, both included)',
   }),
-  right: finite('Right cross slope').min(-1, { error: 'Right cross slope must be between -1 and 1 (rise/run)' }).max(1, {
-    error: 'Right cross slope must be between -1 and 1 (rise/run)',
+  right: finite('Right cross slope').min(-1, { error: 'Right cross slope must be from -1 to 1 (rise/run, both included)' }).max(1, {
+    error: 'Right cross slope must be from -1 to 1 (rise/run, both included)',
   }),
 });
 
+const edgeStationSchema = z.looseObject({
+  station: finite('Edge station'),
+  offset: finite('Edge offset'),
+});
+
+/** A deck edge: a constant offset, or a station/offset list (a flared edge, at least two rows). */
+const edgeOffsetSchema = (what: string) =>
+  z.union([finite(what), z.array(edgeStationSchema).min(2, { error: `${what}: a flared edge needs at least two stations` })], {
+    error: `${what} must be a number or a list of { station, offset }`,
+  });
+
 const deckSchema = z.looseObject({
-  left_edge_offset: finite('Left edge offset'),
-  right_edge_offset: finite('Right edge offset'),
+  left_edge_offset: edgeOffsetSchema('Left edge offset'),
+  right_edge_offset: edgeOffsetSchema('Right edge offset'),
   slab_thickness: positive('Slab thickness'),
   edge_thickness: positive('Edge thickness'),
   left_barrier_width: nonNegative('Left barrier width'),
@@ -67,8 +101,8 @@ const bentSchema = z.looseObject({
   name: z.string({ error: 'Bent name must be text' }).min(1, { error: 'Bent name is required' }),
   station: finite('Bent station'),
   skew_deg: finite('Bent skew')
-    .gt(-90, { error: 'Bent skew must be between -90 and 90 degrees' })
-    .lt(90, { error: 'Bent skew must be between -90 and 90 degrees' }),
+    .gt(-90, { error: 'Bent skew must be strictly between -90 and 90 degrees' })
+    .lt(90, { error: 'Bent skew must be strictly between -90 and 90 degrees' }),
 });
 
 const girderSchema = z.looseObject({
@@ -84,6 +118,15 @@ const topOfGirderSchema = z.looseObject({
   elevation: finite('Top-of-girder elevation'),
 });
 
+const deflectionSchema = z.looseObject({
+  girder: z.string({ error: 'Deflection entry needs a girder name' }),
+  span: z.int({ error: 'Span must be a whole number' }).min(1, { error: 'Span numbers start at 1' }),
+  values: z
+    .array(finite('Deflection'))
+    .min(2, { error: 'A deflection table needs at least two values (fraction 0 and 1 of the span)' })
+    .max(SIZE_LIMITS.deflectionValues, { error: `A deflection table may have at most ${SIZE_LIMITS.deflectionValues} values` }),
+});
+
 /** Zod schema of a bridge description (see shared bridge-format contract). */
 export const bridgeDescriptionSchema = z.looseObject({
   name: z.string({ error: 'Name must be text' }).min(1, { error: 'Name is required' }),
@@ -94,25 +137,42 @@ export const bridgeDescriptionSchema = z.looseObject({
   }),
   cross_slopes: z.array(crossSlopeSchema).min(1, { error: 'Give cross slopes at one station at least' }),
   deck: deckSchema,
-  bents: z.array(bentSchema).min(2, { error: 'A bridge needs at least two bents' }),
-  girders: z.array(girderSchema).min(1, { error: 'A bridge needs at least one girder' }),
+  bents: z
+    .array(bentSchema)
+    .min(2, { error: 'A bridge needs at least two bents' })
+    .max(SIZE_LIMITS.bents, { error: `A bridge may have at most ${SIZE_LIMITS.bents} bents` }),
+  girders: z
+    .array(girderSchema)
+    .min(1, { error: 'A bridge needs at least one girder' })
+    .max(SIZE_LIMITS.girders, { error: `A bridge may have at most ${SIZE_LIMITS.girders} girders` }),
   points_per_span: z
     .int({ error: 'Points per span must be a whole number' })
-    .min(1, { error: 'Points per span must be between 1 and 10000' })
-    .max(10000, { error: 'Points per span must be between 1 and 10000' })
+    .min(1, { error: `Points per span must be from 1 to ${SIZE_LIMITS.pointsPerSpan} (both included)` })
+    .max(SIZE_LIMITS.pointsPerSpan, { error: `Points per span must be from 1 to ${SIZE_LIMITS.pointsPerSpan} (both included)` })
     .optional(),
   chord_spaces: z
     .int({ error: 'Chord spaces must be a whole number' })
-    .min(1, { error: 'Chord spaces must be between 1 and 10000' })
-    .max(10000, { error: 'Chord spaces must be between 1 and 10000' })
+    .min(1, { error: `Chord spaces must be from 1 to ${SIZE_LIMITS.chordSpaces} (both included)` })
+    .max(SIZE_LIMITS.chordSpaces, { error: `Chord spaces must be from 1 to ${SIZE_LIMITS.chordSpaces} (both included)` })
     .optional(),
-  top_of_girder: z.array(topOfGirderSchema).optional(),
+  top_of_girder: z
+    .array(topOfGirderSchema)
+    .max(SIZE_LIMITS.topOfGirder, { error: `At most ${SIZE_LIMITS.topOfGirder} surveyed girder tops` })
+    .optional(),
+  deflections: z.array(deflectionSchema).optional(),
 });
 
 /** A bridge description as accepted by the schema (lengths in `units`, angles in degrees). */
 export type BridgeDescription = z.infer<typeof bridgeDescriptionSchema>;
 /** The same, as a form or import may hand it over before parsing. */
 export type BridgeDescriptionInput = z.input<typeof bridgeDescriptionSchema>;
+
+/** A deck edge as described: a constant offset or a flared station/offset list. */
+export type EdgeOffsetInput = BridgeDescription['deck']['left_edge_offset'];
+/** A spiral element as described. */
+export type SpiralElementDescription = z.infer<typeof spiralElement>;
+/** One deflection table entry as described. */
+export type DeflectionInput = z.infer<typeof deflectionSchema>;
 
 /** Girder points per span when `points_per_span` is omitted (tenth points). */
 export const DEFAULT_POINTS_PER_SPAN = 10;

@@ -6,6 +6,7 @@
 import { createAlignment, SolveError, type Alignment } from './alignment';
 import { chordOffsetSet, edgeMiddleOrdinate } from '@/lib/geometry/chord-offsets';
 import { DeckSurface } from '@/lib/geometry/cross-section';
+import { edgeOffsetAt } from './deck-edges';
 import type { GeometryIssue } from './errors';
 import { formatLength } from './format';
 import { bentLinePoint, exteriorSides, girderPoints, type LocatedPoint } from './framing';
@@ -36,7 +37,11 @@ export function createBridgeModel(bridge: BridgeDescription): BridgeModel {
     units: bridge.units,
     alignment,
     profile,
-    surface: new DeckSurface(alignment, profile, bridge.cross_slopes, bridge.deck),
+    surface: new DeckSurface(alignment, profile, bridge.cross_slopes, {
+      ...bridge.deck,
+      left_edge_offset: edgeOffsetAt(bridge.deck, 'left', bridge.bents[0]?.station ?? 0),
+      right_edge_offset: edgeOffsetAt(bridge.deck, 'right', bridge.bents[0]?.station ?? 0),
+    }),
     pointsPerSpan: bridge.points_per_span ?? DEFAULT_POINTS_PER_SPAN,
     chordSpaces: bridge.chord_spaces ?? DEFAULT_CHORD_SPACES,
     formSettlement: bridge.deck.form_settlement ?? defaultFormSettlement(bridge.units),
@@ -57,7 +62,7 @@ export function buildOffsetTable(bridge: BridgeDescription, issues: GeometryIssu
   const { alignment, surface, units } = model;
   const n = model.pointsPerSpan;
   const deck = bridge.deck;
-  const edgeOffsetOf = (side: 'left' | 'right') => (side === 'left' ? deck.left_edge_offset : deck.right_edge_offset);
+  const edgeOffsetOf = (side: 'left' | 'right') => edgeOffsetAt(deck, side, bridge.bents[0].station);
   const sides = exteriorSides(bridge.girders);
   const spanCount = bridge.bents.length - 1;
 
@@ -151,6 +156,8 @@ export function buildOffsetTable(bridge: BridgeDescription, issues: GeometryIssu
             top_of_girder: tog,
             buildup: tog === null ? null : bottomOfSlab - tog,
             drop_from_girder_top: null,
+            deflection: 0,
+            screed_grade: topOfDeck,
           });
         }
         continue;
@@ -214,6 +221,8 @@ export function buildOffsetTable(bridge: BridgeDescription, issues: GeometryIssu
             top_of_girder: tog,
             buildup: elev.buildup,
             drop_from_girder_top: elev.dropFromGirderTop,
+            deflection: 0,
+            screed_grade: elev.topOfDeck,
           });
         }
         if (widths.length === gps.length) spanWidths[side] = { girder: g.name, widths };

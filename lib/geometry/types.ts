@@ -34,6 +34,10 @@ export interface OffsetPoint {
   top_of_girder: number | null;
   buildup: number | null;
   drop_from_girder_top: number | null;
+  /** Dead-load deflection still to come at Pk (positive downward; 0 without `deflections`). */
+  deflection: number;
+  /** Top of deck at Pk + deflection: the grade the finishing machine strikes before the pour. */
+  screed_grade: number;
 }
 
 /** One division point of a deck-edge chord. */

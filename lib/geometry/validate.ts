@@ -4,6 +4,7 @@
  */
 import type { GeometryIssue } from './errors';
 import { GeometryError } from './errors';
+import { edgeOffsetAt } from './deck-edges';
 import { formatLength, formatStation } from './format';
 import { bridgeDescriptionSchema, DEFAULT_CHORD_SPACES, DEFAULT_POINTS_PER_SPAN, type BridgeDescription } from './schema';
 import { buildOffsetTable } from './table';
@@ -99,7 +100,7 @@ export function checkDescription(bridge: BridgeDescription): GeometryIssue[] {
   }
 
   // Deck
-  const d = bridge.deck;
+  const d = { ...bridge.deck, left_edge_offset: edgeOffsetAt(bridge.deck, 'left', 0), right_edge_offset: edgeOffsetAt(bridge.deck, 'right', 0) };
   if (!(d.left_edge_offset < d.right_edge_offset)) {
     issues.push({ path: 'deck.left_edge_offset', message: `The left edge offset (${len(d.left_edge_offset)}) must be left of (less than) the right edge offset (${len(d.right_edge_offset)})` });
   } else if (!(d.left_edge_offset + d.left_barrier_width < d.right_edge_offset - d.right_barrier_width)) {

@@ -2,7 +2,7 @@
  * Bents: a cap under the girders along each bent line and columns down to the ground, as instance
  * matrices, plus where to hang each bent's label.
  */
-import { bentLinePoint, type BridgeDescription, type BridgeModel, type OffsetTable } from '@/lib/geometry';
+import { bentLinePoint, edgeOffsetAt, type BridgeDescription, type BridgeModel, type OffsetTable } from '@/lib/geometry';
 import { girderTopOf } from './runs';
 import { sceneY, type SceneFrame } from './frame';
 import { writeBeamMatrix } from './instances';
@@ -58,9 +58,10 @@ export function buildBents(
     const e: [number, number, number] = [pb.x - frame.originX, capY, -(pb.y - frame.originY)];
     writeBeamMatrix(caps, b, a[0], a[1], a[2], e[0], e[1], e[2], capWidth, capDepth);
     capEnds.push({ a, b: e });
-    const lp = bentLinePoint(model.alignment, desc.bents[b], desc.deck.left_edge_offset - 4 * u);
+    const leftEdge = edgeOffsetAt(desc.deck, 'left', desc.bents[b].station);
+    const lp = bentLinePoint(model.alignment, desc.bents[b], leftEdge - 4 * u);
     labels[b * 3] = lp.x - frame.originX;
-    labels[b * 3 + 1] = sceneY(frame, model.surface.topOfDeckAtStationOffset(lp.station, desc.deck.left_edge_offset)) + 5 * u;
+    labels[b * 3 + 1] = sceneY(frame, model.surface.topOfDeckAtStationOffset(lp.station, leftEdge)) + 5 * u;
     labels[b * 3 + 2] = -(lp.y - frame.originY);
     lowest = Math.min(lowest, capY - capDepth / 2);
   }

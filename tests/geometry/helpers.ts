@@ -1,4 +1,5 @@
 import type { BridgeDescription } from '@/lib/geometry';
+import type { ConstantEdgeBridge } from '@/lib/demo/bridges';
 
 /** A plain straight, square bridge: alignment due north from (0, 0) at station 0. */
 export function straightBridge(overrides: Partial<BridgeDescription> = {}): BridgeDescription {
@@ -41,7 +42,7 @@ export function arcBridge(opts: {
   edge?: number;
   n?: number;
   m?: number;
-}): BridgeDescription {
+}): ConstantEdgeBridge {
   const total = opts.spans.reduce((a, b) => a + b, 0);
   const arcStart = 1200;
   const firstBent = arcStart + 80;

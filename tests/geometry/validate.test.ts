@@ -22,8 +22,11 @@ describe('schema', () => {
     if (!r1.ok && r1.kind === 'schema') expect(Object.keys(r1.fields)).toContain('deck.slab_thickness');
     const r2 = parseBridge({ ...bad, alignment: { ...bad.alignment, start_x: NaN } });
     expect(r2.ok === false && r2.kind === 'schema').toBe(true);
-    const r3 = parseBridge({ ...bad, alignment: { ...bad.alignment, elements: [{ type: 'spiral', length: 10 }] } });
-    expect(r3.ok === false && r3.kind === 'schema' && r3.message).toMatch(/line|arc/);
+    const r3 = parseBridge({ ...bad, alignment: { ...bad.alignment, elements: [{ type: 'clothoid', length: 10 }] } });
+    expect(r3.ok === false && r3.kind === 'schema' && r3.message).toMatch(/line|arc|spiral/);
+    // Data contract "Spirals": a spiral needs both radii (null for infinite) and a direction.
+    const r3b = parseBridge({ ...bad, alignment: { ...bad.alignment, elements: [{ type: 'spiral', length: 10 }] } });
+    expect(r3b.ok === false && r3b.kind === 'schema' && Object.keys(r3b.fields)).toEqual(expect.arrayContaining(['alignment.elements.0.radius_start', 'alignment.elements.0.direction']));
     const r4 = parseBridge({ ...bad, units: 'furlongs' });
     expect(r4.ok === false && r4.kind === 'schema' && r4.fields.units?.[0]).toMatch(/ft/);
     const r5 = parseBridge('not a bridge');
@@ -39,12 +42,12 @@ describe('schema', () => {
     }
   });
 
-  it('keeps points_per_span within 1..10000', () => {
-    for (const n of [0, 10001, 2.5]) {
+  it('keeps points_per_span within 1..200 (data contract: above 200 is refused)', () => {
+    for (const n of [0, 201, 10001, 2.5]) {
       const r = parseBridge(straightBridge({ points_per_span: n }));
       expect(r.ok === false && r.kind === 'schema' && Object.keys(r.fields)).toEqual(['points_per_span']);
     }
-    expect(parseBridge(straightBridge({ points_per_span: 10000 })).ok).toBe(true);
+    expect(parseBridge(straightBridge({ points_per_span: 200 })).ok).toBe(true);
   });
 });
 

@@ -3,8 +3,9 @@
  * eastings) so the scene's origin shift matters. Straight precast chords, five girder lines.
  */
 import type { BridgeDescription } from '@/lib/geometry';
+import type { ConstantEdgeBridge } from '@/lib/demo/bridges';
 
-export function fixtureBridge(layout: 'chord' | 'curved' = 'chord'): BridgeDescription {
+export function fixtureBridge(layout: 'chord' | 'curved' = 'chord'): ConstantEdgeBridge {
   return {
     name: 'Fixture Curve Bridge',
     units: 'ft',
@@ -53,5 +54,5 @@ export function fixtureBridge(layout: 'chord' | 'curved' = 'chord'): BridgeDescr
     ],
     points_per_span: 20,
     top_of_girder: [{ girder: 'G1', span: 1, point: 10, elevation: 413.9 }],
-  } as BridgeDescription;
+  } as ConstantEdgeBridge;
 }
