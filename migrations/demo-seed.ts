@@ -4,6 +4,7 @@ import { hashPassword } from '@/lib/auth/password';
 import type { Role } from '@/lib/auth/roles';
 import { demoBridges } from '@/lib/demo/bridges';
 import { audit } from '@/lib/services/audit';
+import { seedDemoHistory } from './demo-history';
 
 /** Shared password of the demo accounts; the README tells every installation to change it. */
 export const DEMO_PASSWORD = 'chordline-demo';
@@ -16,7 +17,8 @@ export const DEMO_ACCOUNTS: { email: string; name: string; role: Role }[] = [
 ];
 
 /**
- * Fills an empty database with the demo accounts and the invented demo bridges. Does nothing when
+ * Fills an empty database with the demo accounts, the invented demo bridges and their invented field
+ * history (migrations/demo-history.ts). Does nothing when
  * any user exists, so it never touches a database in use.
  */
 export async function seedDemo(sequelize: Sequelize): Promise<boolean> {
@@ -27,6 +29,8 @@ export async function seedDemo(sequelize: Sequelize): Promise<boolean> {
       DEMO_ACCOUNTS.map((a) => User.create({ ...a, passwordHash: hash }, { transaction })),
     );
     const engineer = users.find((u) => u.role === 'engineer')!;
+    const inspector = users.find((u) => u.role === 'inspector')!;
+    const made: { bridge: Bridge; description: (typeof demoBridges)[number] }[] = [];
     for (const description of demoBridges) {
       const bridge = await Bridge.create({ name: description.name, units: description.units, currentRevision: 1 }, { transaction });
       await GeometryRevision.create(
@@ -34,7 +38,9 @@ export async function seedDemo(sequelize: Sequelize): Promise<boolean> {
         { transaction },
       );
       await audit(engineer.id, 'bridge.create', 'bridge', bridge.id, { name: bridge.name, demo: true }, transaction);
+      made.push({ bridge, description });
     }
+    await seedDemoHistory(made, inspector.id, transaction);
   });
   return true;
 }
