@@ -19,7 +19,8 @@ const csp = [
 const nextConfig = {
   // Tests build into their own folder so a running `npm start` is not disturbed.
   distDir: process.env.NEXT_DIST_DIR || '.next',
-  serverExternalPackages: ['sequelize', 'sqlite3', 'pg', 'pg-hstore', 'umzug', 'nodemailer', 'bcryptjs', 'jimp'],
+  // esbuild (and esbuild-wasm, which @serwist/turbopack names) bundle the service worker at build time.
+  serverExternalPackages: ['sequelize', 'sqlite3', 'pg', 'pg-hstore', 'umzug', 'nodemailer', 'bcryptjs', 'jimp', 'esbuild', 'esbuild-wasm'],
   poweredByHeader: false,
   async headers() {
     return [

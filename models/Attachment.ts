@@ -17,6 +17,8 @@ export class Attachment extends Model<InferAttributes<Attachment>, InferCreation
   declare contentType: string;
   declare size: number;
   declare caption: string;
+  /** The phone's key for a photo sent from its offline store; a resend with it returns this row. */
+  declare clientKey: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
 
   static initModel(sequelize: Sequelize): void {
@@ -31,6 +33,7 @@ export class Attachment extends Model<InferAttributes<Attachment>, InferCreation
         contentType: { type: DataTypes.STRING(60), allowNull: false, field: 'content_type' },
         size: { type: DataTypes.INTEGER, allowNull: false },
         caption: { type: DataTypes.STRING(300), allowNull: false, defaultValue: '' },
+        clientKey: { type: DataTypes.STRING(64), allowNull: true, field: 'client_key' },
         createdAt: { type: DataTypes.DATE, field: 'created_at' },
       },
       { sequelize, tableName: 'attachments', updatedAt: false },

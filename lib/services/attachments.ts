@@ -51,14 +51,26 @@ const uploadFieldsSchema = z.object({
     .transform(Number)
     .optional(),
   caption: z.string().trim().max(300, 'Keep the caption under 300 characters.').optional().default(''),
+  client_key: z
+    .string()
+    .regex(/^[A-Za-z0-9_-]{8,64}$/, 'client_key must be 8 to 64 letters, digits, - or _.')
+    .optional(),
 });
+
+/** The attachment already stored under this client key, for a resend whose first answer was lost. */
+async function findReplay(bridgeId: number, clientKey: string | undefined): Promise<AttachmentJson | null> {
+  if (!clientKey) return null;
+  const a = await Attachment.findOne({ where: { bridgeId, clientKey }, include: [{ model: User, as: 'user', attributes: ['name'] }] });
+  return a ? toJson(a, (a as Attachment & { user?: User | null }).user?.name ?? null) : null;
+}
 
 /**
  * Stores a photo (JPEG, PNG, WebP) or a PDF for a bridge, optionally for one of its checks. The type
  * comes from the bytes (415 otherwise), the size limit is 10 MB (413), the stored name is generated and
- * the user's name is kept only as neutralised text.
+ * the user's name is kept only as neutralised text. A `client_key` field (8-64 of A-Z a-z 0-9 - _) makes
+ * a resend return the attachment already stored under it (`replayed: true`) instead of a second copy.
  */
-export async function uploadAttachment(user: SessionUser, bridgeId: string, req: NextRequest): Promise<AttachmentJson> {
+export async function uploadAttachment(user: SessionUser, bridgeId: string, req: NextRequest): Promise<AttachmentJson & { replayed: boolean }> {
   const bridge = await findBridgeById(bridgeId);
   const form = await readMultipart(req);
   const file = filePart(form);
@@ -66,8 +78,10 @@ export async function uploadAttachment(user: SessionUser, bridgeId: string, req:
     const v = form.get(k);
     return typeof v === 'string' && v !== '' ? v : undefined;
   };
-  const fields = uploadFieldsSchema.safeParse({ check_id: text('check_id'), caption: text('caption') });
+  const fields = uploadFieldsSchema.safeParse({ check_id: text('check_id'), caption: text('caption'), client_key: text('client_key') });
   if (!fields.success) throw invalidInput(fields.error);
+  const replay = await findReplay(bridge.id, fields.data.client_key);
+  if (replay) return { ...replay, replayed: true };
   const bytes = new Uint8Array(await file.arrayBuffer());
   const type = sniffType(bytes);
   if (!type) {
@@ -93,6 +107,7 @@ export async function uploadAttachment(user: SessionUser, bridgeId: string, req:
           contentType: type.contentType,
           size: bytes.byteLength,
           caption: fields.data.caption,
+          clientKey: fields.data.client_key ?? null,
         },
         { transaction },
       );
@@ -110,9 +125,12 @@ export async function uploadAttachment(user: SessionUser, bridgeId: string, req:
     // Make the thumbnail now, while the uploader waits anyway, so lists never wait for it. Best
     // effort: a photo that cannot be decoded serves as its own thumbnail.
     if (type.contentType.startsWith('image/')) await thumbnailOf(storedName, async () => Buffer.from(bytes)).catch(() => null);
-    return toJson(row, user.name);
+    return { ...toJson(row, user.name), replayed: false };
   } catch (err) {
     await removeUpload(storedName);
+    // Two sends of one photo raced past the first look-up: the unique key let one through.
+    const raced = (err as Error).name === 'SequelizeUniqueConstraintError' ? await findReplay(bridge.id, fields.data.client_key) : null;
+    if (raced) return { ...raced, replayed: true };
     throw err;
   }
 }

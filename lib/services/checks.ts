@@ -8,7 +8,7 @@ import { Attachment, FieldCheck, User } from '@/models';
 import { attachmentUrls } from './attachment-urls';
 import { audit } from './audit';
 import { refreshStatus } from './bridge-status';
-import { offsetsForBridge } from './offsets';
+import { offsetsForBridge, offsetsForRevision } from './offsets';
 import { fieldSettingsOf, findBridgeById } from './tolerances';
 
 const measurement = (what: string) =>
@@ -32,6 +32,8 @@ export const createCheckSchema = z
       .string({ error: 'client_key must be text.' })
       .regex(/^[A-Za-z0-9_-]{8,64}$/, 'client_key must be 8 to 64 letters, digits, - or _.')
       .optional(),
+    /** The geometry revision whose targets the measurement was taken against (a phone that was offline). */
+    revision: z.number({ error: 'revision must be a revision number (1, 2, …).' }).int('revision must be a whole number.').positive('Revisions start at 1.').optional(),
   })
   .refine((v) => v.measured_edge_width != null || v.measured_drop_from_girder_top != null, {
     message: 'Enter the measured edge width, the level-bar reading, or both.',
@@ -142,9 +144,13 @@ export function photoJson(a: Attachment): CheckPhoto {
  * check supersedes the previous latest one at the same bracket; both stay in the history.
  */
 export async function recordCheck(user: SessionUser, bridgeId: string, input: CheckInput): Promise<CheckJson & { replayed: boolean }> {
-  const { bridge, table } = await offsetsForBridge(bridgeId);
+  const { bridge, table: latest } = await offsetsForBridge(bridgeId);
   const replay = await findReplay(bridge.id, input.client_key);
   if (replay) return replay;
+  // A phone that kept the bridge offline sends the revision it showed; the check is judged against
+  // that revision's targets and stays marked with it (the history shows it as an older revision).
+  const revision = input.revision ?? bridge.currentRevision;
+  const table = revision === bridge.currentRevision ? latest : await offsetsForRevision(bridge, revision);
   const row = findBracket(table, input.span, input.girder, input.point);
   const settings = fieldSettingsOf(bridge);
   const width = input.measured_edge_width ?? null;
@@ -174,7 +180,7 @@ export async function recordCheck(user: SessionUser, bridgeId: string, input: Ch
       const check = await FieldCheck.create(
         {
           bridgeId: bridge.id,
-          revision: bridge.currentRevision,
+          revision,
           span: row.span,
           girder: row.girder,
           point: row.point,
@@ -203,7 +209,7 @@ export async function recordCheck(user: SessionUser, bridgeId: string, input: Ch
         'check.create',
         'bridge',
         bridge.id,
-        { check: check.id, span: row.span, girder: row.girder, point: row.point, revision: bridge.currentRevision, pass, supersedes: previous ? previous.id : null },
+        { check: check.id, span: row.span, girder: row.girder, point: row.point, revision, pass, supersedes: previous ? previous.id : null },
         transaction,
       );
       return check;

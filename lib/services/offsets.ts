@@ -60,6 +60,29 @@ export async function offsetsForBridge(id: string): Promise<{ bridge: Bridge; ta
   return { bridge, table };
 }
 
+/**
+ * Offset table of one stored revision of a bridge (with the stored survey merged as for the latest),
+ * for a field check measured against a revision that has since been replaced. 400 when the bridge has
+ * no such revision yet.
+ */
+export async function offsetsForRevision(bridge: Bridge, revision: number): Promise<OffsetTable> {
+  if (revision === bridge.currentRevision) return (await offsetsForBridge(String(bridge.id))).table;
+  if (revision > bridge.currentRevision) {
+    throw new HttpError(400, `This bridge is at revision ${bridge.currentRevision}; there is no revision ${revision} yet.`, {
+      revision: [`Choose a revision from 1 to ${bridge.currentRevision}.`],
+    });
+  }
+  const survey = await storedSurvey(bridge.id);
+  const key = `${bridge.id}:${bridge.createdAt.getTime()}:${revision}:${survey.stamp}`;
+  let table = cache.get(key);
+  if (!table) {
+    table = computeChecked(withSurvey(await getRevisionDescription(bridge.id, revision), survey.entries));
+    if (cache.size >= CACHE_LIMIT) cache.delete(cache.keys().next().value as string);
+    cache.set(key, table);
+  }
+  return table;
+}
+
 const STYLES = ['decimal-feet', 'feet-inches', 'metric'] as const;
 
 /** Query of the offsets CSV: `style` of the display units, decimal-feet when absent. */
