@@ -2,10 +2,11 @@
 
 import { useId, useRef, useState } from 'react';
 import LandXmlPreview from '@/components/bridges/LandXmlPreview';
-import type { ImportedAlignment } from '@/lib/import/landxml';
+import LandXmlProblems, { problemGroupsOf } from '@/components/bridges/LandXmlProblems';
+import type { ImportedAlignment, SkippedAlignment } from '@/lib/import/landxml';
 import type { Units } from '@/lib/units';
 
-type ImportAnswer = { alignments: ImportedAlignment[]; skipped: { name: string; reason: string }[]; linear_unit: string };
+type ImportAnswer = { alignments: ImportedAlignment[]; skipped: SkippedAlignment[]; linear_unit: string };
 
 const MAX_BYTES = 5 * 1024 * 1024;
 
@@ -19,6 +20,7 @@ export default function LandXmlImport({ units, onApply }: { units: Units; onAppl
   const [open, setOpen] = useState(false);
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState<string | null>(null);
+  const [failed, setFailed] = useState<{ name: string; problems: string[] }[]>([]);
   const [answer, setAnswer] = useState<ImportAnswer | null>(null);
   const [fileName, setFileName] = useState('');
   const [chosen, setChosen] = useState(0);
@@ -26,6 +28,7 @@ export default function LandXmlImport({ units, onApply }: { units: Units; onAppl
   function reset() {
     setAnswer(null);
     setError(null);
+    setFailed([]);
     setChosen(0);
     if (input.current) input.current.value = '';
   }
@@ -33,6 +36,7 @@ export default function LandXmlImport({ units, onApply }: { units: Units; onAppl
   async function read() {
     const file = input.current?.files?.[0];
     setError(null);
+    setFailed([]);
     setAnswer(null);
     if (!file) {
       setError('Choose a LandXML file first.');
@@ -48,9 +52,10 @@ export default function LandXmlImport({ units, onApply }: { units: Units; onAppl
     setBusy(true);
     try {
       const res = await fetch('/api/import/landxml', { method: 'POST', body: form });
-      const body = (await res.json().catch(() => null)) as (ImportAnswer & { error?: string }) | null;
+      const body = (await res.json().catch(() => null)) as (ImportAnswer & { error?: string; fields?: Record<string, string[]> }) | null;
       if (!res.ok || !body) {
         setError(body?.error ?? `The server answered ${res.status}. Try again.`);
+        setFailed(problemGroupsOf(body?.fields));
         return;
       }
       setFileName(file.name);
@@ -93,7 +98,7 @@ export default function LandXmlImport({ units, onApply }: { units: Units; onAppl
         </button>
       </div>
       <p className="mt-0.5 text-sm text-concrete-600">
-        Reads Line and Curve elements and the design profile (PVI, ParaCurve) of a LandXML 1.2 file in {units === 'm' ? 'metres' : 'feet'}. Nothing is saved until you save a revision.
+        Reads Line, Curve and clothoid Spiral elements and the design profile (PVI, ParaCurve; CircCurve as the matching parabola) of a LandXML 1.2 file in {units === 'm' ? 'metres' : 'feet'}. Nothing is saved until you save a revision.
       </p>
       <div className="mt-3 flex flex-wrap items-end gap-3">
         <div>
@@ -110,6 +115,11 @@ export default function LandXmlImport({ units, onApply }: { units: Units; onAppl
         <p role="alert" className="mt-3 rounded-md border border-fail-600 bg-fail-100 p-3 text-sm text-fail-600" data-testid="landxml-error">
           {error}
         </p>
+      ) : null}
+      {failed.length > 0 ? (
+        <div className="mt-2">
+          <LandXmlProblems groups={failed} tone="fail" />
+        </div>
       ) : null}
       {answer && item ? (
         <div className="mt-4 space-y-3">
@@ -128,13 +138,7 @@ export default function LandXmlImport({ units, onApply }: { units: Units; onAppl
           ) : (
             <p className="text-sm font-semibold text-concrete-800">Alignment “{item.name}”</p>
           )}
-          {answer.skipped.length > 0 ? (
-            <ul className="rounded-md bg-caution-100 p-3 text-sm text-caution-700">
-              {answer.skipped.map((s) => (
-                <li key={s.name}>Not importable: {s.reason}</li>
-              ))}
-            </ul>
-          ) : null}
+          <LandXmlProblems groups={answer.skipped} tone="caution" />
           <LandXmlPreview item={item} units={units} />
           <div className="flex flex-wrap gap-2">
             <button

@@ -1,9 +1,23 @@
 import { lengthText, stationText, type Units } from '@/lib/units';
 import type { ImportedAlignment } from '@/lib/import/landxml';
 
+type Element = ImportedAlignment['alignment']['elements'][number];
+
+const KIND = { line: 'Tangent (Line)', arc: 'Arc (Curve)', spiral: 'Spiral (clothoid)' } as const;
+
+/** Radius text: the arc's radius, or a spiral's start → end radius ("tangent" for an infinite end). */
+function radiusText(e: Element, units: Units): string {
+  if (e.type === 'arc') return lengthText(e.radius, units, false);
+  if (e.type === 'line') return '—';
+  const r = (v: number | null) => (v === null ? 'tangent' : lengthText(v, units, false));
+  return `${r(e.radius_start)} → ${r(e.radius_end)}`;
+}
+
 /** What a LandXML alignment holds, before it replaces the editor's alignment and profile. */
 export default function LandXmlPreview({ item, units }: { item: ImportedAlignment; units: Units }) {
   const al = item.alignment;
+  // The "no profile" note is said in the box above; the others are listed at the end.
+  const notes = item.notes.filter((n) => !(item.profile === null && n.startsWith('No profile came')));
   let station = al.start_station;
   const rows = al.elements.map((e, i) => {
     const from = station;
@@ -35,12 +49,12 @@ export default function LandXmlPreview({ item, units }: { item: ImportedAlignmen
             {rows.map(({ i, e, from, to }) => (
               <tr key={i} className="border-b border-concrete-100">
                 <td className="py-1 pr-2">{i + 1}</td>
-                <td className="py-1 pr-2">{e.type === 'line' ? 'Tangent (Line)' : 'Arc (Curve)'}</td>
+                <td className="py-1 pr-2">{KIND[e.type]}</td>
                 <td className="py-1 pr-2 tabular">{stationText(from, units)}</td>
                 <td className="py-1 pr-2 tabular">{stationText(to, units)}</td>
                 <td className="py-1 pr-2 text-right">{lengthText(e.length, units, false)}</td>
-                <td className="py-1 pr-2 text-right">{e.type === 'arc' ? lengthText(e.radius, units, false) : '—'}</td>
-                <td className="py-1">{e.type === 'arc' ? (e.direction === 'right' ? 'Right (cw)' : 'Left (ccw)') : '—'}</td>
+                <td className="py-1 pr-2 text-right whitespace-nowrap">{radiusText(e, units)}</td>
+                <td className="py-1">{e.type === 'line' ? '—' : e.direction === 'right' ? 'Right (cw)' : 'Left (ccw)'}</td>
               </tr>
             ))}
           </tbody>
@@ -70,10 +84,21 @@ export default function LandXmlPreview({ item, units }: { item: ImportedAlignmen
             </tbody>
           </table>
         </div>
-      ) : null}
-      {item.notes.length > 0 ? (
+      ) : (
+        <div className="rounded-md border border-caution-500 bg-caution-100 p-3 text-sm text-caution-700" data-testid="landxml-no-profile">
+          <p className="font-semibold">No profile comes with this alignment; the editor will ask for one.</p>
+          {item.profile_left_out && item.profile_left_out.length > 0 ? (
+            <ul className="mt-1 list-disc pl-5">
+              {item.profile_left_out.map((p) => (
+                <li key={p}>{p}</li>
+              ))}
+            </ul>
+          ) : null}
+        </div>
+      )}
+      {notes.length > 0 ? (
         <ul className="list-disc pl-5 text-sm text-concrete-700">
-          {item.notes.map((n) => (
+          {notes.map((n) => (
             <li key={n}>{n}</li>
           ))}
         </ul>

@@ -7,7 +7,9 @@ import type { NextRequest } from 'next/server';
 import { z } from 'zod';
 import { HttpError } from '@/lib/api/errors';
 import { filePart, readMultipart } from '@/lib/uploads/multipart';
-import { LandXmlError, parseLandXml, type ImportedAlignment, type LengthUnit } from './landxml';
+import type { AlignmentElementInput } from '@/lib/geometry';
+import { LandXmlAlignmentsError, LandXmlError, parseLandXml, type ImportedAlignment, type LengthUnit, type SkippedAlignment } from './landxml';
+import { decodeXmlBytes, XmlReadError } from './xml-tree';
 
 /** Largest LandXML file accepted, in bytes (5 MB). */
 export const LANDXML_MAX_BYTES = 5 * 1024 * 1024;
@@ -19,27 +21,29 @@ export interface LandXmlImportResponse {
   units: LengthUnit;
   linear_unit: string;
   alignments: ImportedAlignment[];
-  skipped: { name: string; reason: string }[];
+  skipped: SkippedAlignment[];
   alignment: ImportedAlignment['alignment'];
   profile: ImportedAlignment['profile'];
 }
 
 const tooLarge = () => new HttpError(413, 'The file is larger than 5 MB. Export only the alignments you need and try again.', { file: ['Choose a file of 5 MB or less.'] });
 
-/** Decodes UTF-8 (with or without a byte-order mark) or UTF-16 with a byte-order mark; 415 for anything else. */
+/** Decodes the bytes by their byte-order mark or declared encoding; 415 when they are not text. */
 function decode(bytes: Uint8Array): string {
-  const notText = () => new HttpError(415, 'The file is not a text XML file. Choose a LandXML (.xml) file.', { file: ['Choose a LandXML (.xml) file.'] });
-  let text: string;
   try {
-    if (bytes[0] === 0xff && bytes[1] === 0xfe) text = new TextDecoder('utf-16le', { fatal: true }).decode(bytes.subarray(2));
-    else if (bytes[0] === 0xfe && bytes[1] === 0xff) text = new TextDecoder('utf-16be', { fatal: true }).decode(bytes.subarray(2));
-    else text = new TextDecoder('utf-8', { fatal: true }).decode(bytes);
-  } catch {
-    throw notText();
+    return decodeXmlBytes(bytes);
+  } catch (err) {
+    if (err instanceof XmlReadError) throw new HttpError(err.status, err.message, { file: ['Choose a LandXML (.xml) file.'] });
+    throw err;
   }
-  if (!/^\uFEFF?\s*</.test(text) || text.includes('\u0000')) throw notText();
-  return text;
 }
+
+const slimElement = (e: AlignmentElementInput): AlignmentElementInput =>
+  e.type === 'arc'
+    ? { type: 'arc', length: e.length, radius: e.radius, direction: e.direction }
+    : e.type === 'spiral'
+      ? { type: 'spiral', length: e.length, radius_start: e.radius_start, radius_end: e.radius_end, direction: e.direction }
+      : { type: 'line', length: e.length };
 
 function slim(a: ImportedAlignment): ImportedAlignment {
   return {
@@ -49,14 +53,26 @@ function slim(a: ImportedAlignment): ImportedAlignment {
       start_x: a.alignment.start_x,
       start_y: a.alignment.start_y,
       start_bearing_deg: a.alignment.start_bearing_deg,
-      elements: a.alignment.elements.map((e) =>
-        e.type === 'arc' ? { type: 'arc', length: e.length, radius: e.radius, direction: e.direction } : { type: 'line', length: e.length },
-      ),
+      elements: a.alignment.elements.map(slimElement),
     },
     profile: a.profile ? { pvis: a.profile.pvis.map((p) => (p.curve_length ? { station: p.station, elevation: p.elevation, curve_length: p.curve_length } : { station: p.station, elevation: p.elevation })) } : null,
     profile_name: a.profile_name,
+    profile_left_out: a.profile_left_out ? [...a.profile_left_out] : null,
     notes: [...a.notes],
   };
+}
+
+/**
+ * Field errors of a file none of whose alignments could be imported, shaped like the successful
+ * answer's `skipped` list: `alignments.<i>.name` and `alignments.<i>.problems` per alignment.
+ */
+function failedFields(failed: SkippedAlignment[]): Record<string, string[]> {
+  const fields: Record<string, string[]> = { file: [failed.length === 1 ? 'The alignment in this file could not be imported.' : 'No alignment in this file could be imported.'] };
+  failed.forEach((f, i) => {
+    fields[`alignments.${i}.name`] = [f.name];
+    fields[`alignments.${i}.problems`] = [...f.problems];
+  });
+  return fields;
 }
 
 /** Reads and imports an uploaded LandXML file; throws HttpError (400, 413, 415, 422) with a message a person can act on. */
@@ -81,11 +97,12 @@ export async function importLandXmlUpload(req: NextRequest): Promise<LandXmlImpo
       units: result.units,
       linear_unit: result.linear_unit,
       alignments,
-      skipped: result.skipped.map((s) => ({ name: s.name, reason: s.reason })),
+      skipped: result.skipped.map((s) => ({ name: s.name, reason: s.reason, problems: [...s.problems] })),
       alignment: alignments[0].alignment,
       profile: alignments[0].profile,
     };
   } catch (err) {
+    if (err instanceof LandXmlAlignmentsError) throw new HttpError(err.status, err.message, failedFields(err.failed));
     if (err instanceof LandXmlError) throw new HttpError(err.status, err.message, { file: [err.message] });
     throw err;
   }

@@ -1,18 +1,26 @@
 /**
- * LandXML 1.2 import: reads the horizontal geometry (Alignment / CoordGeom Line and Curve) and the
- * design profile (Profile / ProfAlign PVI and ParaCurve) of each alignment and turns them into
- * bridge-format `alignment` and `profile` fragments (see the shared bridge-format contract).
+ * LandXML 1.2 import: reads the horizontal geometry (Alignment / CoordGeom Line, Curve and clothoid
+ * Spiral) and the design profile (Profile / ProfAlign PVI, ParaCurve, CircCurve) of each alignment and
+ * turns them into bridge-format `alignment` and `profile` fragments (see the shared bridge-format
+ * contract).
  *
  * LandXML gives plan coordinates NORTHING FIRST ("N E"); the bridge format uses x = easting,
- * y = northing. Curve rot="cw" turns right (bearing grows), rot="ccw" turns left. Bearings here are
- * azimuths clockwise from north. Element lengths, radii and the start bearing are taken from the
+ * y = northing. Curve and Spiral rot="cw" turn right (bearing grows), rot="ccw" left. Bearings here
+ * are azimuths clockwise from north. Line and Curve lengths, radii and bearings are taken from the
  * element points (Start, Center, End) so the imported alignment passes through the points the file
- * gives; the length and radius attributes, when present, must agree with them.
+ * gives; a Spiral's length and radii come from its attributes and are checked against its points.
+ * Every problem is reported with its station; a profile that cannot be used is left out (with its
+ * reasons) and the horizontal alignment is imported without it.
  */
 import type { AlignmentElementInput, PviInput } from '@/lib/geometry';
+import { AlignmentProblems, readHorizontal } from './landxml-alignment';
+import { fail, LandXmlError, type LengthUnit } from './landxml-points';
+import { readProfile } from './landxml-profile';
 import { childNamed, childrenNamed, readXml, XmlReadError, type XmlNode } from './xml-tree';
 
-export type LengthUnit = 'ft' | 'm';
+export { LandXmlError, type LengthUnit } from './landxml-points';
+export { ATTRIBUTE_TOLERANCE, JOIN_TOLERANCE, SNAP_TOLERANCE } from './landxml-elements';
+export { TANGENCY_TOLERANCE } from './landxml-alignment';
 
 /** One alignment of the file, ready to replace a bridge description's `alignment` and `profile`. */
 export interface ImportedAlignment {
@@ -24,12 +32,22 @@ export interface ImportedAlignment {
     start_bearing_deg: number;
     elements: AlignmentElementInput[];
   };
-  /** The first ProfAlign of the alignment's first Profile; null when the file gives none. */
+  /** The first ProfAlign of the alignment; null when the file gives none or it cannot be used. */
   profile: { pvis: PviInput[] } | null;
   /** Name of the ProfAlign the profile came from. */
   profile_name: string | null;
+  /** Why no profile came with the alignment (each problem with its station); null when one did. */
+  profile_left_out: string[] | null;
   /** Things worth knowing that did not stop the import (sentences). */
   notes: string[];
+}
+
+/** An alignment of the file that could not be imported: every problem found, each with its station. */
+export interface SkippedAlignment {
+  name: string;
+  /** One line: the first problem and how many more. */
+  reason: string;
+  problems: string[];
 }
 
 export interface LandXmlImport {
@@ -38,27 +56,21 @@ export interface LandXmlImport {
   /** The linearUnit attribute as written in the file. */
   linear_unit: string;
   alignments: ImportedAlignment[];
-  /** Alignments of the file that could not be imported, with the reason (a sentence). */
-  skipped: { name: string; reason: string }[];
+  /** Alignments of the file that could not be imported, with every reason. */
+  skipped: SkippedAlignment[];
 }
 
-/** A file the import refuses, with its HTTP status (400 unreadable, 422 unusable). */
-export class LandXmlError extends XmlReadError {}
-
-/** Largest gap between one element's End and the next element's Start, in the file's unit. */
-export const JOIN_TOLERANCE = 0.005;
-/** Largest change of bearing at a join, radians (about 20 seconds of arc): the elements must be tangent. */
-export const TANGENCY_TOLERANCE = 1e-4;
-/** Largest disagreement between a length/radius attribute and the element's points, in the file's unit. */
-export const ATTRIBUTE_TOLERANCE = 0.01;
-/**
- * When a stated length or radius agrees with the element's points this closely (file units), the
- * stated value is used: the difference is only the rounding of the coordinates in the file.
- */
-export const SNAP_TOLERANCE = 1e-6;
-
-/** The stated attribute when it agrees with the geometry to {@link SNAP_TOLERANCE}, else the geometry's value. */
-const preferStated = (geometric: number, stated: number | undefined) => (stated !== undefined && Math.abs(stated - geometric) <= SNAP_TOLERANCE ? stated : geometric);
+/** The whole file refused because no alignment could be imported: a list of problems per alignment. */
+export class LandXmlAlignmentsError extends LandXmlError {
+  constructor(readonly failed: SkippedAlignment[]) {
+    super(
+      422,
+      failed.length === 1
+        ? `Alignment "${failed[0].name}" could not be imported: ${failed[0].problems.length === 1 ? failed[0].problems[0] : `${failed[0].problems.length} problems.`}`
+        : `No alignment in the file could be imported: ${failed.map((f) => `"${f.name}" (${f.problems.length} ${f.problems.length === 1 ? 'problem' : 'problems'})`).join(', ')}.`,
+    );
+  }
+}
 
 const LINEAR_UNITS: Record<string, LengthUnit> = {
   foot: 'ft',
@@ -68,216 +80,22 @@ const LINEAR_UNITS: Record<string, LengthUnit> = {
   metre: 'm',
 };
 
-const UNSUPPORTED_GEOMETRY: Record<string, string> = {
-  Spiral: 'spirals are not supported yet',
-  Chain: 'Chain elements are not supported; export the alignment as Line and Curve elements',
-  IrregularLine: 'IrregularLine elements are not supported; export the alignment as Line and Curve elements',
-};
-
-const UNSUPPORTED_PROFILE: Record<string, string> = {
-  CircCurve: 'circular vertical curves (CircCurve) are not supported; use parabolic curves (ParaCurve)',
-  UnsymParaCurve: 'unsymmetrical vertical curves (UnsymParaCurve) are not supported; use symmetric parabolic curves (ParaCurve)',
-};
-
-const TWO_PI = 2 * Math.PI;
-
-interface Pt {
-  /** Easting. */
-  x: number;
-  /** Northing. */
-  y: number;
-}
-
-const fail = (message: string, status = 422): never => {
-  throw new LandXmlError(status, message);
-};
-
-function numbersIn(text: string): number[] {
-  const parts = text.trim().split(/[\s,]+/).filter(Boolean);
-  return parts.map(Number);
-}
-
-function finiteAttr(node: XmlNode, name: string, where: string): number | undefined {
-  const raw = node.attrs[name];
-  if (raw === undefined || raw.trim() === '') return undefined;
-  const v = Number(raw);
-  if (!Number.isFinite(v)) fail(`${where}: the ${name} attribute "${raw}" is not a number.`);
-  return v;
-}
-
-/** Plan point of a Start/End/Center/PI element: "N E" (optionally "N E Z") or a pntRef to a CgPoint. */
-function pointOf(node: XmlNode | undefined, label: string, where: string, cgPoints: Map<string, string>): Pt {
-  if (!node) return fail(`${where} has no ${label} point.`);
-  let text = node.text;
-  if (!text && node.attrs.pntRef) {
-    const ref = cgPoints.get(node.attrs.pntRef);
-    if (ref === undefined) fail(`${where}: the ${label} point refers to CgPoint "${node.attrs.pntRef}", which the file does not define.`);
-    text = ref as string;
-  }
-  const nums = numbersIn(text);
-  if (nums.length < 2 || nums.length > 3 || nums.some((n) => !Number.isFinite(n))) {
-    fail(`${where}: the ${label} point "${text}" must be two or three numbers, northing first ("N E").`);
-  }
-  return { x: nums[1], y: nums[0] };
-}
-
-const dist = (a: Pt, b: Pt) => Math.hypot(b.x - a.x, b.y - a.y);
-/** Azimuth from a to b, radians clockwise from north, in [0, 2π). */
-const azimuth = (a: Pt, b: Pt) => {
-  const t = Math.atan2(b.x - a.x, b.y - a.y);
-  return t < 0 ? t + TWO_PI : t;
-};
-/** Smallest signed difference b − a of two angles, radians in (−π, π]. */
-const angleDiff = (a: number, b: number) => {
-  let d = (b - a) % TWO_PI;
-  if (d > Math.PI) d -= TWO_PI;
-  if (d <= -Math.PI) d += TWO_PI;
-  return d;
-};
-const degrees = (rad: number) => (rad * 180) / Math.PI;
-const fmt = (v: number) => (Math.abs(v) >= 1 ? v.toFixed(3) : v.toPrecision(3));
-
-interface Laid {
-  element: AlignmentElementInput;
-  start: Pt;
-  end: Pt;
-  /** Tangent azimuths at the start and end, radians clockwise from north. */
-  bearingIn: number;
-  bearingOut: number;
-}
-
-function readLine(node: XmlNode, where: string, cg: Map<string, string>): Laid {
-  const start = pointOf(childNamed(node, 'Start'), 'Start', where, cg);
-  const end = pointOf(childNamed(node, 'End'), 'End', where, cg);
-  const length = dist(start, end);
-  if (!(length > 0)) fail(`${where}: Start and End are the same point, so the line has no length.`);
-  const stated = finiteAttr(node, 'length', where);
-  if (stated !== undefined && Math.abs(stated - length) > ATTRIBUTE_TOLERANCE) {
-    fail(`${where}: the length attribute (${fmt(stated)}) does not match the distance from Start to End (${fmt(length)}).`);
-  }
-  const b = azimuth(start, end);
-  return { element: { type: 'line', length: preferStated(length, stated) }, start, end, bearingIn: b, bearingOut: b };
-}
-
-function readCurve(node: XmlNode, where: string, cg: Map<string, string>): Laid {
-  const rot = node.attrs.rot;
-  if (rot !== 'cw' && rot !== 'ccw') fail(`${where}: the rot attribute must be "cw" (turning right) or "ccw" (turning left), not "${rot ?? ''}".`);
-  const turn = rot === 'cw' ? 1 : -1;
-  const start = pointOf(childNamed(node, 'Start'), 'Start', where, cg);
-  const center = pointOf(childNamed(node, 'Center'), 'Center', where, cg);
-  const end = pointOf(childNamed(node, 'End'), 'End', where, cg);
-  const radius = dist(center, start);
-  if (!(radius > 0)) fail(`${where}: Start and Center are the same point, so the curve has no radius.`);
-  const endRadius = dist(center, end);
-  if (Math.abs(endRadius - radius) > JOIN_TOLERANCE) {
-    fail(`${where}: Start and End are not the same distance from Center (${fmt(radius)} and ${fmt(endRadius)}); this is not a circular curve.`);
-  }
-  // Radial directions from the centre; the sweep is measured in the turning direction.
-  const a0 = azimuth(center, start);
-  const a1 = azimuth(center, end);
-  let sweep = turn * (a1 - a0);
-  sweep = ((sweep % TWO_PI) + TWO_PI) % TWO_PI;
-  const length = radius * sweep;
-  if (!(length > 0)) fail(`${where}: Start and End are the same point, so the curve has no length.`);
-  const statedRadius = finiteAttr(node, 'radius', where);
-  if (statedRadius !== undefined && Math.abs(statedRadius - radius) > ATTRIBUTE_TOLERANCE) {
-    fail(`${where}: the radius attribute (${fmt(statedRadius)}) does not match the distance from Center to Start (${fmt(radius)}).`);
-  }
-  const statedLength = finiteAttr(node, 'length', where);
-  if (statedLength !== undefined && Math.abs(statedLength - length) > ATTRIBUTE_TOLERANCE) {
-    fail(
-      `${where}: the length attribute (${fmt(statedLength)}) does not match the arc from Start to End turning ${rot === 'cw' ? 'right (cw)' : 'left (ccw)'} (${fmt(length)}); check the rot attribute.`,
-    );
-  }
-  // Travelling with the centre on the right (cw), the radius from the centre points 90° left of the
-  // tangent, so the tangent is the radial azimuth turned 90° clockwise (counterclockwise for ccw).
-  const bearingIn = (a0 + (turn * Math.PI) / 2 + TWO_PI) % TWO_PI;
-  const bearingOut = (a1 + (turn * Math.PI) / 2 + TWO_PI) % TWO_PI;
-  return {
-    element: { type: 'arc', length: preferStated(length, statedLength), radius: preferStated(radius, statedRadius), direction: rot === 'cw' ? 'right' : 'left' },
-    start,
-    end,
-    bearingIn,
-    bearingOut,
-  };
-}
-
-function readProfile(alignmentNode: XmlNode, where: string): { profile: { pvis: PviInput[] } | null; name: string | null; notes: string[] } {
-  const notes: string[] = [];
-  const profileNode = childNamed(alignmentNode, 'Profile');
-  const profAligns = profileNode ? childrenNamed(profileNode, 'ProfAlign') : [];
-  if (profAligns.length === 0) {
-    notes.push(`${where} has no design profile (ProfAlign); the editor keeps its current profile.`);
-    return { profile: null, name: null, notes };
-  }
-  const pa = profAligns[0];
-  const name = pa.attrs.name ?? null;
-  if (profAligns.length > 1) notes.push(`${where} has ${profAligns.length} design profiles; the first (${name ?? 'unnamed'}) was read.`);
-  const pvis: PviInput[] = [];
-  pa.children.forEach((c, i) => {
-    const here = `${where}, profile point ${i + 1} (${c.name})`;
-    if (UNSUPPORTED_PROFILE[c.name]) fail(`${here}: ${UNSUPPORTED_PROFILE[c.name]}.`);
-    if (c.name !== 'PVI' && c.name !== 'ParaCurve') return;
-    const nums = numbersIn(c.text);
-    if (nums.length !== 2 || nums.some((n) => !Number.isFinite(n))) fail(`${here}: "${c.text}" must be two numbers, station then elevation.`);
-    const pvi: PviInput = { station: nums[0], elevation: nums[1] };
-    if (c.name === 'ParaCurve') {
-      const L = finiteAttr(c, 'length', here);
-      if (L === undefined || !(L >= 0)) fail(`${here}: a ParaCurve needs a length attribute of zero or more.`);
-      if ((L as number) > 0) pvi.curve_length = L as number;
-    }
-    pvis.push(pvi);
-  });
-  if (pvis.length === 0) fail(`${where}: the design profile${name ? ` "${name}"` : ''} holds no PVI or ParaCurve.`);
-  for (let i = 1; i < pvis.length; i++) {
-    if (!(pvis[i].station > pvis[i - 1].station)) fail(`${where}: profile point ${i + 1} at station ${fmt(pvis[i].station)} is not up-station of point ${i} (${fmt(pvis[i - 1].station)}).`);
-  }
-  return { profile: { pvis }, name, notes };
-}
-
-function readAlignment(node: XmlNode, index: number, cg: Map<string, string>): ImportedAlignment {
+function readAlignment(node: XmlNode, index: number, cg: Map<string, string>, units: LengthUnit): ImportedAlignment {
   const name = node.attrs.name?.trim() || `Alignment ${index + 1}`;
-  const where = `Alignment "${name}"`;
-  if (childNamed(node, 'StaEquation')) fail(`${where}: station equations (StaEquation) are not supported; export the alignment with continuous stationing.`);
-  const coordGeom = childNamed(node, 'CoordGeom');
-  if (!coordGeom || coordGeom.children.length === 0) fail(`${where} has no CoordGeom elements.`);
-  const laid: Laid[] = [];
-  (coordGeom as XmlNode).children.forEach((c, i) => {
-    const here = `${where}, element ${i + 1} (${c.name})`;
-    if (UNSUPPORTED_GEOMETRY[c.name]) fail(`${here}: ${UNSUPPORTED_GEOMETRY[c.name]}.`);
-    if (c.name === 'Line') laid.push(readLine(c, here, cg));
-    else if (c.name === 'Curve') laid.push(readCurve(c, here, cg));
-    else fail(`${here}: ${c.name} is not an alignment element this import reads (Line and Curve are).`);
-  });
-  for (let i = 1; i < laid.length; i++) {
-    const gap = dist(laid[i - 1].end, laid[i].start);
-    if (gap > JOIN_TOLERANCE) fail(`${where}: element ${i + 1} does not start where element ${i} ends (a gap of ${fmt(gap)}).`);
-    const kink = angleDiff(laid[i - 1].bearingOut, laid[i].bearingIn);
-    if (Math.abs(kink) > TANGENCY_TOLERANCE) {
-      fail(`${where}: element ${i + 1} is not tangent to element ${i} (the direction changes by ${degrees(Math.abs(kink)).toFixed(4)}° at the join); Chordline lays elements tangent end to end.`);
-    }
+  const horizontal = readHorizontal(node, `Alignment "${name}"`, cg, units);
+  const profile = readProfile(node, units, horizontal.alignment.start_station, horizontal.endStation);
+  const notes = [...horizontal.notes, ...profile.notes];
+  if (profile.leftOut) {
+    const why = profile.leftOut.length === 1 ? profile.leftOut[0] : `${profile.leftOut.length} problems, listed with the profile.`;
+    notes.push(`No profile came with this alignment: ${/^[A-Z][a-z]/.test(why) ? why.charAt(0).toLowerCase() + why.slice(1) : why} Enter the profile from the plans in the editor.`);
   }
-  const staStart = finiteAttr(node, 'staStart', where) ?? 0;
-  const notes: string[] = [];
-  if (node.attrs.staStart === undefined) notes.push(`${where} gives no staStart; stations start at 0.`);
-  const total = laid.reduce((s, l) => s + l.element.length, 0);
-  const statedLength = finiteAttr(node, 'length', where);
-  if (statedLength !== undefined && Math.abs(statedLength - total) > ATTRIBUTE_TOLERANCE) {
-    notes.push(`${where}: the length attribute (${fmt(statedLength)}) differs from the sum of its elements (${fmt(total)}); the elements were used.`);
-  }
-  const profile = readProfile(node, where);
   return {
     name,
-    alignment: {
-      start_station: staStart,
-      start_x: laid[0].start.x,
-      start_y: laid[0].start.y,
-      start_bearing_deg: degrees(laid[0].bearingIn),
-      elements: laid.map((l) => l.element),
-    },
+    alignment: horizontal.alignment,
     profile: profile.profile,
     profile_name: profile.name,
-    notes: [...notes, ...profile.notes],
+    profile_left_out: profile.leftOut,
+    notes,
   };
 }
 
@@ -321,17 +139,16 @@ export function parseLandXml(text: string, expectUnits?: LengthUnit): LandXmlImp
   const nodes = childrenNamed(root, 'Alignments').flatMap((group) => childrenNamed(group, 'Alignment'));
   if (nodes.length === 0) fail('The file holds no Alignment, so there is nothing to import.');
   const alignments: ImportedAlignment[] = [];
-  const skipped: { name: string; reason: string }[] = [];
+  const skipped: SkippedAlignment[] = [];
   nodes.forEach((n, i) => {
     try {
-      alignments.push(readAlignment(n, i, cg));
+      alignments.push(readAlignment(n, i, cg, units));
     } catch (err) {
       if (!(err instanceof LandXmlError)) throw err;
-      skipped.push({ name: n.attrs.name?.trim() || `Alignment ${i + 1}`, reason: err.message });
+      const problems = err instanceof AlignmentProblems ? err.problems : [err.message];
+      skipped.push({ name: n.attrs.name?.trim() || `Alignment ${i + 1}`, reason: err.message, problems });
     }
   });
-  if (alignments.length === 0) {
-    fail(skipped.length === 1 ? skipped[0].reason : `No alignment in the file could be imported. ${skipped.map((s) => s.reason).join(' ')}`);
-  }
+  if (alignments.length === 0) throw new LandXmlAlignmentsError(skipped);
   return { units, linear_unit: linearUnit as string, alignments, skipped };
 }

@@ -4,6 +4,7 @@
  * fast-xml-parser (entity processing off) into a plain tree that keeps the order of child elements.
  */
 import { XMLParser, XMLValidator } from 'fast-xml-parser';
+import iconv from 'iconv-lite';
 
 /** One element: its local name (namespace prefix removed), attributes, child elements and text. */
 export interface XmlNode {
@@ -129,4 +130,52 @@ export function childrenNamed(node: XmlNode, name: string): XmlNode[] {
 /** The first child element named `name`, or undefined. */
 export function childNamed(node: XmlNode, name: string): XmlNode | undefined {
   return node.children.find((c) => c.name === name);
+}
+
+const DECLARED_ENCODING = /^<\?xml[^>]*?\bencoding\s*=\s*["']([A-Za-z0-9._:-]+)["']/;
+
+/**
+ * The encoding an XML file is written in: its byte-order mark, else the byte pattern of "<?" in
+ * UTF-16, else the `encoding` of its XML declaration (read as ASCII), else UTF-8 (the XML default).
+ */
+export function xmlEncodingOf(bytes: Uint8Array): { encoding: string; bom: number; declared: string | null } {
+  if (bytes[0] === 0xef && bytes[1] === 0xbb && bytes[2] === 0xbf) return { encoding: 'utf-8', bom: 3, declared: null };
+  if (bytes[0] === 0xff && bytes[1] === 0xfe) return { encoding: 'utf-16le', bom: 2, declared: null };
+  if (bytes[0] === 0xfe && bytes[1] === 0xff) return { encoding: 'utf-16be', bom: 2, declared: null };
+  if (bytes[0] === 0x3c && bytes[1] === 0x00 && bytes[2] === 0x3f && bytes[3] === 0x00) return { encoding: 'utf-16le', bom: 0, declared: null };
+  if (bytes[0] === 0x00 && bytes[1] === 0x3c && bytes[2] === 0x00 && bytes[3] === 0x3f) return { encoding: 'utf-16be', bom: 0, declared: null };
+  const head = String.fromCharCode(...bytes.subarray(0, 512)).trimStart();
+  const declared = DECLARED_ENCODING.exec(head)?.[1] ?? null;
+  return { encoding: declared ? declared.toLowerCase() : 'utf-8', bom: 0, declared };
+}
+
+/**
+ * Decodes the bytes of an uploaded XML file by its byte-order mark or declared encoding
+ * (UTF-8, UTF-16, ISO-8859-1, windows-1252 and the other single-byte code pages iconv-lite knows).
+ * @throws XmlReadError 415 when the bytes are not text in that encoding, or the encoding is unknown.
+ */
+export function decodeXmlBytes(bytes: Uint8Array): string {
+  const notText = (why: string) => new XmlReadError(415, `The file is not a text XML file (${why}). Choose a LandXML (.xml) file.`);
+  const { encoding, bom, declared } = xmlEncodingOf(bytes);
+  const body = bytes.subarray(bom);
+  let text: string;
+  if (encoding === 'utf-8' || encoding === 'utf8' || ((encoding === 'utf-16' || encoding === 'unicode') && bom === 0)) {
+    try {
+      text = new TextDecoder('utf-8', { fatal: true }).decode(body);
+    } catch {
+      throw notText(declared ? `it declares ${declared} but is not valid ${declared}` : 'it is not UTF-8 and declares no other encoding in its <?xml ?> line');
+    }
+  } else if (encoding === 'utf-16le' || encoding === 'utf-16be') {
+    try {
+      text = new TextDecoder(encoding, { fatal: true }).decode(body);
+    } catch {
+      throw notText(`it is not valid ${encoding.toUpperCase()}`);
+    }
+  } else if (iconv.encodingExists(encoding)) {
+    text = iconv.decode(Buffer.from(body), encoding);
+  } else {
+    throw notText(`it declares the encoding "${declared}", which Chordline does not read; save it as UTF-8`);
+  }
+  if (!/^\uFEFF?\s*</.test(text) || text.includes('\u0000')) throw notText('it does not start with an XML element');
+  return text;
 }

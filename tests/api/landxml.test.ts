@@ -29,7 +29,7 @@ async function upload(opts: { who?: Role; file?: Uint8Array | string; filename?:
     if (opts.file !== undefined) form.append('file', new Blob([typeof opts.file === 'string' ? opts.file : new Uint8Array(opts.file)], { type: opts.type ?? 'application/xml' }), opts.filename ?? 'alignment.xml');
     if (opts.units !== undefined) form.append('units', opts.units);
   }
-  const headers: Record<string, string> = {};
+  const headers: Record<string, string> = { origin: 'http://localhost:3000' };
   if (opts.who) headers.cookie = people[opts.who].cookie;
   const req = new NextRequest('http://localhost:3000/api/import/landxml', { method: 'POST', headers, body: form });
   const res = await landxml.POST(req, { params: Promise.resolve({}) });
@@ -83,10 +83,30 @@ describe('POST /api/import/landxml', () => {
     expect(await listBridges()).toHaveLength(before.length);
   });
 
-  it('says spirals are not supported yet (422)', async () => {
-    const res = await upload({ who: 'engineer', file: fixture('spiral-ft.xml') });
+  it('imports clothoid spirals, and says why no profile came with them', async () => {
+    const res = await upload({ who: 'engineer', file: fixture('spiral-ft.xml'), units: 'ft' });
+    expect(res.status, res.text).toBe(200);
+    // Written in the file: Spiral length 200, radiusStart INF, radiusEnd 1000, rot cw.
+    expect(res.json.alignment.elements[1]).toEqual({ type: 'spiral', length: 200, radius_start: null, radius_end: 1000, direction: 'right' });
+    expect(res.json.profile).toBeNull();
+    expect(res.json.alignments[0].profile_left_out[0]).toMatch(/no design profile/);
+  });
+
+  it('decodes a Latin-1 file by its declaration and reads its circular vertical curves', async () => {
+    const res = await upload({ who: 'engineer', file: fixture('bretelle-circ-m-latin1.xml'), units: 'm' });
+    expect(res.status, res.text).toBe(200);
+    expect(res.json.alignments[0].name).toBe('Bretelle Sud, échangeur Nord');
+    expect(res.json.alignments[0].notes.join(' ')).toMatch(/CircCurve at station 2\+420\.000 .* differ by at most/);
+  });
+
+  it('answers 422 with a list of problems per alignment when none can be imported', async () => {
+    const res = await upload({ who: 'engineer', file: fixture('several-problems-ft.xml') });
     expect(res.status).toBe(422);
-    expect(res.json.error).toMatch(/spirals are not supported yet/);
+    expect(res.json.error).toMatch(/"Ramp E" \(2 problems\), "Ramp F" \(4 problems\)/);
+    expect(res.json.fields['alignments.0.name']).toEqual(['Ramp E']);
+    expect(res.json.fields['alignments.0.problems']).toHaveLength(2);
+    expect(res.json.fields['alignments.1.name']).toEqual(['Ramp F']);
+    expect(res.json.fields['alignments.1.problems'][0]).toMatch(/Station equation at station 3\+45\.00/);
   });
 
   it('refuses a unit mismatch with the bridge (422)', async () => {

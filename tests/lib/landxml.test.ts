@@ -167,8 +167,11 @@ describe('LandXML import: refused files', () => {
     expect(parseLandXml(text).alignments[0].name).toBe('Creek & Mill &undefined; CL');
   });
 
-  it('says spirals are not supported yet', () => {
-    expectRefused(fixture('spiral-ft.xml'), 422, /spirals are not supported yet/);
+  it('imports a clothoid spiral after a tangent (radius INF at its start)', () => {
+    const els = parseLandXml(fixture('spiral-ft.xml')).alignments[0].alignment.elements;
+    // Written in the file: Line 200 ft, then Spiral length 200, radiusStart INF, radiusEnd 1000, rot cw.
+    expect(els.map((e) => e.type)).toEqual(['line', 'spiral']);
+    expect(els[1]).toEqual({ type: 'spiral', length: 200, radius_start: null, radius_end: 1000, direction: 'right' });
   });
 
   it('refuses text that is not well-formed XML with the line of the fault', () => {
@@ -202,11 +205,11 @@ describe('LandXML import: refused files', () => {
   });
 
   it('keeps the usable alignments of a file and names the ones it skipped', () => {
-    const text = fixture('two-ramps-m.xml').replace('<Line length="80.0">', '<Spiral length="80.0" rot="cw"><Start>0 0</Start></Spiral><Line length="80.0">');
+    const text = fixture('two-ramps-m.xml').replace('<Line length="80.0">', '<Spiral length="80.0" rot="cw" spiType="cubic"><Start>0 0</Start></Spiral><Line length="80.0">');
     const result = parseLandXml(text);
     expect(result.alignments.map((a) => a.name)).toEqual(['Ramp A']);
     expect(result.skipped[0]).toMatchObject({ name: 'Ramp K' });
-    expect(result.skipped[0].reason).toMatch(/spirals are not supported yet/);
+    expect(result.skipped[0].reason).toMatch(/a cubic spiral \(spiType="cubic"\); only clothoid spirals are read/);
   });
 });
 
