@@ -18,7 +18,11 @@ export function metricCopy(b: BridgeDescription): BridgeDescription {
       start_station: b.alignment.start_station * M,
       start_x: b.alignment.start_x * M,
       start_y: b.alignment.start_y * M,
-      elements: b.alignment.elements.map((e) => ({ ...e, length: e.length * M, ...('radius' in e ? { radius: e.radius * M } : {}) })),
+      elements: b.alignment.elements.map((e) => {
+        const r = e as { radius?: number; radius_start?: number | null; radius_end?: number | null };
+        const scaled = (v: number | null | undefined) => (typeof v === 'number' ? v * M : v);
+        return { ...e, length: e.length * M, ...(r.radius !== undefined ? { radius: r.radius * M } : {}), ...(r.radius_start !== undefined ? { radius_start: scaled(r.radius_start), radius_end: scaled(r.radius_end) } : {}) };
+      }),
     },
     profile: { pvis: b.profile.pvis.map((p) => ({ ...p, station: p.station * M, elevation: p.elevation * M, ...(p.curve_length ? { curve_length: p.curve_length * M } : {}) })) },
     cross_slopes: b.cross_slopes.map((c) => ({ ...c, station: c.station * M })),
