@@ -11,7 +11,7 @@ import type { Units } from '@/lib/units';
 /** Largest file read in the browser; the server refuses anything over its own limit too. */
 const MAX_FILE_BYTES = 900_000;
 
-type Stored = { import_id: number; stored: number; replaced: number; revision: number };
+type Stored = { import_id: number; stored: number; replaced: number; revision: number; delimiter: string };
 
 /**
  * Top-of-girder survey upload: the file is checked row by row first (POST …/survey/preview writes
@@ -119,7 +119,7 @@ export default function SurveyImportForm({ bridgeId, units }: { bridgeId: number
       {stored ? (
         <div role="status" className="mt-4 rounded-md border border-pass-600 bg-pass-100 p-3 text-sm text-pass-700">
           Stored {stored.stored} surveyed {stored.stored === 1 ? 'point' : 'points'}
-          {stored.replaced > 0 ? ` (${stored.replaced} replaced an earlier value)` : ''}. The buildups and drops from girder top now use them.{' '}
+          {stored.replaced > 0 ? ` (${stored.replaced} replaced an earlier value)` : ''}, read with cells separated by {stored.delimiter}. The buildups and drops from girder top now use them.{' '}
           <Link href={`/bridges/${bridgeId}/offsets`} className="font-semibold underline">
             Open the offset table
           </Link>

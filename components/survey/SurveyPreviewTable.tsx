@@ -8,6 +8,8 @@ export type SurveyPreviewJson = {
   revision: number;
   units: Units;
   header: boolean;
+  delimiter: string;
+  decimal_comma: boolean;
   file_problems: string[];
   rows: { line: number; girder: string; span: number | null; point: number | null; elevation: number | null; problems: string[]; replaces: number | null }[];
   summary: { rows: number; good: number; bad: number; replacing: number };
@@ -26,6 +28,10 @@ export default function SurveyPreviewTable({ preview, filename }: { preview: Sur
           {filename}: {summary.rows} {summary.rows === 1 ? 'row' : 'rows'} checked against revision {preview.revision} — {summary.good} good,{' '}
           <span className={summary.bad > 0 ? 'text-fail-600' : ''}>{summary.bad} with problems</span>
           {summary.replacing > 0 ? `, ${summary.replacing} would replace a stored value` : ''}. Nothing has been stored yet.
+        </p>
+        <p className="mt-1 text-concrete-700" data-testid="survey-delimiter">
+          Cells separated by {preview.delimiter}
+          {preview.decimal_comma ? '; a decimal comma in an elevation is read as a decimal point' : ''}.
         </p>
         {preview.file_problems.map((p) => (
           <p key={p} className="mt-1 text-fail-600">

@@ -10,7 +10,7 @@ import { db } from '@/lib/db/connection';
 import { HttpError } from '@/lib/api/errors';
 import type { SessionUser } from '@/lib/auth/session';
 import { DEFAULT_POINTS_PER_SPAN, type BridgeDescription } from '@/lib/geometry';
-import { parseSurveyCsv, type SurveyCsvReport, type SurveyFraming } from '@/lib/import/survey-csv';
+import { delimiterName, parseSurveyCsv, type SurveyCsvReport, type SurveyFraming } from '@/lib/import/survey-csv';
 import { getRevisionDescription } from './bridges';
 import { audit } from './audit';
 import { refreshStatus } from './bridge-status';
@@ -39,6 +39,10 @@ export type SurveyPreview = {
   revision: number;
   units: Units;
   header: boolean;
+  /** The cell separator found in the file, in words: "commas", "semicolons" or "tabs". */
+  delimiter: string;
+  /** True when decimal commas were read as decimal points (files separated by semicolons or tabs). */
+  decimal_comma: boolean;
   file_problems: string[];
   rows: SurveyPreviewRow[];
   summary: { rows: number; good: number; bad: number; replacing: number };
@@ -163,6 +167,8 @@ async function check(bridge: Bridge, csv: string): Promise<{ report: SurveyCsvRe
       revision: bridge.currentRevision,
       units: bridge.units,
       header: report.header,
+      delimiter: delimiterName(report.delimiter),
+      decimal_comma: report.decimalComma,
       file_problems: report.fileProblems,
       rows,
       summary: { rows: rows.length, good: report.good, bad: report.bad, replacing: rows.filter((r) => r.problems.length === 0 && r.replaces !== null).length },
@@ -189,7 +195,7 @@ function reportFields(preview: SurveyPreview): Record<string, string[]> {
  * nothing written). A point already surveyed gets the new value; the old row stays as history,
  * stamped with the time it was replaced. One transaction; one audit event.
  */
-export async function commitSurvey(user: SessionUser, id: string, input: SurveyUpload): Promise<{ import_id: number; stored: number; replaced: number; revision: number }> {
+export async function commitSurvey(user: SessionUser, id: string, input: SurveyUpload): Promise<{ import_id: number; stored: number; replaced: number; revision: number; delimiter: string }> {
   const bridge = await findBridge(id);
   if (input.revision !== undefined && input.revision !== bridge.currentRevision) {
     throw new HttpError(409, `The rows were checked against revision ${input.revision}, but the bridge is now at revision ${bridge.currentRevision}. Check the file again.`);
@@ -228,10 +234,10 @@ export async function commitSurvey(user: SessionUser, id: string, input: SurveyU
       'survey.import',
       'bridge',
       bridge.id,
-      { import_id: record.id, filename: input.filename, revision: bridge.currentRevision, rows: report.rows.length, replaced },
+      { import_id: record.id, filename: input.filename, revision: bridge.currentRevision, rows: report.rows.length, replaced, delimiter: preview.delimiter },
       transaction,
     );
-    return { import_id: record.id, stored: report.rows.length, replaced, revision: bridge.currentRevision };
+    return { import_id: record.id, stored: report.rows.length, replaced, revision: bridge.currentRevision, delimiter: preview.delimiter };
   });
   // Surveyed points add level-bar readings to check, which changes what passes.
   await refreshStatus(bridge.id);

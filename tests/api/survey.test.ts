@@ -103,6 +103,22 @@ describe('top-of-girder survey import', () => {
     expect(at(after, 'G5', 1, 10).top_of_girder).toBeCloseTo(at(before, 'G5', 1, 10).top_of_girder as number, 9);
   });
 
+  // Common practice: spreadsheets in a decimal-comma locale save CSV with semicolons between cells.
+  it('a semicolon file with decimal commas is read, says its separator, and stores the values it shows', async () => {
+    const id = await newBridge('Survey semicolons');
+    const csv = 'Girder;Span;Point;Elevation\r\nG1;2;5;254,40\r\n"G5";2;5;"254,10"\r\n';
+    const pre = await call(preview.POST, { method: 'POST', cookie: people.engineer.cookie, params: { id }, body: { csv } });
+    expect(pre.status).toBe(200);
+    expect(pre.json).toMatchObject({ delimiter: 'semicolons', decimal_comma: true, summary: { rows: 2, good: 2, bad: 0 } });
+    expect(pre.json.rows.map((r: { elevation: number }) => r.elevation)).toEqual([254.4, 254.1]);
+    const res = await call(survey.POST, { method: 'POST', cookie: people.inspector.cookie, params: { id }, body: { csv, filename: 'metric-locale.csv' } });
+    expect(res.status, res.text).toBe(201);
+    expect(res.json).toMatchObject({ stored: 2, delimiter: 'semicolons' });
+    expect(at(await table(id), 'G5', 2, 5).top_of_girder).toBeCloseTo(254.1, 9);
+    const comma = await call(preview.POST, { method: 'POST', cookie: people.engineer.cookie, params: { id }, body: { csv: 'G1,2,5,254.40' } });
+    expect(comma.json).toMatchObject({ delimiter: 'commas', decimal_comma: false });
+  });
+
   it('a new import of the same point replaces the value and keeps the old one as history, with who and when', async () => {
     const id = await newBridge('Survey replace');
     expect((await call(survey.POST, { method: 'POST', cookie: people.inspector.cookie, params: { id }, body: { csv: 'G1,3,8,255.00', filename: 'first.csv' } })).status).toBe(201);

@@ -70,3 +70,58 @@ describe('survey CSV rows', () => {
     expect(odd.fileProblems[0]).toMatch(/column names/i);
   });
 });
+
+describe('survey CSV separators and quoting', () => {
+  // RFC 4180 §2 rule 6: fields containing line breaks are enclosed in double quotes. The row after a
+  // two-line cell starts two lines further on, as a text editor shows it.
+  it('reads a quoted cell that runs over several lines and keeps the line numbers of later rows', () => {
+    const text = 'girder,span,point,elevation\n"G1",1,0,250.10\n"G\n1",1,1,250.20\nG1,1,2,250.30\n';
+    const r = parseSurveyCsv(text, framing);
+    expect(r.delimiter).toBe(',');
+    expect(r.rows.map((x) => x.line)).toEqual([2, 3, 5]);
+    expect(r.rows[1].problems.join(' ')).toMatch(/unknown girder "G\n1"/i);
+    expect(r.rows[2].problems).toEqual([]);
+    expect(r.rows[2].elevation).toBeCloseTo(250.3, 9);
+  });
+
+  // Common practice: spreadsheets set to a locale with a decimal comma (most of Europe) save "CSV" with
+  // semicolons between cells and commas in numbers.
+  it('reads semicolon-separated rows with decimal commas and says which separator it found', () => {
+    const text = '\uFEFFGirder;Span;Point;Elevation\r\nG1;1;0;76,325\r\nG1;1;1;"76,410"\r\nG2;1;0;76.5\r\n';
+    const r = parseSurveyCsv(text, framing);
+    expect(r.delimiter).toBe(';');
+    expect(r.decimalComma).toBe(true);
+    expect(r.header).toBe(true);
+    expect(r.bad).toBe(0);
+    expect(r.rows.map((x) => x.elevation)).toEqual([76.325, 76.41, 76.5]);
+  });
+
+  it('refuses thousands separators in a semicolon file rather than guessing', () => {
+    const r = parseSurveyCsv('G1;1;0;1.250,00\nG1;1;1;1,250,00\nG1;1;2;12,5\n', framing);
+    expect(r.rows[0].problems.join(' ')).toMatch(/elevation "1\.250,00" is not a number/i);
+    expect(r.rows[1].problems.join(' ')).toMatch(/elevation "1,250,00" is not a number/i);
+    expect(r.rows[2].problems).toEqual([]);
+  });
+
+  it('reads tab-separated rows', () => {
+    const r = parseSurveyCsv('G3\t2\t5\t251,75\nG3\t2\t6\t251.80\n', framing);
+    expect(r.delimiter).toBe('\t');
+    expect(r.rows.map((x) => [x.girder, x.span, x.point, x.elevation])).toEqual([
+      ['G3', 2, 5, 251.75],
+      ['G3', 2, 6, 251.8],
+    ]);
+  });
+
+  it('keeps commas as the separator, and decimal commas refused, in a comma file', () => {
+    const r = parseSurveyCsv('G1,1,0,"250,5"\n', framing);
+    expect(r.delimiter).toBe(',');
+    expect(r.decimalComma).toBe(false);
+    expect(r.rows[0].problems.join(' ')).toMatch(/elevation "250,5" is not a number/i);
+  });
+
+  it('reports a quoted cell that is never closed', () => {
+    const r = parseSurveyCsv('G1,1,0,250.1\nG1,1,1,"250.2\nG1,1,2,250.3\n', framing);
+    expect(r.rows[1].line).toBe(2);
+    expect(r.rows[1].problems.join(' ')).toMatch(/quoted cell is not closed/i);
+  });
+});
