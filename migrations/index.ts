@@ -3,6 +3,7 @@ import * as m0001 from './0001-initial';
 import * as m0002 from './0002-field-work';
 import * as m0003 from './0003-girder-survey';
 import * as m0004 from './0004-check-client-key';
+import * as m0006 from './0006-session-security';
 import * as m0005 from './0005-bridge-record';
 import * as m0007 from './0007-attachment-client-key';
 
@@ -21,6 +22,7 @@ export const migrations: Migration[] = [
   { name: '0002-field-work', ...m0002 },
   { name: '0003-girder-survey', ...m0003 },
   { name: '0004-check-client-key', ...m0004 },
+  { name: '0006-session-security', ...m0006 },
   { name: '0005-bridge-record', ...m0005 },
   { name: '0007-attachment-client-key', ...m0007 },
 ];

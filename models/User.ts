@@ -7,6 +7,12 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare name: string;
   declare role: Role;
   declare passwordHash: string;
+  /** Every session token carries the version it was issued under; a bump ends all earlier sessions. */
+  declare sessionVersion: CreationOptional<number>;
+  declare disabledAt: CreationOptional<Date | null>;
+  /** Removed accounts stay as rows (their checks and revisions keep their author) but never sign in. */
+  declare removedAt: CreationOptional<Date | null>;
+  declare lastSeenAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -18,6 +24,10 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         name: { type: DataTypes.STRING(120), allowNull: false },
         role: { type: DataTypes.STRING(20), allowNull: false },
         passwordHash: { type: DataTypes.STRING(100), allowNull: false, field: 'password_hash' },
+        sessionVersion: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0, field: 'session_version' },
+        disabledAt: { type: DataTypes.DATE, allowNull: true, field: 'disabled_at' },
+        removedAt: { type: DataTypes.DATE, allowNull: true, field: 'removed_at' },
+        lastSeenAt: { type: DataTypes.DATE, allowNull: true, field: 'last_seen_at' },
         createdAt: { type: DataTypes.DATE, field: 'created_at' },
         updatedAt: { type: DataTypes.DATE, field: 'updated_at' },
       },

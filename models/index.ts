@@ -9,10 +9,12 @@ import { SignOff } from './SignOff';
 import { OutboxMessage } from './OutboxMessage';
 import { GirderSurvey } from './GirderSurvey';
 import { SurveyImport } from './SurveyImport';
+import { SignInFailure } from './SignInFailure';
 
 export { User, Bridge, GeometryRevision, AuditEvent };
 export { FieldCheck, Attachment, SignOff, OutboxMessage };
 export { GirderSurvey, SurveyImport };
+export { SignInFailure };
 
 /** Binds every model to the connection and declares the associations. Call once per connection. */
 export function initModels(sequelize: Sequelize): void {
@@ -41,4 +43,7 @@ export function initModels(sequelize: Sequelize): void {
   GirderSurvey.initModel(sequelize);
   SurveyImport.belongsTo(User, { foreignKey: 'userId', as: 'user' });
   GirderSurvey.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+
+  // Sign-in throttle (issue 11).
+  SignInFailure.initModel(sequelize);
 }

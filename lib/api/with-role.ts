@@ -4,6 +4,7 @@ import { roleAllows, type Role } from '@/lib/auth/roles';
 import { sessionUserFromRequest, type SessionUser } from '@/lib/auth/session';
 import { errorResponse, HttpError, invalidInput, jsonError } from './errors';
 import { readJson } from './body';
+import { crossSiteReason, UNSAFE_METHODS } from './origin';
 
 type Access = 'anyone' | 'signed-in' | readonly Role[];
 
@@ -23,6 +24,13 @@ export function withRole<P = Record<string, never>, S extends z.ZodType | undefi
 ): (req: NextRequest, route: RouteContext<P>) => Promise<Response> {
   return async (req, route) => {
     try {
+      // Cross-site request forgery: anything that changes data must come from the app's own origin.
+      const crossSite = crossSiteReason(req);
+      if (crossSite) return jsonError(403, crossSite);
+      // A body of another type is refused; no body at all is left to readJson (400, "send JSON").
+      if (schema && UNSAFE_METHODS.has(req.method) && req.body !== null && !isJson(req)) {
+        return jsonError(415, 'Send the body as JSON with the header Content-Type: application/json.');
+      }
       // Open routes never look at the session: nothing there depends on who asks.
       const user = access === 'anyone' ? null : await sessionUserFromRequest(req);
       if (access !== 'anyone') {
@@ -38,11 +46,21 @@ export function withRole<P = Record<string, never>, S extends z.ZodType | undefi
         body = parsed.data;
       }
       const params = ((await route?.params) ?? {}) as P;
-      return await handler({ req, user: user as SessionUser, params, body: body as never });
+      return noStore(await handler({ req, user: user as SessionUser, params, body: body as never }), access);
     } catch (err) {
-      return errorResponse(err);
+      return noStore(errorResponse(err), access);
     }
   };
+}
+
+function isJson(req: NextRequest): boolean {
+  return /^application\/json\s*(;|$)/i.test(req.headers.get('content-type') ?? '');
+}
+
+/** Answers that depend on who asked are never stored by the browser or a proxy (they outlive sign-out). */
+function noStore(res: Response, access: Access): Response {
+  if (access !== 'anyone') res.headers.set('Cache-Control', 'no-store');
+  return res;
 }
 
 /** A 200 JSON answer; handlers return whitelisted plain objects only. */

@@ -1,19 +1,20 @@
 /**
  * Server-side session helpers for pages and layouts (never imported by client components). The
- * user is read back from the database so a changed role or a removed account shows at once.
+ * session is checked exactly as the API checks it (session version, disabled or removed account, idle
+ * timeout, 12-hour limit), so a page never shows what the API would refuse.
  */
 import 'server-only';
-import { getServerSession } from 'next-auth';
+import { cookies, headers } from 'next/headers';
+import { NextRequest } from 'next/server';
 import { redirect } from 'next/navigation';
-import { authOptions } from '@/lib/auth/options';
-import { loadSessionUser, type SessionUser } from '@/lib/auth/session';
+import { sessionUserFromRequest, type SessionUser } from '@/lib/auth/session';
 
-/** The signed-in user, or null when there is no session or its account is gone. */
+/** The signed-in user, or null when there is no live session. */
 export async function currentUser(): Promise<SessionUser | null> {
-  const session = await getServerSession(authOptions());
-  const id = Number((session?.user as { id?: unknown } | undefined)?.id);
-  if (!session || !Number.isInteger(id)) return null;
-  return loadSessionUser(id);
+  const [h, c] = await Promise.all([headers(), cookies()]);
+  const forwarded = new Headers(h);
+  forwarded.set('cookie', c.toString());
+  return sessionUserFromRequest(new NextRequest('http://localhost/', { headers: forwarded }));
 }
 
 /**

@@ -4,7 +4,9 @@ import { db } from '@/lib/db/connection';
 import { HttpError } from '@/lib/api/errors';
 import { hashPassword } from '@/lib/auth/password';
 import { ROLES } from '@/lib/auth/roles';
-import { forgetSessionUser, type SessionUser } from '@/lib/auth/session';
+import { endSessions, forgetSessionUser, type SessionUser } from '@/lib/auth/session';
+import { clearFailures } from '@/lib/auth/throttle';
+import { cleanName } from '@/lib/text/clean';
 import { audit } from './audit';
 
 const password = z.string().min(10, 'Use at least 10 characters.').max(200, 'Keep the password under 200 characters.');
@@ -12,31 +14,51 @@ const role = z.enum(ROLES, { error: `Role must be one of: ${ROLES.join(', ')}.` 
 
 export const createUserSchema = z.object({
   email: z.email('Enter a valid e-mail address.').trim().toLowerCase(),
-  name: z.string().trim().min(1, 'Enter a name.').max(120, 'Keep the name under 120 characters.'),
+  name: z.string().transform(cleanName).pipe(z.string().min(1, 'Enter a name.').max(120, 'Keep the name under 120 characters.')),
   role,
   password,
 });
 
 export const updateUserSchema = z
-  .object({ name: z.string().trim().min(1, 'Enter a name.').max(120).optional(), role: role.optional(), password: password.optional() })
-  .refine((v) => v.name !== undefined || v.role !== undefined || v.password !== undefined, { message: 'Change the name, the role or the password.' });
+  .object({
+    name: z.string().transform(cleanName).pipe(z.string().min(1, 'Enter a name.').max(120)).optional(),
+    role: role.optional(),
+    password: password.optional(),
+    disabled: z.boolean({ error: 'disabled must be true or false.' }).optional(),
+  })
+  .refine((v) => v.name !== undefined || v.role !== undefined || v.password !== undefined || v.disabled !== undefined, {
+    message: 'Change the name, the role, the password or whether the account is disabled.',
+  });
 
 /** The only shape a user ever leaves the server in: no password hash. */
-export type PublicUser = { id: number; email: string; name: string; role: string; createdAt: string };
+export type PublicUser = { id: number; email: string; name: string; role: string; createdAt: string; disabled: boolean; lastSeenAt: string | null };
 
 function publicUser(u: User): PublicUser {
-  return { id: u.id, email: u.email, name: u.name, role: u.role, createdAt: u.createdAt.toISOString() };
+  return {
+    id: u.id,
+    email: u.email,
+    name: u.name,
+    role: u.role,
+    createdAt: u.createdAt.toISOString(),
+    disabled: u.disabledAt != null,
+    lastSeenAt: u.lastSeenAt ? u.lastSeenAt.toISOString() : null,
+  };
 }
 
+/** Every account that has not been removed (removed ones stay only as the author of their work). */
 export async function listUsers(): Promise<PublicUser[]> {
   await db();
-  return (await User.findAll({ order: [['email', 'ASC']] })).map(publicUser);
+  return (await User.findAll({ where: { removedAt: null }, order: [['email', 'ASC']] })).map(publicUser);
 }
 
 export async function createUser(actor: SessionUser | null, input: z.infer<typeof createUserSchema>): Promise<PublicUser> {
   await db();
-  if (await User.findOne({ where: { email: input.email } })) {
-    throw new HttpError(400, 'A user with that e-mail address already exists.', { email: ['Already in use.'] });
+  const existing = await User.findOne({ where: { email: input.email } });
+  if (existing) {
+    const removed = existing.removedAt != null;
+    throw new HttpError(400, removed ? 'That e-mail address belonged to a removed account; use another address.' : 'A user with that e-mail address already exists.', {
+      email: [removed ? 'Belonged to a removed account.' : 'Already in use.'],
+    });
   }
   const user = await User.create({ email: input.email, name: input.name, role: input.role, passwordHash: await hashPassword(input.password) });
   await audit(actor?.id ?? null, 'user.create', 'user', user.id, { email: user.email, role: user.role });
@@ -45,18 +67,19 @@ export async function createUser(actor: SessionUser | null, input: z.infer<typeo
 
 export async function updateUser(actor: SessionUser, id: string, input: z.infer<typeof updateUserSchema>): Promise<PublicUser> {
   await db();
-  const n = Number(id);
-  const user = Number.isInteger(n) && n > 0 ? await User.findByPk(n) : null;
-  if (!user) throw new HttpError(404, 'There is no user with that id.');
+  const user = await findLiveUser(id);
   if (user.id === actor.id && input.role && input.role !== 'admin') {
     throw new HttpError(400, 'You cannot take the administrator role away from yourself; ask another administrator.', { role: ['Keep your own role.'] });
+  }
+  if (user.id === actor.id && input.disabled) {
+    throw new HttpError(400, 'You cannot disable your own account; ask another administrator.', { disabled: ['Keep your own account enabled.'] });
   }
   const changed: string[] = [];
   if (input.name !== undefined) {
     user.name = input.name;
     changed.push('name');
   }
-  if (input.role !== undefined) {
+  if (input.role !== undefined && input.role !== user.role) {
     user.role = input.role;
     changed.push('role');
   }
@@ -64,8 +87,39 @@ export async function updateUser(actor: SessionUser, id: string, input: z.infer<
     user.passwordHash = await hashPassword(input.password);
     changed.push('password');
   }
+  if (input.disabled !== undefined && input.disabled !== (user.disabledAt != null)) {
+    user.disabledAt = input.disabled ? new Date() : null;
+    changed.push(input.disabled ? 'disabled' : 'enabled');
+  }
+  // A new password, a new role or disabling ends every session the account had.
+  if (changed.some((c) => c === 'role' || c === 'password' || c === 'disabled')) user.sessionVersion += 1;
   await user.save();
   forgetSessionUser(user.id);
+  // A reset password also lifts the sign-in slowdown on the account.
+  if (changed.includes('password')) await clearFailures(user.email);
   await audit(actor.id, 'user.update', 'user', user.id, { changed, role: user.role });
   return publicUser(user);
+}
+
+async function findLiveUser(id: string): Promise<User> {
+  const n = Number(id);
+  const user = Number.isInteger(n) && n > 0 ? await User.findByPk(n) : null;
+  if (!user || user.removedAt) throw new HttpError(404, 'There is no user with that id.');
+  return user;
+}
+
+/**
+ * Removes an account: it can no longer sign in and every session ends, but its row stays (marked
+ * removed, left out of the user list) so the checks, revisions, photos and audit entries it made keep
+ * their author. Administrators cannot remove themselves.
+ */
+export async function removeUser(actor: SessionUser, id: string): Promise<{ removed: true; id: number }> {
+  await db();
+  const user = await findLiveUser(id);
+  if (user.id === actor.id) throw new HttpError(400, 'You cannot remove your own account; ask another administrator.');
+  user.removedAt = new Date();
+  await user.save();
+  await endSessions(user.id);
+  await audit(actor.id, 'user.remove', 'user', user.id, { email: user.email });
+  return { removed: true, id: user.id };
 }

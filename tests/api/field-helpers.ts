@@ -25,7 +25,11 @@ export async function multipartRequest(
   for (const [k, v] of Object.entries(fields)) form.append(k, v);
   const encoded = new Request('http://localhost:3000/x', { method: 'POST', body: form });
   const body = Buffer.from(await encoded.arrayBuffer());
-  const headers: Record<string, string> = { 'content-type': encoded.headers.get('content-type') as string, 'content-length': String(body.byteLength) };
+  const headers: Record<string, string> = {
+    'content-type': encoded.headers.get('content-type') as string,
+    'content-length': String(body.byteLength),
+    origin: 'http://localhost:3000',
+  };
   if (cookie) headers.cookie = cookie;
   return new NextRequest(new URL(url, 'http://localhost:3000'), { method: 'POST', headers, body });
 }

@@ -10,6 +10,7 @@ import * as revisions from '@/app/api/bridges/[id]/revisions/route';
 import * as offsets from '@/app/api/bridges/[id]/offsets/route';
 import * as offsetsCsv from '@/app/api/bridges/[id]/offsets.csv/route';
 import * as users from '@/app/api/admin/users/route';
+import { createUser } from '@/lib/services/users';
 import * as user from '@/app/api/admin/users/[id]/route';
 import { createBridge, getBridge } from '@/lib/services/bridges';
 import { call, cookieOf, EVERYONE, makeUsers, type TestUser, type Who } from './helpers';
@@ -95,6 +96,13 @@ const matrix: Record<string, Case> = {
     handler: user.PATCH,
     expect: row(401, 403, 403, 403, 200),
     setup: async () => ({ params: { id: String(people.crew.id) }, body: { name: 'Cal Renamed' } }),
+  },
+  'DELETE /api/admin/users/[id]': {
+    handler: user.DELETE,
+    expect: row(401, 403, 403, 403, 200),
+    setup: async () => ({
+      params: { id: String((await createUser(null, { email: `gone-${++fresh}@test.invalid`, name: 'Leaving', role: 'crew', password: 'long-enough-password' })).id) },
+    }),
   },
   // Top-of-girder survey (issue 4, part B): engineer and inspector import; everyone signed in reads.
   'GET /api/bridges/[id]/survey': { handler: surveyRoute.GET, expect: READ, setup: async () => ({ params: { id: await newBridge() } }) },

@@ -1,14 +1,18 @@
 import NextAuth from 'next-auth';
 import type { NextRequest } from 'next/server';
 import { authOptions } from '@/lib/auth/options';
-import { lockedResponse } from '@/lib/auth/locked-response';
+import { throttleResponse } from '@/lib/auth/throttle-response';
+import { crossSiteReason } from '@/lib/api/origin';
+import { jsonError } from '@/lib/api/errors';
 
 type Ctx = { params: Promise<{ nextauth: string[] }> };
 
 async function handle(req: NextRequest, ctx: Ctx) {
-  const locked = await lockedResponse(req);
-  if (locked) return locked;
-  return NextAuth(authOptions())(req, ctx);
+  const crossSite = crossSiteReason(req);
+  if (crossSite) return jsonError(403, crossSite);
+  const throttled = await throttleResponse(req);
+  if (throttled) return throttled;
+  return NextAuth(authOptions(req.headers))(req, ctx);
 }
 
 export { handle as GET, handle as POST };

@@ -11,6 +11,8 @@ type Params = Promise<{ id: string }>;
 
 export async function generateMetadata({ params }: { params: Params }): Promise<Metadata> {
   const { id } = await params;
+  // The session first: a signed-out request gets the sign-in redirect, never the bridge's name.
+  await requireUser(`/bridges/${id}/edit`);
   try {
     const { bridge } = await loadBridge(id);
     return { title: `Edit geometry · ${bridge.name}` };
