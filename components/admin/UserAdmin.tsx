@@ -31,6 +31,9 @@ export default function UserAdmin({ selfId }: { selfId: number }) {
                 <th scope="col" className="px-4 py-3 font-semibold">
                   Password
                 </th>
+                <th scope="col" className="px-4 py-3 font-semibold">
+                  Access
+                </th>
               </tr>
             </thead>
             <tbody>

@@ -6,8 +6,9 @@ import { ROLES, ROLE_LABELS, isRole } from '@/lib/auth/roles';
 import { ApiError, sendJson } from '@/lib/client/api-client';
 import type { PublicUserRow } from '@/components/admin/public-user';
 import { dateTimeText } from '@/lib/units';
+import UserAccessControls from '@/components/admin/UserAccessControls';
 
-/** One user: change the role, or set a new password (PATCH /api/admin/users/[id]). */
+/** One user: change the role, set a new password (PATCH /api/admin/users/[id]), disable or remove the account. */
 export default function UserRow({ user, isSelf }: { user: PublicUserRow; isSelf: boolean }) {
   const id = useId();
   const [role, setRole] = useState(user.role);
@@ -43,9 +44,13 @@ export default function UserRow({ user, isSelf }: { user: PublicUserRow; isSelf:
         <div className="font-semibold text-concrete-900">
           {user.name}
           {isSelf ? <span className="ml-2 text-xs font-normal text-concrete-600">(you)</span> : null}
+          {user.disabled ? <span className="ml-2 rounded bg-fail-100 px-1.5 py-0.5 text-xs font-semibold text-fail-600">Disabled</span> : null}
         </div>
         <div className="text-sm text-concrete-600">{user.email}</div>
-        <div className="text-xs text-concrete-500">Added {dateTimeText(user.createdAt)}</div>
+        <div className="text-xs text-concrete-500">
+          Added {dateTimeText(user.createdAt)}
+          {user.lastSeenAt ? ` · last seen ${dateTimeText(user.lastSeenAt)}` : ''}
+        </div>
       </td>
       <td className="px-4 py-3">
         <form
@@ -147,6 +152,9 @@ export default function UserRow({ user, isSelf }: { user: PublicUserRow; isSelf:
             {done}
           </p>
         ) : null}
+      </td>
+      <td className="px-4 py-3">
+        <UserAccessControls user={user} isSelf={isSelf} />
       </td>
     </tr>
   );
