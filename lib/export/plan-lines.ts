@@ -5,7 +5,18 @@
  * girder as drawn (a chord, or a curved girder as a fitted polyline) and every exterior girder point
  * with its edge point. Pure; the DXF writer turns it into entities.
  */
-import { bentLinePoint, createAlignment, directionOf, rightNormalOf, type Alignment, type BridgeDescription, type OffsetTable, type PlanPoint } from '@/lib/geometry';
+import {
+  bentLinePoint,
+  createAlignment,
+  directionOf,
+  edgeSpecOffsetAt,
+  rightNormalOf,
+  type Alignment,
+  type BridgeDescription,
+  type EdgeOffsetSpec,
+  type OffsetTable,
+  type PlanPoint,
+} from '@/lib/geometry';
 
 export interface PlanTick {
   station: number;
@@ -33,22 +44,10 @@ const SAG = { ft: 0.001, m: 0.0003 } as const;
 /** Station tick spacing: major (labelled) and minor, bridge units (common practice). */
 export const TICKS = { ft: { major: 100, minor: 20 }, m: { major: 20, minor: 5 } } as const;
 
-type Edge = BridgeDescription['deck']['left_edge_offset'] | readonly { station: number; offset: number }[];
+type Edge = EdgeOffsetSpec;
 
-/** Offset of a deck edge at a station: constant, or linear between listed stations (data contract, "deck"). */
-export function edgeOffset(spec: Edge, station: number): number {
-  if (typeof spec === 'number') return spec;
-  const rows = spec as readonly { station: number; offset: number }[];
-  if (station <= rows[0].station) return rows[0].offset;
-  for (let i = 1; i < rows.length; i++) {
-    if (station <= rows[i].station) {
-      const a = rows[i - 1];
-      const b = rows[i];
-      return a.offset + ((station - a.station) / (b.station - a.station)) * (b.offset - a.offset);
-    }
-  }
-  return rows[rows.length - 1].offset;
-}
+/** Offset of a deck edge at a station (the engine's reading of the contract: constant, or linear between listed stations). */
+const edgeOffset = (spec: Edge, station: number) => edgeSpecOffsetAt(spec, station);
 
 /** Stations along the alignment between s0 and s1 close enough that chords stay within `sag` of every element. */
 function sampleStations(bridge: BridgeDescription, s0: number, s1: number, sag: number): number[] {

@@ -21,6 +21,11 @@ import * as fieldAttachments from '@/app/api/bridges/[id]/attachments/route';
 import * as fieldAttachment from '@/app/api/attachments/[id]/route';
 import * as fieldSendSheet from '@/app/api/bridges/[id]/send-sheet/route';
 import * as fieldSheetCsv from '@/app/api/bridges/[id]/field-sheet.csv/route';
+// Exports: PDF sheets, DXF plan, LandXML out (issue 15).
+import * as exportOffsetsPdf from '@/app/api/bridges/[id]/offsets.pdf/route';
+import * as exportSheetPdf from '@/app/api/bridges/[id]/field-sheet.pdf/route';
+import * as exportPlanDxf from '@/app/api/bridges/[id]/plan.dxf/route';
+import * as exportAlignmentXml from '@/app/api/bridges/[id]/alignment.xml/route';
 import * as fieldSignoffs from '@/app/api/bridges/[id]/signoffs/route';
 import * as fieldTolerances from '@/app/api/bridges/[id]/tolerances/route';
 import * as fieldAudit from '@/app/api/bridges/[id]/audit/route';
@@ -146,6 +151,10 @@ const matrix: Record<string, Case> = {
     setup: async () => ({ params: { id: await newBridge() }, body: { to: ['matrix@example.com'], span: 1 } }),
   },
   'GET /api/bridges/[id]/field-sheet.csv': { handler: fieldSheetCsv.GET, expect: READ, setup: async () => ({ params: { id: await newBridge() } }) },
+  'GET /api/bridges/[id]/offsets.pdf': { handler: exportOffsetsPdf.GET, expect: READ, setup: async () => ({ params: { id: await newBridge() } }) },
+  'GET /api/bridges/[id]/field-sheet.pdf': { handler: exportSheetPdf.GET, expect: READ, setup: async () => ({ params: { id: await newBridge() } }) },
+  'GET /api/bridges/[id]/plan.dxf': { handler: exportPlanDxf.GET, expect: READ, setup: async () => ({ params: { id: await newBridge() } }) },
+  'GET /api/bridges/[id]/alignment.xml': { handler: exportAlignmentXml.GET, expect: READ, setup: async () => ({ params: { id: await newBridge() } }) },
   'GET /api/bridges/[id]/signoffs': { handler: fieldSignoffs.GET, expect: READ, setup: async () => ({ params: { id: await newBridge() } }) },
   // Nothing checked yet on a new bridge: the role passes and the sign-off is refused as incomplete.
   'POST /api/bridges/[id]/signoffs': {
