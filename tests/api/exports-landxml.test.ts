@@ -94,8 +94,8 @@ async function roundTrip(description: BridgeDescription) {
   expect(bearingNear(got.alignment.start_bearing_deg, want.start_bearing_deg), `${got.alignment.start_bearing_deg}`).toBe(true);
   expect(got.alignment.elements.length).toBe(want.elements.length);
   got.alignment.elements.forEach((e, i) => {
-    const w = want.elements[i] as Record<string, unknown>;
-    const g = e as Record<string, unknown>;
+    const w = want.elements[i] as unknown as Record<string, unknown>;
+    const g = e as unknown as Record<string, unknown>;
     expect(g.type).toBe(w.type);
     for (const key of ['length', 'radius', 'radius_start', 'radius_end'] as const) {
       if (w[key] === undefined) continue;
