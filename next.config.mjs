@@ -20,7 +20,7 @@ const nextConfig = {
   // Tests build into their own folder so a running `npm start` is not disturbed.
   distDir: process.env.NEXT_DIST_DIR || '.next',
   // esbuild (and esbuild-wasm, which @serwist/turbopack names) bundle the service worker at build time.
-  serverExternalPackages: ['sequelize', 'sqlite3', 'pg', 'pg-hstore', 'umzug', 'nodemailer', 'bcryptjs', 'jimp', 'esbuild', 'esbuild-wasm'],
+  serverExternalPackages: ['sequelize', 'sqlite3', 'pg', 'pg-hstore', 'umzug', 'nodemailer', 'bcryptjs', 'jimp', 'esbuild', 'esbuild-wasm', 'pdfkit'],
   poweredByHeader: false,
   async headers() {
     return [
