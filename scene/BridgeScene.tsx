@@ -1,17 +1,13 @@
 'use client';
 
 import { Canvas } from '@react-three/fiber';
-import { Html, OrbitControls } from '@react-three/drei';
+import { OrbitControls } from '@react-three/drei';
 import { useMemo, useRef, type RefObject } from 'react';
-import { createBridgeModel, edgeOffsetAt, formatStation, type BridgeDescription, type OffsetPoint, type OffsetTable } from '@/lib/geometry';
+import type { BridgeDescription, OffsetPoint, OffsetTable } from '@/lib/geometry';
 import type { SceneFrame } from './builders/frame';
-import { girderRuns } from './builders/runs';
-import { buildGirderMesh, defaultGirderShape } from './builders/girders';
-import { buildDeckTop, buildDeckUnderside, buildEdgeBand } from './builders/deck';
-import { buildAlignmentSegments, buildFormEdgeSegments, buildStringLineSegments, stringLineLift } from './builders/lines';
-import { buildBracketInstances, defaultBracketDims, placeBrackets } from './builders/brackets';
-import { buildBents } from './builders/bents';
+import type { PourState } from './builders/runs';
 import type { CameraPose } from './cameras';
+import { useBridgeParts } from './use-bridge-parts';
 import BufferMesh from './objects/BufferMesh';
 import Segments from './objects/Segments';
 import InstancedBoxes from './objects/InstancedBoxes';
@@ -20,6 +16,11 @@ import RenderStats from './objects/RenderStats';
 import CameraRig from './objects/CameraRig';
 import Ground from './objects/Ground';
 import OverlayBeams from './objects/OverlayBeams';
+import SkyDome from './objects/SkyDome';
+import SunLight from './objects/SunLight';
+import LabelLayout from './objects/LabelLayout';
+import KinkProbe from './objects/KinkProbe';
+import PictureTaker, { type PictureFn } from './objects/PictureTaker';
 
 export interface SceneOverlay {
   positions: Float32Array;
@@ -44,128 +45,108 @@ export interface BridgeSceneProps {
   sweep?: number;
   /** Vertical bow of the girders at midspan (scene units), to show thermal camber change. */
   verticalBow?: number;
+  /** Before (0) and after (1) the pour: girders and forms come down by their deflection. */
+  pour?: PourState;
   /** Extra line work (a straightedge, a drifted form line). */
   overlays?: readonly SceneOverlay[];
   /** Draw the deck slab's top (off: the forms and girders before the pour). */
   showDeck?: boolean;
   /** Whole-station label spacing (bridge units); 0 hides them. */
   stationEvery?: number;
+  /** Sun shadows on the ground and under the overhang (on by default). */
+  shadows?: boolean;
+  /** Large labels for a projector. */
+  large?: boolean;
+  /** Receives a function that draws the scene larger for "Save picture". */
+  pictureRef?: RefObject<PictureFn | null>;
   label: string;
 }
 
+const NO_POUR: PourState = { pour: 0 };
+
 /** The 3D bridge: every part built by a pure builder from the engine's numbers; see builders/frame.ts. */
 export default function BridgeScene(props: BridgeSceneProps) {
-  const { desc, table, frame, widthRange, bracketSpacing, pose, poseVersion, pickable, selected, onSelect, statsRef, sweep = 0, verticalBow = 0, overlays = [], label, showDeck = true } = props;
-  const units = table.units;
-  const u = units === 'm' ? 0.3048 : 1;
-  const model = useMemo(() => createBridgeModel(desc), [desc]);
-  const shape = useMemo(() => defaultGirderShape(units), [units]);
-  const runs = useMemo(() => girderRuns(table), [table]);
-
-  const girders = useMemo(() => {
-    // Sweep is a property of the exterior (precast) girders only.
-    const exterior = runs.filter((r) => r.side !== 'interior');
-    const interior = runs.filter((r) => r.side === 'interior');
-    const a = buildGirderMesh(interior, frame, { ...shape, verticalBow });
-    const b = buildGirderMesh(exterior, frame, { ...shape, verticalBow, sweep });
-    const positions = new Float32Array(a.positions.length + b.positions.length);
-    positions.set(a.positions);
-    positions.set(b.positions, a.positions.length);
-    const indices = new Uint32Array(a.indices.length + b.indices.length);
-    indices.set(a.indices);
-    const shift = a.positions.length / 3;
-    for (let i = 0; i < b.indices.length; i++) indices[a.indices.length + i] = b.indices[i] + shift;
-    return { positions, indices };
-  }, [runs, frame, shape, sweep, verticalBow]);
-  const deckTop = useMemo(() => buildDeckTop(desc, model, frame, 24), [desc, model, frame]);
-  const underside = useMemo(() => buildDeckUnderside(table, frame), [table, frame]);
-  const band = useMemo(() => buildEdgeBand(table, desc, frame, widthRange), [table, desc, frame, widthRange]);
-  const formEdge = useMemo(() => buildFormEdgeSegments(table, frame), [table, frame]);
-  const strings = useMemo(() => buildStringLineSegments(table, frame, stringLineLift(units)), [table, frame, units]);
-  const alignment = useMemo(() => buildAlignmentSegments(desc, model, frame, 60 * u, 2 * u), [desc, model, frame, u]);
-  const brackets = useMemo(() => {
-    const placements = placeBrackets(table, bracketSpacing);
-    return buildBracketInstances(placements, frame, { ...defaultBracketDims(units, shape.depth), verticalBow });
-  }, [table, bracketSpacing, frame, units, shape, verticalBow]);
-  const bents = useMemo(() => buildBents(desc, model, table, frame, shape.depth, units), [desc, model, table, frame, shape, units]);
-  const pickPositions = useMemo(() => {
-    const out = new Float32Array(pickable.length * 3);
-    pickable.forEach((p, i) => {
-      out[i * 3] = p.x - frame.originX;
-      out[i * 3 + 1] = ((p.top_of_girder ?? p.bottom_of_slab) - frame.refElevation) * frame.exaggeration + 0.15 * u;
-      out[i * 3 + 2] = -(p.y - frame.originY);
-    });
-    return out;
-  }, [pickable, frame, u]);
-  const stations = useMemo(() => {
-    const every = props.stationEvery ?? (units === 'm' ? 20 : 50);
-    if (!(every > 0)) return [];
-    const s0 = desc.bents[0].station;
-    const s1 = desc.bents[desc.bents.length - 1].station;
-    const out: Array<{ s: number; pos: [number, number, number] }> = [];
-    for (let s = Math.ceil(s0 / every) * every; s <= s1 + 1e-9; s += every) {
-      const edge = edgeOffsetAt(desc.deck, 'right', s);
-      const p = model.alignment.pointAt(s, edge + 6 * u);
-      const z = model.surface.topOfDeckAtStationOffset(s, edge);
-      out.push({ s, pos: [p.x - frame.originX, (z - frame.refElevation) * frame.exaggeration + 2 * u, -(p.y - frame.originY)] });
+  const { pose, poseVersion, selected, onSelect, statsRef, overlays = [], label, showDeck = true, shadows = true, large = false } = props;
+  const parts = useBridgeParts({ ...props, sweep: props.sweep ?? 0, verticalBow: props.verticalBow ?? 0, pour: props.pour ?? NO_POUR });
+  const { u, brackets, bents, pickPositions, labels } = parts;
+  const labelEls = useRef<Array<HTMLElement | null>>([]);
+  const avoid = useMemo((): [number, number, number] | null => {
+    if (selected === null || selected * 3 >= pickPositions.length) return null;
+    return [pickPositions[selected * 3], pickPositions[selected * 3 + 1], pickPositions[selected * 3 + 2]];
+  }, [selected, pickPositions]);
+  const centre = useMemo((): { target: [number, number, number]; reach: number } => {
+    const p = parts.deckTop.positions;
+    let minX = Infinity, maxX = -Infinity, minZ = Infinity, maxZ = -Infinity, y = 0;
+    for (let i = 0; i < p.length; i += 3) {
+      minX = Math.min(minX, p[i]); maxX = Math.max(maxX, p[i]);
+      minZ = Math.min(minZ, p[i + 2]); maxZ = Math.max(maxZ, p[i + 2]);
+      y += p[i + 1];
     }
-    return out.slice(0, 40);
-  }, [desc, model, frame, units, u, props.stationEvery]);
-
-  // Labels go into this fixed host rather than the canvas's own wrapper: the wrapper's event target
-  // changes once the canvas connects, and a label mounted before that came out empty.
-  const labelHost = useRef<HTMLDivElement>(null!);
+    if (!Number.isFinite(minX)) return { target: [0, 0, 0], reach: 100 };
+    const reach = Math.max(maxX - minX, maxZ - minZ) * 0.62 + 40 * u;
+    return { target: [(minX + maxX) / 2, bents.groundY, (minZ + maxZ) / 2], reach: Math.max(reach, y / (p.length / 3) - bents.groundY) };
+  }, [parts.deckTop, bents.groundY, u]);
 
   return (
-    <div ref={labelHost} className="relative h-full w-full overflow-hidden">
+    <div className="relative h-full w-full overflow-hidden">
       <Canvas
         // Draw on demand (camera moves, changes); with the stats overlay on, every frame, so the
         // counters describe steady rendering.
         frameloop={statsRef ? 'always' : 'demand'}
         dpr={[1, 1.5]}
+        shadows={shadows ? 'percentage' : false}
         camera={{ fov: 50, near: 0.3 * u, far: 60000 * u, position: pose.position }}
         gl={{ antialias: true, preserveDrawingBuffer: true }}
         aria-label={label}
         role="img"
       >
-        <color attach="background" args={['#dde4e6']} />
-        <hemisphereLight args={['#f4f1ea', '#6b665b', 0.9]} />
-        <directionalLight position={[300, 500, 200]} intensity={1.6} />
-        <directionalLight position={[-200, 150, -300]} intensity={0.35} />
-        <Ground y={bents.groundY} />
-        {showDeck ? <BufferMesh positions={deckTop.positions} indices={deckTop.indices} color="#d6d1c6" recessed /> : null}
-        <BufferMesh positions={underside.positions} indices={underside.indices} color="#b59a6d" recessed />
-        {showDeck ? <BufferMesh positions={band.positions} indices={band.indices} colors={band.colors} roughness={0.7} raised /> : null}
-        <BufferMesh positions={girders.positions} indices={girders.indices} color="#8d969b" roughness={0.55} metalness={0.3} />
-        <Segments positions={formEdge} color="#ffffff" />
-        <Segments positions={strings} color="#e0442b" />
-        <Segments positions={alignment} color="#12544b" />
-        <InstancedBoxes matrices={brackets.arms} color="#3f4a52" />
-        <InstancedBoxes matrices={brackets.struts} color="#3f4a52" />
-        <InstancedBoxes matrices={brackets.posts} color="#5e6a3a" />
-        <InstancedBoxes matrices={brackets.rails} color="#5e6a3a" />
-        <InstancedBoxes matrices={bents.caps} color="#a8a295" roughness={0.9} metalness={0} />
-        <InstancedBoxes matrices={bents.columns} color="#a8a295" roughness={0.9} metalness={0} />
+        <SkyDome radius={30000 * u} />
+        <SunLight target={centre.target} reach={centre.reach} shadows={shadows} />
+        <Ground y={bents.groundY} units={parts.units} centre={[centre.target[0], centre.target[2]]} extent={centre.reach} />
+        {showDeck ? <BufferMesh positions={parts.deckTop.positions} indices={parts.deckTop.indices} color="#dcd7cb" recessed shadow={shadows} /> : null}
+        <BufferMesh positions={parts.underside.positions} indices={parts.underside.indices} color="#c79d5f" roughness={0.9} recessed shadow={shadows} />
+        {showDeck ? <BufferMesh positions={parts.band.positions} indices={parts.band.indices} colors={parts.band.colors} roughness={0.7} raised /> : null}
+        <BufferMesh positions={parts.girders.positions} indices={parts.girders.indices} color="#66717a" roughness={0.5} metalness={0.35} shadow={shadows} />
+        <Segments positions={parts.formEdge} color="#ffffff" />
+        <Segments positions={parts.strings} color="#e0442b" />
+        <Segments positions={parts.alignment} color="#12544b" />
+        <InstancedBoxes matrices={brackets.arms} color="#23282c" shadow={shadows} />
+        <InstancedBoxes matrices={brackets.struts} color="#23282c" shadow={shadows} />
+        <InstancedBoxes matrices={brackets.jacks} color="#8a1f11" shadow={shadows} />
+        <InstancedBoxes matrices={brackets.posts} color="#e8b100" roughness={0.5} metalness={0} shadow={shadows} />
+        <InstancedBoxes matrices={brackets.rails} color="#e8b100" roughness={0.5} metalness={0} shadow={shadows} />
+        <InstancedBoxes matrices={bents.caps} color="#bdb7a8" roughness={0.9} metalness={0} shadow={shadows} />
+        <InstancedBoxes matrices={bents.columns} color="#bdb7a8" roughness={0.9} metalness={0} shadow={shadows} />
         <GirderPoints positions={pickPositions} radius={0.35 * u} selected={selected} onPick={onSelect} />
         {overlays.map((o, i) => (
           <OverlayBeams key={i} positions={o.positions} color={o.color} size={0.25 * u} />
         ))}
-        {desc.bents.map((b, i) => (
-          <Html key={b.name + i} portal={labelHost} position={[bents.labels[i * 3], bents.labels[i * 3 + 1], bents.labels[i * 3 + 2]]} center zIndexRange={[20, 0]}>
-            <div className="pointer-events-none whitespace-nowrap rounded bg-concrete-900/80 px-2 py-0.5 text-xs font-semibold text-white tabular">
-              {b.name} · {formatStation(b.station, units)}
-            </div>
-          </Html>
-        ))}
-        {stations.map((st) => (
-          <Html key={st.s} portal={labelHost} position={st.pos} center zIndexRange={[10, 0]}>
-            <div className="pointer-events-none whitespace-nowrap text-[11px] font-semibold text-brand-800 tabular">{formatStation(st.s, units)}</div>
-          </Html>
-        ))}
         <OrbitControls makeDefault enableDamping={false} maxPolarAngle={Math.PI * 0.98} />
         <CameraRig pose={pose} version={poseVersion} />
-        {statsRef ? <RenderStats target={statsRef} /> : null}
+        <LabelLayout labels={labels} elements={labelEls} avoid={avoid} measureKey={large ? 'large' : 'normal'} />
+        <KinkProbe candidates={parts.kinks} />
+        {props.pictureRef ? <PictureTaker target={props.pictureRef} /> : null}
+        <RenderStats target={statsRef} shadows={shadows} />
       </Canvas>
+      <div className="pointer-events-none absolute inset-0 overflow-hidden" data-testid="scene-labels" aria-hidden="true">
+        {labels.map((l, i) => (
+          <div
+            key={l.key}
+            ref={(el) => {
+              labelEls.current[i] = el;
+            }}
+            data-label-kind={l.kind}
+            style={{ visibility: 'hidden' }}
+            className={
+              l.kind === 'bent'
+                ? `absolute left-0 top-0 whitespace-nowrap rounded bg-concrete-900/85 px-1.5 py-0.5 font-semibold text-white tabular ${large ? 'text-lg' : 'text-[11px] sm:text-xs'}`
+                : `absolute left-0 top-0 whitespace-nowrap rounded bg-white/70 px-1 font-semibold text-brand-800 tabular ${large ? 'text-base' : 'text-[10px] sm:text-[11px]'}`
+            }
+          >
+            {l.text}
+          </div>
+        ))}
+      </div>
     </div>
   );
 }

@@ -1,47 +1,54 @@
 'use client';
 
 import { useMemo, useRef, useState } from 'react';
-import { computeOffsetTable, formatLength, GeometryError, type BridgeDescription, type OffsetTable } from '@/lib/geometry';
+import { computeOffsetTable, GeometryError, type BridgeDescription, type OffsetTable } from '@/lib/geometry';
 import { frameForTable } from './builders/frame';
-import { edgeWidthRange, overhangRuns } from './builders/runs';
-import { defaultBracketSpacing } from './builders/brackets';
+import { edgeWidthRange, hasDeflections, overhangRuns, type PourState } from './builders/runs';
+import { defaultBracketSpacing, defaultGirderShapeDepth } from './viewer/viewer-defaults';
 import { cameraPose, type ViewName } from './cameras';
 import BridgeScene from './BridgeScene';
 import Legend from './Legend';
-import PointReadout from './PointReadout';
+import ViewerControls, { VIEWS, type Framing } from './viewer/ViewerControls';
+import PourControl, { THERMAL_DRAWN, viewerThermalBow } from './viewer/PourControl';
+import SceneOverlayBar from './viewer/SceneOverlayBar';
+import { usePresenter, useArrowSteps } from './presenter';
+import { usePictureSaver } from './viewer/use-picture-saver';
+import type { PictureFn } from './objects/PictureTaker';
 
 export interface BridgeViewerProps {
   description: BridgeDescription;
   table: OffsetTable;
   name: string;
+  revision?: number;
   showStats?: boolean;
 }
 
-type Framing = 'designed' | 'chord' | 'curved';
-
-const VIEWS: Array<{ view: ViewName; label: string }> = [
-  { view: 'orbit', label: 'Free orbit' },
-  { view: 'plan', label: 'Plan' },
-  { view: 'edge', label: 'Along the edge' },
-  { view: 'crew', label: 'Crew at a bent' },
-];
+/** Heights are raised this much in the views along the edge, so the corner at each bent shows. */
+export const KINK_EXAGGERATION = 8;
 
 function reframed(desc: BridgeDescription, layout: 'chord' | 'curved'): BridgeDescription {
   return { ...desc, girders: desc.girders.map((g) => ({ ...g, layout })) };
 }
 
 /** The 3D view of a stored bridge with its controls; the numbers all come from the engine. */
-export default function BridgeViewer({ description, table, name, showStats = false }: BridgeViewerProps) {
+export default function BridgeViewer({ description, table, name, revision, showStats = false }: BridgeViewerProps) {
   const units = table.units;
   const layouts = new Set(description.girders.map((g) => g.layout));
   const designed: Framing = layouts.size === 1 ? (layouts.has('curved') ? 'curved' : 'chord') : 'designed';
   const [framing, setFraming] = useState<Framing>(designed);
-  const [exaggeration, setExaggeration] = useState(1);
+  const [exaggeration, setExaggerationState] = useState(1);
   const [spacing, setSpacing] = useState(defaultBracketSpacing(units));
   const [view, setView] = useState<{ name: ViewName; version: number }>({ name: 'orbit', version: 0 });
   const [selected, setSelected] = useState<number | null>(null);
   const [showDeck, setShowDeck] = useState(true);
+  const [shadows, setShadows] = useState(true);
+  const [pourValue, setPourValue] = useState(0);
+  const [deltaT, setDeltaT] = useState(0);
+  const [showControls, setShowControls] = useState(false);
   const statsRef = useRef<HTMLDivElement>(null);
+  const rootRef = useRef<HTMLElement>(null);
+  const pictureRef = useRef<PictureFn | null>(null);
+  const presenter = usePresenter(rootRef);
 
   const alt = useMemo((): { table: OffsetTable; desc: BridgeDescription } | { error: string } => {
     if (framing === designed) return { table, desc: description };
@@ -64,14 +71,44 @@ export default function BridgeViewer({ description, table, name, showStats = fal
   }, [table, shown.table]);
   const pickable = useMemo(() => overhangRuns(shown.table).flatMap((r) => r.rows), [shown.table]);
   const pose = useMemo(() => cameraPose(view.name, shown.table, frame, units), [view, shown.table, frame, units]);
-  const row = selected !== null ? (pickable[selected] ?? null) : null;
-  const step = units === 'm' ? 0.1 : 0.5;
-  const spacingMax = units === 'm' ? 3 : 10;
-  const spacingMin = units === 'm' ? 0.6 : 2;
+  const deflected = useMemo(() => hasDeflections(shown.table), [shown.table]);
+  const maxDeflection = useMemo(() => (deflected ? Math.max(...shown.table.points.map((p) => p.deflection ?? 0)) : 0), [deflected, shown.table]);
+  const pour = useMemo((): PourState => ({ pour: deflected ? pourValue : 0 }), [deflected, pourValue]);
+  const typicalSpan = (description.bents[description.bents.length - 1].station - description.bents[0].station) / Math.max(1, description.bents.length - 1);
+  const bow = viewerThermalBow(units, deltaT, typicalSpan, defaultGirderShapeDepth(units));
+  const edgeView = view.name === 'edge' || view.name === 'crew';
+
+  const setExaggeration = (v: number) => {
+    setExaggerationState(v);
+    // Elevations move with the exaggeration: keep the same view on the bridge.
+    setView((s) => ({ ...s, version: s.version + 1 }));
+  };
+  const chooseView = (v: ViewName) => {
+    // Along the edge the corner at each bent is a few hundredths of a foot over a span: raise the heights.
+    if ((v === 'edge' || v === 'crew') && !(view.name === 'edge' || view.name === 'crew')) setExaggerationState(KINK_EXAGGERATION);
+    if (!(v === 'edge' || v === 'crew') && exaggeration === KINK_EXAGGERATION) setExaggerationState(1);
+    setView((s) => ({ name: v, version: s.version + 1 }));
+  };
+  const viewLabel = VIEWS.find((v) => v.view === view.name)?.label ?? 'Free orbit';
+  useArrowSteps((d) => {
+    if (!presenter.presenting) return;
+    const i = VIEWS.findIndex((v) => v.view === view.name);
+    chooseView(VIEWS[(i + d + VIEWS.length) % VIEWS.length].view);
+  });
+  const saver = usePictureSaver(pictureRef, { bridge: name, revision: revision ?? null, view: viewLabel, exaggeration });
+  const controlsShown = !presenter.presenting || showControls;
 
   return (
-    <section aria-label={`3D view of ${name}`} className="space-y-4">
-      <div className="relative h-[62vh] min-h-[420px] overflow-hidden rounded-lg border border-concrete-300 bg-[#dde4e6]" data-testid="scene-canvas">
+    <section
+      ref={rootRef}
+      aria-label={`3D view of ${name}`}
+      data-presenting={presenter.presenting ? 'true' : 'false'}
+      className={presenter.presenting ? 'fixed inset-0 z-50 flex flex-col gap-3 overflow-y-auto bg-concrete-900 p-3 text-lg' : 'space-y-4'}
+    >
+      <div
+        className={`relative overflow-hidden rounded-lg border border-concrete-300 bg-[#dde4e6] ${presenter.presenting ? 'min-h-[60vh] flex-1' : 'h-[62vh] min-h-[360px] sm:min-h-[420px]'}`}
+        data-testid="scene-canvas"
+      >
         <BridgeScene
           desc={shown.desc}
           table={shown.table}
@@ -85,12 +122,21 @@ export default function BridgeViewer({ description, table, name, showStats = fal
           onSelect={setSelected}
           statsRef={showStats ? statsRef : undefined}
           showDeck={showDeck}
+          shadows={shadows}
+          pour={pour}
+          verticalBow={deflected ? 0 : bow * THERMAL_DRAWN}
+          large={presenter.presenting}
+          pictureRef={pictureRef}
           label={`3D model of ${name}: girders, deck, overhang brackets and handrail`}
         />
-        <div className="pointer-events-none absolute left-3 top-3 rounded bg-white/85 px-2 py-1 text-xs font-semibold text-concrete-800">
-          {framing === 'curved' ? 'Curved girders' : framing === 'chord' ? 'Straight chord girders' : 'Girders as designed'}
-          {exaggeration > 1 ? ` · elevations ×${exaggeration}` : ' · true scale'}
-        </div>
+        <SceneOverlayBar
+          framingText={framing === 'curved' ? 'Curved girders' : framing === 'chord' ? 'Straight chord girders' : 'Girders as designed'}
+          exaggeration={exaggeration}
+          edgeView={edgeView}
+          kinkExaggeration={KINK_EXAGGERATION}
+          onExaggeration={setExaggeration}
+          large={presenter.presenting}
+        />
         {showStats ? (
           <div
             ref={statsRef}
@@ -103,90 +149,65 @@ export default function BridgeViewer({ description, table, name, showStats = fal
         ) : null}
       </div>
 
-      <div className="grid gap-4 lg:grid-cols-[1fr_22rem]">
-        <div className="card space-y-4 p-4">
-          <fieldset>
-            <legend className="field-label">Camera</legend>
-            <div className="mt-1 flex flex-wrap gap-2">
-              {VIEWS.map((v) => (
-                <button
-                  key={v.view}
-                  type="button"
-                  aria-pressed={view.name === v.view}
-                  className={view.name === v.view ? 'btn-primary' : 'btn-secondary'}
-                  onClick={() => setView((s) => ({ name: v.view, version: s.version + 1 }))}
-                >
-                  {v.label}
-                </button>
-              ))}
-            </div>
-          </fieldset>
-          <div className="grid gap-4 sm:grid-cols-2">
-            <label className="block">
-              <span className="field-label">
-                Vertical exaggeration: <span className="tabular">{exaggeration}×</span>
-              </span>
-              <input type="range" min={1} max={50} step={1} value={exaggeration} onChange={(e) => {
-                  setExaggeration(Number(e.target.value));
-                  // Elevations move with the exaggeration: keep the same view on the bridge.
-                  setView((s) => ({ ...s, version: s.version + 1 }));
-                }}
-                className="mt-2 w-full accent-brand-600"
-              />
-            </label>
-            <label className="block">
-              <span className="field-label">
-                Bracket spacing: <span className="tabular">{formatLength(spacing, units)}</span>
-              </span>
-              <input
-                type="range"
-                min={spacingMin}
-                max={spacingMax}
-                step={step}
-                value={spacing}
-                onChange={(e) => setSpacing(Number(e.target.value))}
-                className="mt-2 w-full accent-brand-600"
-              />
-            </label>
-          </div>
-          <label className="flex items-center gap-2 text-sm">
-            <input type="checkbox" checked={showDeck} onChange={(e) => setShowDeck(e.target.checked)} className="accent-brand-600" />
-            Show the deck slab (clear it to see the girders, string lines and forms as before the pour)
-          </label>
-          <fieldset>
-            <legend className="field-label">Girder framing (same deck)</legend>
-            <div className="mt-1 flex flex-wrap gap-4 text-sm">
-              {(layouts.size > 1 ? (['designed', 'chord', 'curved'] as Framing[]) : (['chord', 'curved'] as Framing[])).map((f) => (
-                <label key={f} className="flex items-center gap-2">
-                  <input type="radio" name="framing" value={f} checked={framing === f} onChange={() => { setFraming(f); setSelected(null); }} className="accent-brand-600" />
-                  {f === 'chord' ? 'Straight chords' : f === 'curved' ? 'Curved girders' : 'As designed'}
-                  {f === designed ? <span className="text-concrete-500">(as designed)</span> : null}
-                </label>
-              ))}
-            </div>
-            {altError ? (
-              <p role="alert" className="mt-2 rounded border border-caution-500 bg-caution-100 p-2 text-sm text-caution-700">
-                This deck cannot be framed that way: {altError}
-              </p>
-            ) : null}
-          </fieldset>
-          <label className="block">
-            <span className="field-label">Girder point</span>
-            <select className="field-input" value={selected ?? ''} onChange={(e) => setSelected(e.target.value === '' ? null : Number(e.target.value))}>
-              <option value="">Choose a point…</option>
-              {pickable.map((p, i) => (
-                <option key={`${p.side}-${p.span}-${p.point}`} value={i}>
-                  {`Span ${p.span} · ${p.girder} (${p.side}) · point ${p.point}`}
-                </option>
-              ))}
-            </select>
-          </label>
-          <PointReadout row={row} units={units} />
-        </div>
-        <div className="card p-4">
-          <Legend range={range} units={units} />
-        </div>
+      <div className={`flex flex-wrap items-center gap-2 ${presenter.presenting ? 'text-white' : ''}`}>
+        {presenter.presenting ? (
+          <>
+            <button type="button" className="btn-secondary" onClick={() => chooseView(VIEWS[(VIEWS.findIndex((v) => v.view === view.name) + VIEWS.length - 1) % VIEWS.length].view)}>
+              ← Previous view
+            </button>
+            <span className="font-semibold">{viewLabel}</span>
+            <button type="button" className="btn-secondary" onClick={() => chooseView(VIEWS[(VIEWS.findIndex((v) => v.view === view.name) + 1) % VIEWS.length].view)}>
+              Next view →
+            </button>
+            <button type="button" className="btn-secondary" aria-expanded={showControls} onClick={() => setShowControls((s) => !s)}>
+              {showControls ? 'Hide controls' : 'Show controls'}
+            </button>
+          </>
+        ) : null}
+        <button type="button" className="btn-secondary" onClick={saver.save} disabled={saver.busy}>
+          Save picture
+        </button>
+        <button type="button" className="btn-secondary" onClick={presenter.presenting ? presenter.stop : presenter.start}>
+          {presenter.presenting ? 'Leave presenter mode' : 'Presenter mode'}
+        </button>
+        <span role="status" className={`text-sm ${presenter.presenting ? 'text-concrete-100' : 'text-concrete-600'}`} data-testid="picture-status">
+          {saver.message}
+        </span>
       </div>
+
+      {controlsShown ? (
+        <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_22rem]">
+          <ViewerControls
+            units={units}
+            view={view.name}
+            onView={chooseView}
+            exaggeration={exaggeration}
+            onExaggeration={setExaggeration}
+            spacing={spacing}
+            onSpacing={setSpacing}
+            showDeck={showDeck}
+            onShowDeck={setShowDeck}
+            shadows={shadows}
+            onShadows={setShadows}
+            framing={framing}
+            designed={designed}
+            framings={layouts.size > 1 ? ['designed', 'chord', 'curved'] : ['chord', 'curved']}
+            onFraming={(f) => {
+              setFraming(f);
+              setSelected(null);
+            }}
+            altError={altError}
+            pickable={pickable}
+            selected={selected}
+            onSelect={setSelected}
+          >
+            <PourControl units={units} maxDeflection={maxDeflection} pour={pourValue} onPour={setPourValue} deltaT={deltaT} onDeltaT={setDeltaT} bow={bow} />
+          </ViewerControls>
+          <div className="card min-w-0 p-4">
+            <Legend range={range} units={units} deflection={maxDeflection} />
+          </div>
+        </div>
+      ) : null}
     </section>
   );
 }

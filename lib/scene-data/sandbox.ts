@@ -41,6 +41,26 @@ export const SANDBOX_GIRDER_OFFSETS = [-16, -8, 0, 8, 16] as const;
 /** Girder depth for the thermal example, in (a 54 in steel plate girder). */
 export const SANDBOX_GIRDER_DEPTH_IN = 54;
 
+/**
+ * Dead-load deflection still to come at midspan of a sandbox span, ft: an invented 1.5 in on a
+ * 100 ft span, growing with the square of the span.
+ */
+export function sandboxMidspanDeflection(spanLength: number): number {
+  return 0.125 * (spanLength / 100) ** 2;
+}
+
+/**
+ * Deflection at tenth points for a midspan value: the elastic curve of a simply supported beam under
+ * a uniform load, y = (16/5)·Δ·(ξ − 2ξ³ + ξ⁴) with ξ the fraction of the span (from memory: the
+ * standard uniform-load beam diagram, w·x·(L³ − 2Lx² + x³) / 24EI scaled to Δ at midspan).
+ */
+export function tenthPointDeflections(midspan: number): number[] {
+  return Array.from({ length: 11 }, (_, i) => {
+    const x = i / 10;
+    return (16 / 5) * midspan * (x - 2 * x ** 3 + x ** 4);
+  });
+}
+
 /** The sandbox bridge for a set of slider values (feet). */
 export function sandboxBridge(s: SandboxSettings): BridgeDescription {
   const lead = 60;
@@ -83,5 +103,6 @@ export function sandboxBridge(s: SandboxSettings): BridgeDescription {
     girders: SANDBOX_GIRDER_OFFSETS.map((o, i) => ({ name: `G${i + 1}`, layout: s.layout, offsets: [o, o, o, o] })),
     points_per_span: 20,
     chord_spaces: 20,
+    deflections: SANDBOX_GIRDER_OFFSETS.flatMap((_, g) => [1, 2, 3].map((span) => ({ girder: `G${g + 1}`, span, values: tenthPointDeflections(sandboxMidspanDeflection(s.spanLength)) }))),
   } as BridgeDescription;
 }

@@ -4,49 +4,37 @@
  * the form from each exterior girder out to the edge, the slab underside between the exterior
  * girders, and the edge band coloured by edge width.
  */
-import { bentLinePoint, type BridgeDescription, type BridgeModel, type OffsetTable } from '@/lib/geometry';
-import { edgeWidthRange, overhangRuns, type GirderRun } from './runs';
+import { bentLinePoint, type BridgeDescription, type BridgeModel, type OffsetPoint, type OffsetTable } from '@/lib/geometry';
+import { deflectionOf, edgeWidthRange, formEdgeY, overhangRuns, type GirderRun, type PourState } from './runs';
+import { outermostEdgeOffset, sectionLinesAt } from './edges';
 import { sceneY, writeScenePoint, type SceneFrame } from './frame';
 import { rampColor, rampPosition } from './ramp';
 import type { MeshArrays } from './girders';
 
-/** Cross-section offsets where the deck top changes slope: edges, gutter lines and the crown. */
-export function deckBreakOffsets(deck: BridgeDescription['deck']): number[] {
-  const l = deck.left_edge_offset;
-  const r = deck.right_edge_offset;
-  const cand = [l, l + deck.left_barrier_width, 0, r - deck.right_barrier_width, r];
-  const out: number[] = [];
-  for (const o of cand) {
-    if (o < l - 1e-9 || o > r + 1e-9) continue;
-    if (out.length && Math.abs(o - out[out.length - 1]) < 1e-6) continue;
-    if (out.length && o < out[out.length - 1]) continue;
-    out.push(o);
-  }
-  return out;
-}
-
 /**
  * Top of deck between the first and last bent as a grid: along each span the grid lines run
- * between the bent lines (so a skewed deck ends square to its bents), across at the break
- * offsets. Elevations are the engine's top of deck at each grid point.
+ * between the bent lines (so a skewed deck ends square to its bents), across at the edges, gutter
+ * lines and crown of each station (so a flared edge is followed). Elevations are the engine's top of
+ * deck at each grid point.
  * @param samplesPerSpan divisions along each span (≥ 1).
  */
 export function buildDeckTop(desc: BridgeDescription, model: BridgeModel, frame: SceneFrame, samplesPerSpan = 24): MeshArrays {
-  const offsets = deckBreakOffsets(desc.deck);
-  const cols = offsets.length;
+  const cols = 5;
   const pos: number[] = [];
   const idx: number[] = [];
   const tmp = [0, 0, 0];
+  const stationOn = (j: number, c: number) => bentLinePoint(model.alignment, desc.bents[j], sectionLinesAt(desc.deck, desc.bents[j].station)[c]).station;
   for (let j = 0; j + 1 < desc.bents.length; j++) {
-    const sa = offsets.map((o) => bentLinePoint(model.alignment, desc.bents[j], o).station);
-    const sb = offsets.map((o) => bentLinePoint(model.alignment, desc.bents[j + 1], o).station);
+    const sa = Array.from({ length: cols }, (_, c) => stationOn(j, c));
+    const sb = Array.from({ length: cols }, (_, c) => stationOn(j + 1, c));
     const base = pos.length / 3;
     for (let i = 0; i <= samplesPerSpan; i++) {
       const t = i / samplesPerSpan;
       for (let c = 0; c < cols; c++) {
         const s = sa[c] + t * (sb[c] - sa[c]);
-        const p = model.alignment.pointAt(s, offsets[c]);
-        writeScenePoint(frame, p.x, p.y, model.surface.topOfDeckAtStationOffset(s, offsets[c]), tmp, 0);
+        const o = sectionLinesAt(desc.deck, s)[c];
+        const p = model.alignment.pointAt(s, o);
+        writeScenePoint(frame, p.x, p.y, model.surface.topOfDeckAtStationOffset(s, o), tmp, 0);
         pos.push(tmp[0], tmp[1], tmp[2]);
       }
     }
@@ -68,19 +56,27 @@ export function buildDeckTop(desc: BridgeDescription, model: BridgeModel, frame:
  * slab) out to the edge point (at the edge bottom), and between the two exterior girders the slab
  * bottom. Rows come straight from the engine.
  */
-export function buildDeckUnderside(table: Pick<OffsetTable, 'points'>, frame: SceneFrame): MeshArrays {
+export function buildDeckUnderside(table: Pick<OffsetTable, 'points'>, frame: SceneFrame, pour?: PourState): MeshArrays {
   const pos: number[] = [];
   const idx: number[] = [];
   const runs = overhangRuns(table);
   const tmp = [0, 0, 0];
-  const strip = (a: Array<[number, number, number]>, b: Array<[number, number, number]>) => {
+  // Scene y of the slab bottom over a girder and of the form edge, riding down with the pour.
+  const scale = pour?.deflectionScale ?? frame.exaggeration;
+  const lift = (p: OffsetPoint) => (pour ? deflectionOf(p) * scale * (1 - pour.pour) : 0);
+  const atGirder = (p: OffsetPoint): [number, number, number] => [p.x, p.y, NaN];
+  const girderY = (p: OffsetPoint) => sceneY(frame, p.bottom_of_slab) + lift(p);
+  const edgeY = (p: OffsetPoint) => (pour ? formEdgeY(p, frame, pour) : sceneY(frame, p.edge_bottom as number));
+  const strip = (a: OffsetPoint[], ya: (p: OffsetPoint) => number, b: OffsetPoint[], yb: (p: OffsetPoint) => number, edge: boolean) => {
     const base = pos.length / 3;
     const n = Math.min(a.length, b.length);
     for (let i = 0; i < n; i++) {
-      writeScenePoint(frame, a[i][0], a[i][1], a[i][2], tmp, 0);
-      pos.push(tmp[0], tmp[1], tmp[2]);
-      writeScenePoint(frame, b[i][0], b[i][1], b[i][2], tmp, 0);
-      pos.push(tmp[0], tmp[1], tmp[2]);
+      const pa = atGirder(a[i]);
+      writeScenePoint(frame, pa[0], pa[1], 0, tmp, 0);
+      pos.push(tmp[0], ya(a[i]), tmp[2]);
+      if (edge) writeScenePoint(frame, b[i].edge_x as number, b[i].edge_y as number, 0, tmp, 0);
+      else writeScenePoint(frame, b[i].x, b[i].y, 0, tmp, 0);
+      pos.push(tmp[0], yb(b[i]), tmp[2]);
     }
     for (let i = 0; i + 1 < n; i++) {
       const r = base + i * 2;
@@ -89,20 +85,14 @@ export function buildDeckUnderside(table: Pick<OffsetTable, 'points'>, frame: Sc
   };
   const bySpan = new Map<number, { left?: GirderRun; right?: GirderRun }>();
   for (const run of runs) {
-    strip(
-      run.rows.map((p) => [p.x, p.y, p.bottom_of_slab]),
-      run.rows.map((p) => [p.edge_x as number, p.edge_y as number, p.edge_bottom as number]),
-    );
+    strip(run.rows, girderY, run.rows, edgeY, true);
     const e = bySpan.get(run.span) ?? {};
     e[run.side as 'left' | 'right'] = run;
     bySpan.set(run.span, e);
   }
   for (const { left, right } of bySpan.values()) {
     if (!left || !right || left.girder === right.girder) continue;
-    strip(
-      left.rows.map((p) => [p.x, p.y, p.bottom_of_slab]),
-      right.rows.map((p) => [p.x, p.y, p.bottom_of_slab]),
-    );
+    strip(left.rows, girderY, right.rows, girderY, false);
   }
   return { positions: new Float32Array(pos), indices: new Uint32Array(idx) };
 }
@@ -127,7 +117,7 @@ export function buildEdgeBand(
   const pos: number[] = [];
   const col: number[] = [];
   const idx: number[] = [];
-  const deckWidth = desc.deck.right_edge_offset - desc.deck.left_edge_offset;
+  const deckWidth = outermostEdgeOffset(desc.deck, 'right') - outermostEdgeOffset(desc.deck, 'left');
   const c = [0, 0, 0];
   for (const run of overhangRuns(table)) {
     const band = Math.max(run.side === 'left' ? desc.deck.left_barrier_width : desc.deck.right_barrier_width, deckWidth * 0.04);

@@ -3,8 +3,8 @@
  * span (straight for chords, bending with the curve for curved girders). One merged geometry for the
  * whole bridge, so every girder is a single draw call.
  */
-import { girderTopOf, type GirderRun } from './runs';
-import { sceneY, type SceneFrame } from './frame';
+import { girderTopY, type GirderRun, type PourState } from './runs';
+import type { SceneFrame } from './frame';
 import type { Units } from '@/lib/units';
 
 export interface GirderShape {
@@ -19,6 +19,8 @@ export interface GirderShape {
   sweep?: number;
   /** Vertical bow at midspan in scene units (positive up), a parabola through the ends. */
   verticalBow?: number;
+  /** Before/after the pour: the girder comes down by its deflection (see runs.ts). */
+  pour?: PourState;
 }
 
 /** Default girder depth: 6 ft, or 1.8 m. */
@@ -57,7 +59,7 @@ export function bowFactor(fraction: number): number {
  * Girder centreline (top of the top flange) of a run in scene coordinates, 3 floats per row,
  * including any sweep / vertical bow.
  */
-export function girderCenterline(run: GirderRun, frame: SceneFrame, shape: Pick<GirderShape, 'sweep' | 'verticalBow'> = {}): Float32Array {
+export function girderCenterline(run: GirderRun, frame: SceneFrame, shape: Pick<GirderShape, 'sweep' | 'verticalBow' | 'pour'> = {}): Float32Array {
   const rows = run.rows;
   const out = new Float32Array(rows.length * 3);
   const xs = rows.map((r) => r.x);
@@ -74,7 +76,7 @@ export function girderCenterline(run: GirderRun, frame: SceneFrame, shape: Pick<
       y += ny * shape.sweep * bow * outwardSign;
     }
     out[i * 3] = x - frame.originX;
-    out[i * 3 + 1] = sceneY(frame, girderTopOf(r)) + (shape.verticalBow ?? 0) * bow;
+    out[i * 3 + 1] = girderTopY(r, frame, shape.pour) + (shape.verticalBow ?? 0) * bow;
     out[i * 3 + 2] = -(y - frame.originY);
   }
   return out;

@@ -4,7 +4,7 @@
  * draw call.
  */
 import type { BridgeDescription, BridgeModel, OffsetTable } from '@/lib/geometry';
-import { girderTopOf, overhangRuns } from './runs';
+import { formEdgeY, girderTopY, overhangRuns, type PourState } from './runs';
 import { writeScenePoint, type SceneFrame } from './frame';
 import type { Units } from '@/lib/units';
 
@@ -17,7 +17,7 @@ export function stringLineLift(units: Units): number {
  * Form edge: for every overhang run, segments between consecutive rows through
  * (edge_x, edge_y, form_target). The vertices are exactly the engine's numbers, transformed.
  */
-export function buildFormEdgeSegments(table: Pick<OffsetTable, 'points'>, frame: SceneFrame): Float32Array {
+export function buildFormEdgeSegments(table: Pick<OffsetTable, 'points'>, frame: SceneFrame, pour?: PourState): Float32Array {
   const runs = overhangRuns(table);
   let count = 0;
   for (const r of runs) count += Math.max(0, r.rows.length - 1);
@@ -29,6 +29,10 @@ export function buildFormEdgeSegments(table: Pick<OffsetTable, 'points'>, frame:
       const b = r.rows[i + 1];
       writeScenePoint(frame, a.edge_x as number, a.edge_y as number, a.form_target as number, out, o);
       writeScenePoint(frame, b.edge_x as number, b.edge_y as number, b.form_target as number, out, o + 3);
+      if (pour) {
+        out[o + 1] = formEdgeY(a, frame, pour);
+        out[o + 4] = formEdgeY(b, frame, pour);
+      }
       o += 6;
     }
   }
@@ -39,16 +43,16 @@ export function buildFormEdgeSegments(table: Pick<OffsetTable, 'points'>, frame:
  * String lines: for every exterior girder and span, one segment from the girder's centre at point 0
  * to its centre at point n, `lift` (true size) above the top flange.
  */
-export function buildStringLineSegments(table: Pick<OffsetTable, 'points'>, frame: SceneFrame, lift: number): Float32Array {
+export function buildStringLineSegments(table: Pick<OffsetTable, 'points'>, frame: SceneFrame, lift: number, pour?: PourState): Float32Array {
   const runs = overhangRuns(table);
   const out = new Float32Array(runs.length * 6);
   runs.forEach((r, k) => {
     const a = r.rows[0];
     const b = r.rows[r.rows.length - 1];
-    writeScenePoint(frame, a.x, a.y, girderTopOf(a), out, k * 6);
-    writeScenePoint(frame, b.x, b.y, girderTopOf(b), out, k * 6 + 3);
-    out[k * 6 + 1] += lift;
-    out[k * 6 + 4] += lift;
+    writeScenePoint(frame, a.x, a.y, 0, out, k * 6);
+    writeScenePoint(frame, b.x, b.y, 0, out, k * 6 + 3);
+    out[k * 6 + 1] = girderTopY(a, frame, pour) + lift;
+    out[k * 6 + 4] = girderTopY(b, frame, pour) + lift;
   });
   return out;
 }

@@ -74,3 +74,65 @@ export function edgeWidthRange(table: Pick<OffsetTable, 'points'>): [number, num
   }
   return Number.isFinite(lo) ? [lo, hi] : [0, 0];
 }
+
+/**
+ * Where the pour stands and how its movement is drawn. `pour` 0 = as set before the pour (girders
+ * cambered, forms at form target), 1 = after it (girders down by their deflection, forms settled to
+ * the edge bottom). `deflectionScale` is scene units per bridge unit of deflection (the frame's
+ * exaggeration draws it true to the rest of the picture; more magnifies it).
+ */
+export interface PourState {
+  pour: number;
+  deflectionScale?: number;
+}
+
+/** A row's dead-load deflection (bridge units, positive downward); 0 when the table has none. */
+export function deflectionOf(p: Pick<OffsetPoint, 'fraction'> & { deflection?: number | null }): number {
+  return p.deflection ?? 0;
+}
+
+/**
+ * Top of the girder before the pour: the surveyed top of girder, or the bottom of slab plus the
+ * deflection still to come (no buildup assumed). Bridge units.
+ */
+export function prePourGirderTop(p: Pick<OffsetPoint, 'top_of_girder' | 'bottom_of_slab' | 'fraction'> & { deflection?: number | null }): number {
+  return p.top_of_girder ?? p.bottom_of_slab + deflectionOf(p);
+}
+
+/**
+ * Scene y of the top of girder at a pour state: the girder comes down by its deflection as the deck
+ * is poured. With no pour state, the pre-pour top (as the forms are set).
+ */
+export function girderTopY(
+  p: Pick<OffsetPoint, 'top_of_girder' | 'bottom_of_slab' | 'fraction'> & { deflection?: number | null },
+  frame: { refElevation: number; exaggeration: number },
+  state?: PourState,
+): number {
+  const pre = prePourGirderTop(p);
+  const d = deflectionOf(p);
+  const scale = state?.deflectionScale ?? frame.exaggeration;
+  const final = pre - d;
+  return (final - frame.refElevation) * frame.exaggeration + d * scale * (1 - (state?.pour ?? 0));
+}
+
+/**
+ * Scene y of the form's bottom outside edge at a pour state: at the form target before the pour,
+ * down by the form settlement and the deflection to the edge bottom after it.
+ */
+export function formEdgeY(
+  p: Pick<OffsetPoint, 'form_target' | 'edge_bottom' | 'fraction'> & { deflection?: number | null },
+  frame: { refElevation: number; exaggeration: number },
+  state?: PourState,
+): number {
+  const target = p.form_target as number;
+  const bottom = p.edge_bottom as number;
+  const d = deflectionOf(p);
+  const settle = target - bottom - d;
+  const scale = state?.deflectionScale ?? frame.exaggeration;
+  return (bottom - frame.refElevation) * frame.exaggeration + (settle * frame.exaggeration + d * scale) * (1 - (state?.pour ?? 0));
+}
+
+/** True when any row of the table carries a non-zero deflection. */
+export function hasDeflections(table: Pick<OffsetTable, 'points'>): boolean {
+  return table.points.some((p) => (p as { deflection?: number | null }).deflection);
+}

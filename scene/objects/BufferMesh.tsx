@@ -32,14 +32,16 @@ type Props = ThreeElements['group'] & {
   recessed?: boolean;
   /** Pull the surface forward in depth (bands lying on another surface). */
   raised?: boolean;
+  /** Casts and takes the sun's shadow. */
+  shadow?: boolean;
 };
 
 /** A lit, double-sided mesh from builder arrays. */
-export default function BufferMesh({ positions, indices, colors, color = '#cccccc', roughness = 0.85, metalness = 0, recessed, raised, ...props }: Props) {
+export default function BufferMesh({ positions, indices, colors, color = '#cccccc', roughness = 0.85, metalness = 0, recessed, raised, shadow = false, ...props }: Props) {
   const geometry = useBufferGeometry(positions, indices, colors);
   return (
     <group {...props}>
-      <mesh geometry={geometry}>
+      <mesh geometry={geometry} castShadow={shadow} receiveShadow={shadow}>
         <meshStandardMaterial
           color={colors ? '#ffffff' : color}
           vertexColors={!!colors}

@@ -2,21 +2,30 @@
 
 import { useFrame } from '@react-three/fiber';
 import { useRef, type RefObject } from 'react';
+import { sceneStats } from '../stats';
 
 /**
- * Keeps the overlay's data attributes current from the renderer's counters: draw calls and
- * triangles of the last frame, and frames rendered so far. Writes only when a number changed.
+ * Keeps the overlay's data attributes and `window.__chordlineStats` current from the renderer's
+ * counters: draw calls and triangles of the last frame (shadow passes included), and frames rendered
+ * so far. Writes attributes only when a number changed.
  */
-export default function RenderStats({ target }: { target: RefObject<HTMLElement | null> }) {
+export default function RenderStats({ target, shadows }: { target?: RefObject<HTMLElement | null>; shadows: boolean }) {
   const last = useRef({ calls: -1, triangles: -1, frames: 0 });
-  useFrame(({ gl }) => {
-    const el = target.current;
+  useFrame(({ gl, size }) => {
     const s = last.current;
     s.frames += 1;
-    if (!el) return;
     // info.render holds the previous frame's totals here (it is reset when a frame starts).
     const calls = gl.info.render.calls;
     const triangles = gl.info.render.triangles;
+    const stats = sceneStats();
+    stats.drawCalls = calls;
+    stats.triangles = triangles;
+    stats.frames = s.frames;
+    stats.shadows = shadows;
+    stats.width = size.width;
+    stats.height = size.height;
+    const el = target?.current;
+    if (!el) return;
     if (calls !== s.calls) {
       s.calls = calls;
       el.setAttribute('data-draw-calls', String(calls));
@@ -27,7 +36,7 @@ export default function RenderStats({ target }: { target: RefObject<HTMLElement 
     }
     el.setAttribute('data-frames', String(s.frames));
     // The visible text is refreshed now and then; the attributes above are the exact figures.
-    if (s.frames % 10 === 3) el.textContent = `${calls} draw calls · ${triangles} triangles · ${s.frames} frames`;
+    if (s.frames % 10 === 3) el.textContent = `${calls} draw calls · ${triangles} triangles · ${s.frames} frames${shadows ? ' · shadows' : ''}`;
   });
   return null;
 }

@@ -133,7 +133,7 @@ describe('3D view and walkthrough', () => {
     expect(await page.getByRole('note').first().textContent()).toMatch(/geometry only/i);
   });
 
-  it('walks through the five steps with live numbers from the engine', async () => {
+  it('walks through the six steps with live numbers from the engine', async () => {
     await page.goto(`${baseUrl}/learn`);
     await page.getByTestId('scene-canvas').locator('canvas').waitFor({ timeout: 60000 });
     await page.waitForTimeout(1500);
@@ -148,18 +148,19 @@ describe('3D view and walkthrough', () => {
 
     const heading = page.locator('#step-title');
     const titles = [await heading.textContent()];
-    for (let i = 0; i < 4; i++) {
+    for (let i = 0; i < 5; i++) {
       await page.getByRole('button', { name: 'Next' }).click();
       titles.push(await heading.textContent());
     }
-    expect(new Set(titles).size).toBe(5);
+    expect(new Set(titles).size).toBe(6);
+    expect(titles).toContain('Why the forms are set above grade');
     expect(await page.getByRole('button', { name: 'Next' }).isDisabled()).toBe(true);
     // Keyboard: the arrow keys work from anywhere on the page, also once Next is disabled at the end.
     await page.evaluate(() => (document.activeElement as HTMLElement | null)?.blur());
     await page.keyboard.press('ArrowLeft');
-    expect(await heading.textContent()).toBe(titles[3]);
-    await page.keyboard.press('ArrowRight');
     expect(await heading.textContent()).toBe(titles[4]);
+    await page.keyboard.press('ArrowRight');
+    expect(await heading.textContent()).toBe(titles[5]);
     await page.getByRole('button', { name: 'Step 1: Where the edge width changes, and why' }).click();
     await page.keyboard.press('ArrowRight');
     expect(await heading.textContent()).toBe(titles[1]);

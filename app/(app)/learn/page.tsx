@@ -12,7 +12,7 @@ export default async function LearnPage() {
     <>
       <PageHeader
         title="Why overhang forms look the way they do"
-        subtitle="Five short steps on a sandbox bridge. Move the sliders and the numbers and the picture are worked out again."
+        subtitle="Six short steps on a sandbox bridge. Move the sliders and the numbers and the picture are worked out again."
       />
       <div className="space-y-6">
         <Walkthrough />

@@ -35,7 +35,7 @@ export default async function BridgeViewPage({ params, searchParams }: { params:
         }
       />
       <div className="space-y-6">
-        <LazyBridgeViewer description={data.description} table={data.table} name={data.name} showStats={stats === '1'} offsetsHref={offsetsHref} />
+        <LazyBridgeViewer description={data.description} table={data.table} name={data.name} revision={data.revision} showStats={stats === '1'} offsetsHref={offsetsHref} />
         <EdgeWidthSummary table={data.table} />
         <SafetyCaution />
       </div>

@@ -1,0 +1,36 @@
+'use client';
+
+import { useState, type RefObject } from 'react';
+import type { PictureFn } from '../objects/PictureTaker';
+import { composePicture, downloadCanvas, type PictureCaption } from '../picture';
+import { sceneStats } from '../stats';
+
+/** Twice the picture's size on screen. */
+export const PICTURE_SCALE = 2;
+
+/** "Save picture": draws, captions, reports (window.__chordlineStats.picture) and downloads the PNG. */
+export function usePictureSaver(pictureRef: RefObject<PictureFn | null>, caption: Omit<PictureCaption, 'date'>) {
+  const [message, setMessage] = useState('');
+  const [busy, setBusy] = useState(false);
+  const save = async () => {
+    const draw = pictureRef.current;
+    if (!draw) {
+      setMessage('The 3D view is still loading; try again in a moment.');
+      return;
+    }
+    setBusy(true);
+    try {
+      const scene = draw(PICTURE_SCALE);
+      const stats = sceneStats();
+      const { canvas, report } = composePicture(scene, PICTURE_SCALE, stats.labels, { ...caption, date: new Date() });
+      stats.picture = report;
+      await downloadCanvas(canvas, report.fileName);
+      setMessage(`Saved ${report.fileName} (${report.width} × ${report.height} px)`);
+    } catch (err) {
+      setMessage(`The picture could not be saved: ${err instanceof Error ? err.message : String(err)}`);
+    } finally {
+      setBusy(false);
+    }
+  };
+  return { save, message, busy };
+}
