@@ -30,7 +30,7 @@ export default function AppRail({ user }: { user: SessionUser }) {
             <div className="font-semibold">{user.name}</div>
             <div className="text-brand-100">{ROLE_LABELS[user.role]}</div>
           </div>
-          <SignOutButton />
+          <SignOutButton userId={user.id} />
         </div>
       </div>
     </header>

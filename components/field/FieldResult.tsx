@@ -14,6 +14,8 @@ export type Verdict = {
   note: string | null;
   when: string;
   checkId: number | null;
+  /** The phone's key of a measurement not yet on the server (a photo can wait for it). */
+  clientKey: string | null;
   revision: number | null;
 };
 

@@ -1,3 +1,4 @@
+import type { CheckRow } from '@/components/checks/check-types';
 import { offlineDb, type KeptBridge } from './offline-db';
 
 /** Saves (or replaces) the phone's copy of a bridge for field mode without a connection. */
@@ -28,4 +29,13 @@ export async function forgetBridge(id: number): Promise<void> {
 export async function forgetAllBridges(): Promise<void> {
   const db = await offlineDb();
   await db.clear('bridges');
+}
+
+/** A check the server just recorded joins the kept copy's latest checks (newest first), if kept. */
+export async function addKeptCheck(bridgeId: number, check: CheckRow): Promise<void> {
+  const db = await offlineDb();
+  const tx = db.transaction('bridges', 'readwrite');
+  const copy = await tx.store.get(bridgeId);
+  if (copy) await tx.store.put({ ...copy, checks: [check, ...copy.checks.filter((c) => c.id !== check.id)] });
+  await tx.done;
 }

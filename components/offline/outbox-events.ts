@@ -4,7 +4,7 @@ import type { CheckRow } from '@/components/checks/check-types';
 export type OutboxEvent =
   | { type: 'changed' }
   | { type: 'saved'; bridgeId: number; check: CheckRow; key: string }
-  | { type: 'photo-saved'; bridgeId: number; checkId: number | null }
+  | { type: 'photo-saved'; bridgeId: number; checkId: number | null; key: string }
   | { type: 'refused'; bridgeId: number; key: string; what: string; reason: string }
   | { type: 'send-now' };
 

@@ -1,6 +1,7 @@
 import type { CheckRow } from '@/components/checks/check-types';
 import type { OutboxCheck, OutboxItem, OutboxPhoto } from './offline-db';
 import { emitOutbox } from './outbox-events';
+import { addKeptCheck } from './kept-bridges';
 import { checkSent, noteFailure, outboxItems, removeItem } from './outbox';
 
 /** How a run ended: everything of this user sent, or why it stopped (the next run starts there). */
@@ -62,10 +63,11 @@ async function sendOne(item: OutboxItem): Promise<true | 'offline' | 'busy' | 's
     if (item.kind === 'check') {
       const check = body as CheckRow;
       await checkSent(item.key, check.id);
+      await addKeptCheck(item.bridgeId, check);
       emitOutbox({ type: 'saved', bridgeId: item.bridgeId, check, key: item.key });
     } else {
       await removeItem(item.key);
-      emitOutbox({ type: 'photo-saved', bridgeId: item.bridgeId, checkId: item.checkId });
+      emitOutbox({ type: 'photo-saved', bridgeId: item.bridgeId, checkId: item.checkId, key: item.key });
     }
     return true;
   }

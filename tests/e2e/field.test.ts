@@ -28,6 +28,25 @@ async function openFieldMode(page: Page): Promise<string> {
   return id;
 }
 
+/** What waits in the phone's offline store (IndexedDB "chordline-offline", store "outbox"). */
+function outbox(page: Page): Promise<{ kind: string; bridgeId: number; body?: unknown }[]> {
+  return page.evaluate(
+    () =>
+      new Promise((resolve, reject) => {
+        const open = indexedDB.open('chordline-offline');
+        open.onerror = () => reject(open.error);
+        open.onsuccess = () => {
+          const req = open.result.transaction('outbox').objectStore('outbox').getAll();
+          req.onsuccess = () => {
+            resolve(req.result);
+            open.result.close();
+          };
+          req.onerror = () => reject(req.error);
+        };
+      }),
+  );
+}
+
 /** The decimal edge-width target shown under the feet-inches one, e.g. "4.53 ft" → 4.53. */
 async function decimalTarget(page: Page): Promise<number> {
   const text = (await page.getByTestId('target-width').locator('xpath=following-sibling::dd[1]').textContent()) ?? '';
@@ -43,6 +62,8 @@ describe('field mode on a phone', () => {
     const errors = trackPageErrors(page);
     await signIn(page, baseUrl, 'inspector@example.com');
     const id = await openFieldMode(page);
+    // The demo data already holds checks on this bridge; only the ones made here are looked at below.
+    const before: number[] = await page.evaluate(async (bridge) => (await (await fetch(`/api/bridges/${bridge}/checks`)).json()).map((c: { id: number }) => c.id), id);
 
     // Big type: the target numbers are at least 24 px; nothing scrolls sideways on the phone.
     const size = await page.getByTestId('target-width').evaluate((el) => parseFloat(getComputedStyle(el).fontSize));
@@ -81,17 +102,17 @@ describe('field mode on a phone', () => {
     await page.getByLabel(/Measured edge width/).fill(width2.toFixed(2));
     await page.getByRole('button', { name: 'Record' }).click();
     await expect.poll(() => page.getByTestId('field-verdict').textContent()).toBe('PASS');
-    await expect.poll(() => page.getByRole('status').filter({ hasText: /not sent/ }).count()).toBeGreaterThan(0);
-    const kept = await page.evaluate((bridge) => JSON.parse(localStorage.getItem(`chordline.field.pending.${bridge}`) ?? '[]'), id);
+    await expect.poll(() => page.getByRole('status').filter({ hasText: /1 waiting/ }).count()).toBeGreaterThan(0);
+    const kept = await outbox(page);
     expect(kept).toHaveLength(1);
-    expect(kept[0]).toMatchObject({ span: 1, girder: 'G1', point: 2 });
+    expect(kept[0]).toMatchObject({ kind: 'check', bridgeId: Number(id), body: { span: 1, girder: 'G1', point: 2 } });
     await context.setOffline(false);
     await expect.poll(() => page.getByText('All sent').count(), { timeout: 40000 }).toBe(1);
-    expect(await page.evaluate((bridge) => localStorage.getItem(`chordline.field.pending.${bridge}`), id)).toBeNull();
+    expect(await outbox(page)).toEqual([]);
 
     // The server has all three, judged the same way.
     const checks = await page.evaluate(async (bridge) => (await fetch(`/api/bridges/${bridge}/checks`)).json(), id);
-    const mine = checks.filter((c: { span: number; girder: string; point: number }) => c.span === 1 && c.girder === 'G1' && c.point <= 2);
+    const mine = checks.filter((c: { id: number; span: number; girder: string; point: number }) => !before.includes(c.id) && c.span === 1 && c.girder === 'G1' && c.point <= 2);
     expect(mine.find((c: { point: number }) => c.point === 0).photos).toHaveLength(1);
     expect(mine.map((c: { point: number; pass: boolean }) => [c.point, c.pass]).sort()).toEqual([
       [0, true],
@@ -102,10 +123,10 @@ describe('field mode on a phone', () => {
     // Where the top of girder was not surveyed, field mode says so instead of offering a reading box.
     await expect.poll(() => page.getByText(/not surveyed at this point/).count()).toBe(1);
 
-    // The check history shows the photo as its thumbnail (made by the served app's worker: 320 px
+    // The check history shows the photo (made a JPEG on the phone) as its thumbnail (made by the served app's worker: 320 px
     // on the longer side), not the whole file.
     await page.goto(`${baseUrl}/bridges/${id}/checks`);
-    const thumb = page.locator('img[alt^="Photo bracket.png of check"]').first();
+    const thumb = page.locator('img[alt^="Photo bracket.jpg of check"]').first();
     await thumb.waitFor();
     expect(await thumb.getAttribute('src')).toMatch(/^\/api\/attachments\/\d+\?size=thumb$/);
     await expect.poll(() => thumb.evaluate((img: HTMLImageElement) => img.complete && [img.naturalWidth, img.naturalHeight].join('×'))).toBe('320×240');

@@ -34,9 +34,10 @@ export default async function FieldPage({ params }: { params: Params }) {
       bridge={view.bridge}
       units={view.settings.units}
       groups={view.groups}
-      widthTolerance={view.settings.width_tolerance}
-      readingTolerance={view.settings.reading_tolerance}
+      tolerances={{ width: view.settings.width_tolerance, reading: view.settings.reading_tolerance, base_rod_length: view.settings.base_rod_length }}
       canRecord={roleAllows(user.role, ['inspector'])}
+      user={{ id: user.id, email: user.email }}
+      renderedAt={new Date().toISOString()}
     />
   );
 }
