@@ -4,12 +4,15 @@ import * as compute from '@/app/api/compute/route';
 import { demoBridges } from '@/lib/demo/bridges';
 import { computeOffsetTable, MAX_GIRDER_POINTS } from '@/lib/geometry';
 import { call, makeUsers, type TestUser } from './helpers';
+import { warmComputePool } from '@/lib/workers/compute-pool';
 import type { Role } from '@/lib/auth/roles';
 
 let people: Record<Role, TestUser>;
 
 beforeAll(async () => {
   people = await makeUsers();
+  // The engine runs in worker threads; let them load before the one-second answers are timed.
+  await warmComputePool();
 });
 
 /** Every answer must be one a client can act on; a hang counts as a failure, not a slow pass. */
@@ -81,9 +84,16 @@ describe('POST /api/compute', () => {
 
   it('refuses a description that asks for more work than the limit', async () => {
     const girders = Array.from({ length: 30 }, (_, i) => ({ name: `G${i + 1}`, layout: 'chord', offsets: demoBridges[0].bents.map(() => -15 + i) }));
+    // 10,000 points per span is a size no bridge reaches: refused by name before any work.
     const res = await post({ ...demoBridges[0], girders, points_per_span: 10000, top_of_girder: [] });
     expect(res.status).toBe(422);
-    expect(res.json.error).toContain(String(MAX_GIRDER_POINTS));
+    expect(res.json.error).toMatch(/points_per_span is 10000; the limit is 200/);
+    // Within every size limit, the engine's own work limit (girders × spans × points) still holds.
+    const many = Array.from({ length: 40 }, (_, i) => ({ name: `G${i + 1}`, layout: 'chord', offsets: demoBridges[0].bents.map(() => -15 + i * 0.75) }));
+    const bents = Array.from({ length: 40 }, (_, i) => ({ name: `B${i + 1}`, station: demoBridges[0].bents[0].station + i * 5, skew_deg: 0 }));
+    const work = await post({ ...demoBridges[0], bents, girders: many.map((g) => ({ ...g, offsets: bents.map(() => g.offsets[0]) })), points_per_span: 200, top_of_girder: [] });
+    expect(work.status).toBe(422);
+    expect(work.json.error).toContain(String(MAX_GIRDER_POINTS));
   });
 
   it('answers 200, 400 or 422 — never 500, never a stack — to random and hostile descriptions', async () => {

@@ -1,10 +1,12 @@
-import { z } from 'zod';
-import { withRole, ok } from '@/lib/api/with-role';
+import { withRole } from '@/lib/api/with-role';
+import { readJsonText } from '@/lib/api/body';
 import { readQuery } from '@/lib/api/query';
-import { computeFromJson, computeQuerySchema } from '@/lib/services/offsets';
+import { computeQuerySchema } from '@/lib/services/offsets';
+import { computeAnswer } from '@/lib/workers/compute-pool';
 
-// The description is checked by the engine's own schema inside computeFromJson.
-// ?interior=1 adds the interior girders' rows (their overhang fields are null).
-export const POST = withRole('signed-in', z.unknown(), async ({ req, body }) =>
-  ok(computeFromJson(body, readQuery(req, computeQuerySchema))),
-);
+// The description is checked (sizes first, then the schema, then the geometry) and computed in a
+// worker thread, so a heavy request never holds up the server. ?interior=1 adds interior girders' rows.
+export const POST = withRole('signed-in', undefined, async ({ req }) => {
+  const { interior } = readQuery(req, computeQuerySchema);
+  return computeAnswer(await readJsonText(req), interior);
+});

@@ -1,0 +1,86 @@
+/**
+ * Sizes no bridge reaches, checked on the raw JSON before any schema or engine work (the data
+ * contract's "Refused as impossible" list), and the nesting depth any request body may have.
+ * Pure: no I/O, no next/*, usable inside the compute worker.
+ */
+
+/** The contract's limits (bridge-format.md, "Refused as impossible for a bridge deck"). */
+export const DESCRIPTION_LIMITS = {
+  points_per_span: 200,
+  chord_spaces: 200,
+  alignment_elements: 10_000,
+  bents: 200,
+  girders: 40,
+  top_of_girder: 50_000,
+  deflection_values: 201,
+} as const;
+
+/** Deepest nesting of arrays and objects a request body may have (a description needs 4). */
+export const MAX_JSON_DEPTH = 32;
+
+/** At most this many problems are listed in an error body; the rest are counted. */
+export const MAX_LISTED_PROBLEMS = 20;
+
+export type SizeProblem = { path: string; message: string };
+
+const len = (v: unknown) => (Array.isArray(v) ? v.length : 0);
+
+/** Every size over the contract's limits, each naming its limit. Empty when none is over. */
+export function descriptionSizeProblems(json: unknown): SizeProblem[] {
+  if (!json || typeof json !== 'object' || Array.isArray(json)) return [];
+  const d = json as Record<string, unknown>;
+  const L = DESCRIPTION_LIMITS;
+  const out: SizeProblem[] = [];
+  const over = (path: string, n: number, limit: number, what: string) => {
+    if (n > limit) out.push({ path, message: `${what} is ${n}; the limit is ${limit} (no bridge needs more).` });
+  };
+  if (typeof d.points_per_span === 'number') over('points_per_span', d.points_per_span, L.points_per_span, 'points_per_span');
+  if (typeof d.chord_spaces === 'number') over('chord_spaces', d.chord_spaces, L.chord_spaces, 'chord_spaces');
+  const alignment = d.alignment as Record<string, unknown> | undefined;
+  over('alignment.elements', len(alignment && typeof alignment === 'object' ? alignment.elements : undefined), L.alignment_elements, 'The number of alignment elements');
+  over('bents', len(d.bents), L.bents, 'The number of bents');
+  over('girders', len(d.girders), L.girders, 'The number of girders');
+  over('top_of_girder', len(d.top_of_girder), L.top_of_girder, 'The number of surveyed girder tops');
+  if (Array.isArray(d.deflections)) {
+    d.deflections.forEach((entry, i) => {
+      const values = entry && typeof entry === 'object' ? (entry as Record<string, unknown>).values : undefined;
+      over(`deflections.${i}.values`, len(values), L.deflection_values, `Deflection table ${i + 1}'s number of values`);
+    });
+  }
+  return out;
+}
+
+/** True when arrays and objects in `value` nest deeper than `limit` (checked without recursion). */
+export function nestedDeeperThan(value: unknown, limit = MAX_JSON_DEPTH): boolean {
+  const stack: [unknown, number][] = [[value, 1]];
+  while (stack.length) {
+    const [node, depth] = stack.pop()!;
+    if (!node || typeof node !== 'object') continue;
+    if (depth > limit) return true;
+    for (const child of Array.isArray(node) ? node : Object.values(node)) {
+      if (child && typeof child === 'object') stack.push([child, depth + 1]);
+    }
+  }
+  return false;
+}
+
+/**
+ * An error body with at most {@link MAX_LISTED_PROBLEMS} problems: the first ones keyed by path,
+ * and how many there were in all, so a hostile input cannot make the answer large.
+ */
+export function shortProblemBody(error: string, problems: SizeProblem[] | Record<string, string[]>): { error: string; fields: Record<string, string[]>; problem_count: number } {
+  const entries: [string, string[]][] = Array.isArray(problems)
+    ? problems.map((p) => [p.path, [p.message]] as [string, string[]])
+    : Object.entries(problems);
+  const total = entries.reduce((n, [, v]) => n + v.length, 0);
+  const fields: Record<string, string[]> = {};
+  let listed = 0;
+  for (const [path, messages] of entries) {
+    if (listed >= MAX_LISTED_PROBLEMS) break;
+    const take = messages.slice(0, MAX_LISTED_PROBLEMS - listed).map((m) => m.slice(0, 300));
+    fields[path.slice(0, 200)] = take;
+    listed += take.length;
+  }
+  const more = total - listed;
+  return { error: more > 0 ? `${error} (first ${listed} of ${total} problems listed)` : error, fields, problem_count: total };
+}
