@@ -25,6 +25,8 @@ export type AttachmentJson = {
   thumbnail_url: string | null;
   by: string | null;
   created_at: string;
+  /** The key the phone gave the photo in its offline store; null for a photo sent directly. */
+  client_key: string | null;
 };
 
 function toJson(a: Attachment, by: string | null): AttachmentJson {
@@ -39,6 +41,7 @@ function toJson(a: Attachment, by: string | null): AttachmentJson {
     ...attachmentUrls(a.id, a.contentType),
     by,
     created_at: a.createdAt.toISOString(),
+    client_key: a.clientKey ?? null,
   };
 }
 

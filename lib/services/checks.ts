@@ -69,6 +69,8 @@ export type CheckJson = {
   superseded_by: number | null;
   by: string | null;
   created_at: string;
+  /** The key the phone gave the measurement when it was sent from its offline store; null otherwise. */
+  client_key: string | null;
   photos: CheckPhoto[];
 };
 
@@ -131,6 +133,7 @@ function toJson(c: FieldCheck, by: string | null, supersededBy: number | null, p
     superseded_by: supersededBy,
     by,
     created_at: c.createdAt.toISOString(),
+    client_key: c.clientKey ?? null,
     photos,
   };
 }
