@@ -1,6 +1,7 @@
 'use client';
 
 import { useId } from 'react';
+import OffsetPdfDownload from '@/components/offsets/OffsetPdfDownload';
 import type { DisplayStyle } from '@/lib/geometry/format';
 import type { Units } from '@/lib/units';
 
@@ -15,8 +16,8 @@ const STYLE_CHOICES: { value: DisplayStyle; label: string; hint: string }[] = [
 ];
 
 /**
- * Controls of the offset table: display style, span / side / text filters, CSV download in the
- * chosen style and print. Hidden on paper.
+ * Controls of the offset table: display style, span / side / text filters, CSV and PDF downloads in
+ * the chosen style and print. Hidden on paper.
  */
 export default function OffsetTableToolbar({
   bridgeId,
@@ -71,6 +72,7 @@ export default function OffsetTableToolbar({
           <a href={`/api/bridges/${bridgeId}/offsets.csv?style=${csvStyle}`} className="btn-secondary min-h-11" download>
             Download CSV ({units === 'm' ? 'metric' : style === 'feet-inches' ? 'feet-inches' : 'decimal feet'})
           </a>
+          <OffsetPdfDownload bridgeId={bridgeId} units={units} style={style} />
           <button type="button" className="btn-secondary min-h-11" onClick={() => window.print()}>
             Print
           </button>

@@ -1,6 +1,7 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import OffsetTables from '@/components/offsets/OffsetTables';
+import CadDownloads from '@/components/offsets/CadDownloads';
 import SafetyCaution from '@/components/SafetyCaution';
 import { requireUser } from '@/lib/auth/server-session';
 import { roleAllows } from '@/lib/auth/roles';
@@ -54,7 +55,10 @@ export default async function OffsetsPage({ params }: { params: Params }) {
         of slab over the girder to the bottom outside edge of the overhang. The form target includes the form settlement allowance. Buildup and
         drop from girder top appear where the top of girder has been surveyed; set the form from the girder, not from the deck forms.
       </p>
-      <OffsetTables bridgeId={bridge.id} bents={bents} />
+      <CadDownloads bridgeId={bridge.id} revision={bridge.revision} />
+      <div className="mt-6">
+        <OffsetTables bridgeId={bridge.id} bents={bents} />
+      </div>
     </div>
   );
 }
