@@ -4,6 +4,7 @@ import EditorField from '@/components/editor/EditorField';
 import EditorRow from '@/components/editor/EditorRow';
 import EditorSelect from '@/components/editor/EditorSelect';
 import EditorSection from '@/components/editor/EditorSection';
+import EditorSpiralFields from '@/components/editor/SpiralFields';
 import { messagesAt, messagesUnder } from '@/lib/editor/check-draft';
 import { moveItem, newKey, type ElementDraft } from '@/lib/editor/draft';
 import type { SectionProps } from '@/lib/editor/section-props';
@@ -19,10 +20,10 @@ export default function EditorAlignmentSection({ draft, update, check }: Section
     <EditorSection
       id="alignment"
       title="Alignment"
-      intro="Tangents and circular arcs laid end to end from the start point. Bearings are azimuths, clockwise from north."
+      intro="Tangents, clothoid spirals and circular arcs laid end to end from the start point, each tangent to the one before. Bearings are azimuths, clockwise from north."
       messages={messagesAt(check, 'alignment').concat(messagesAt(check, 'alignment.elements'))}
       addLabel="Add element"
-      onAdd={() => setA({ elements: [...a.elements, { key: newKey('el'), type: 'line', length: '100', radius: '', direction: 'right', rest: {} }] })}
+      onAdd={() => setA({ elements: [...a.elements, { key: newKey('el'), type: 'line', length: '100', radius: '', direction: 'right', start: 'tangent', radius_start: '', end: 'radius', radius_end: '', rest: {} }] })}
     >
       <div className="mb-3 flex flex-wrap gap-x-3 gap-y-2">
         <EditorField label="Start station" value={a.start_station} onChange={(v) => setA({ start_station: v })} placeholder={stationHint} unit={u} width="w-36 sm:w-40" messages={messagesAt(check, 'alignment.start_station')} />
@@ -33,11 +34,11 @@ export default function EditorAlignmentSection({ draft, update, check }: Section
       <ol className="space-y-2">
         {a.elements.map((e, i) => {
           const p = `alignment.elements.${i}`;
-          const shown = [`${p}.length`, `${p}.radius`, `${p}.type`, `${p}.direction`];
+          const shown = [`${p}.length`, `${p}.radius`, `${p}.type`, `${p}.direction`, `${p}.radius_start`, `${p}.radius_end`];
           return (
             <EditorRow
               key={e.key}
-              title={`Element ${i + 1}: ${e.type === 'line' ? 'tangent' : 'arc'}`}
+              title={`Element ${i + 1}: ${e.type === 'line' ? 'tangent' : e.type === 'arc' ? 'arc' : 'spiral'}`}
               index={i}
               count={a.elements.length}
               minRows={1}
@@ -48,12 +49,13 @@ export default function EditorAlignmentSection({ draft, update, check }: Section
               <EditorSelect
                 label="Type"
                 value={e.type}
-                onChange={(v) => setEl(i, { type: v, radius: e.radius || '1000' })}
+                onChange={(v) => setEl(i, { type: v, radius: e.radius || '1000', radius_end: e.radius_end || e.radius || '1000' })}
                 options={[
                   { value: 'line', label: 'Tangent' },
+                  { value: 'spiral', label: 'Spiral' },
                   { value: 'arc', label: 'Arc' },
                 ]}
-                width="w-24"
+                width="w-28"
               />
               <EditorField label="Length" value={e.length} onChange={(v) => setEl(i, { length: v })} unit={u} messages={messagesAt(check, `${p}.length`)} />
               {e.type === 'arc' ? (
@@ -71,6 +73,7 @@ export default function EditorAlignmentSection({ draft, update, check }: Section
                   />
                 </>
               ) : null}
+              {e.type === 'spiral' ? <EditorSpiralFields element={e} path={p} units={u} check={check} onChange={(patch) => setEl(i, patch)} /> : null}
             </EditorRow>
           );
         })}

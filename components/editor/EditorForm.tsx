@@ -6,6 +6,7 @@ import EditorAlignmentSection from '@/components/editor/AlignmentSection';
 import EditorBentSection from '@/components/editor/BentSection';
 import EditorCrossSlopeSection from '@/components/editor/CrossSlopeSection';
 import EditorDeckSection from '@/components/editor/DeckSection';
+import EditorDeflectionSection from '@/components/editor/DeflectionSection';
 import EditorGirderSection from '@/components/editor/GirderSection';
 import EditorMessages from '@/components/editor/EditorMessages';
 import EditorPointsSection from '@/components/editor/PointsSection';
@@ -13,7 +14,7 @@ import EditorPreview from '@/components/editor/EditorPreview';
 import EditorProfileSection from '@/components/editor/ProfileSection';
 import EditorSaveBar, { type SaveState } from '@/components/editor/SaveBar';
 import LandXmlImport from '@/components/bridges/LandXmlImport';
-import { checkDraft } from '@/lib/editor/check-draft';
+import { checkDraft, type DraftCheck } from '@/lib/editor/check-draft';
 import { alignmentToDraft, pvisToDraft, toDraft, type Draft } from '@/lib/editor/draft';
 import type { BridgeDescription } from '@/lib/geometry';
 import type { ImportedAlignment } from '@/lib/import/landxml';
@@ -25,22 +26,30 @@ const SECTIONS = [
   { id: 'deck', title: 'Deck', prefixes: ['deck'] },
   { id: 'bents', title: 'Bents', prefixes: ['bents'] },
   { id: 'girders', title: 'Girders', prefixes: ['girders'] },
+  { id: 'deflections', title: 'Deflections', prefixes: ['deflections'] },
   { id: 'points', title: 'Points', prefixes: ['points_per_span', 'chord_spaces'] },
 ];
 const under = (path: string, prefix: string) => path === prefix || path.startsWith(`${prefix}.`);
 
+type EditorProps =
+  | { bridgeId: number; revision: number; description: BridgeDescription; initialDraft?: undefined; footer?: undefined }
+  /** A bridge not stored yet (the new-bridge page): `footer` gets the checked draft and does the saving. */
+  | { bridgeId?: undefined; revision?: undefined; description?: BridgeDescription; initialDraft?: Draft; footer: (check: DraftCheck) => React.ReactNode };
+
 /**
  * The geometry editor: every part of the bridge description as rows that can be added, removed and
  * reordered, checked as the user types against the shared schema and the engine's geometric checks,
- * with a live plan preview, and saved as a new revision on top of the one it was opened on.
+ * with a live plan preview, and saved as a new revision on top of the one it was opened on (or, for
+ * a new bridge, handed to the page's own footer to create it).
  */
-export default function EditorForm({ bridgeId, revision, description }: { bridgeId: number; revision: number; description: BridgeDescription }) {
-  const [draft, setDraft] = useState<Draft>(() => toDraft(description));
-  const [base, setBase] = useState(revision);
+export default function EditorForm({ bridgeId, revision, description, initialDraft, footer }: EditorProps) {
+  const [draft, setDraft] = useState<Draft>(() => initialDraft ?? toDraft(description!));
+  const [base, setBase] = useState(revision ?? 0);
   const [dirty, setDirty] = useState(false);
   const [note, setNote] = useState('');
   const [save, setSave] = useState<SaveState>({ kind: 'idle' });
   const [imported, setImported] = useState<string | null>(null);
+  const [profileRequest, setProfileRequest] = useState<string[] | null>(null);
   const deferred = useDeferredValue(draft);
   const check = useMemo(() => checkDraft(deferred), [deferred]);
   const current = useMemo(() => (deferred === draft ? check : checkDraft(draft)), [check, deferred, draft]);
@@ -52,7 +61,7 @@ export default function EditorForm({ bridgeId, revision, description }: { bridge
   }, []);
 
   // Warn before leaving with unsaved changes, except after a stale save: then reloading is the way on.
-  const guard = dirty && save.kind !== 'stale';
+  const guard = dirty && save.kind !== 'stale' && !footer;
   useEffect(() => {
     if (!guard) return;
     const warn = (e: BeforeUnloadEvent) => e.preventDefault();
@@ -62,11 +71,14 @@ export default function EditorForm({ bridgeId, revision, description }: { bridge
 
   function applyImport(item: ImportedAlignment, fileName: string) {
     update((d) => ({ ...d, alignment: { ...alignmentToDraft(item.alignment, d.units), rest: d.alignment.rest }, pvis: item.profile ? pvisToDraft(item.profile.pvis, d.units) : d.pvis }));
-    setImported(`The alignment${item.profile ? ' and profile' : ''} of “${item.name}” from ${fileName} replaced the ones in the editor. Check the bents and cross slopes against the new stations, then save a revision.`);
+    setImported(
+      `The alignment${item.profile ? ' and profile' : ''} of “${item.name}” from ${fileName} replaced the ones in the editor. ${item.profile ? '' : 'The file gave no usable profile: enter it in the Profile section. '}Check the bents and cross slopes against the new stations, then save a revision.`,
+    );
+    setProfileRequest(item.profile ? null : [`“${item.name}” from ${fileName} came without a profile; the PVIs below are the ones the editor had. Enter the profile from the plans.`, ...(item.profile_left_out ?? [])]);
   }
 
   async function onSave() {
-    if (current.problemCount > 0) return;
+    if (current.problemCount > 0 || bridgeId === undefined) return;
     setSave({ kind: 'saving' });
     try {
       const res = await sendJson<{ revision: number }>(`/api/bridges/${bridgeId}/revisions`, 'POST', { base_revision: base, description: current.description, note });
@@ -74,6 +86,7 @@ export default function EditorForm({ bridgeId, revision, description }: { bridge
       setDirty(false);
       setNote('');
       setImported(null);
+      setProfileRequest(null);
       setSave({ kind: 'saved', revision: res.revision });
     } catch (err) {
       if (err instanceof ApiError && err.status === 409) setSave({ kind: 'stale', message: err.message });
@@ -118,13 +131,18 @@ export default function EditorForm({ bridgeId, revision, description }: { bridge
           </div>
         ) : null}
         <EditorAlignmentSection {...props} />
-        <EditorProfileSection {...props} />
+        <EditorProfileSection {...props} request={profileRequest} />
         <EditorCrossSlopeSection {...props} />
         <EditorDeckSection {...props} />
         <EditorBentSection {...props} />
         <EditorGirderSection {...props} />
+        <EditorDeflectionSection {...props} />
         <EditorPointsSection {...props} />
-        <EditorSaveBar bridgeId={bridgeId} base={base} note={note} onNote={setNote} onSave={onSave} state={save} problemCount={current.problemCount} dirty={dirty} />
+        {footer ? (
+          footer(current)
+        ) : (
+          <EditorSaveBar bridgeId={bridgeId} base={base} note={note} onNote={setNote} onSave={onSave} state={save} problemCount={current.problemCount} dirty={dirty} />
+        )}
       </div>
       <aside id="preview" className="min-w-0 scroll-mt-4 lg:sticky lg:top-4 lg:self-start" aria-label="Live preview">
         <EditorPreview check={check} stale={deferred !== draft} />

@@ -8,7 +8,7 @@ import { moveItem, newKey, type PviDraft } from '@/lib/editor/draft';
 import type { SectionProps } from '@/lib/editor/section-props';
 
 /** Profile grade line: PVIs in station order, each with an optional symmetric vertical curve. */
-export default function EditorProfileSection({ draft, update, check }: SectionProps) {
+export default function EditorProfileSection({ draft, update, check, request = null }: SectionProps & { request?: string[] | null }) {
   const u = draft.units;
   const set = (pvis: PviDraft[]) => update((d) => ({ ...d, pvis }));
   const setRow = (i: number, patch: Partial<PviDraft>) => set(draft.pvis.map((p, j) => (j === i ? { ...p, ...patch } : p)));
@@ -22,6 +22,18 @@ export default function EditorProfileSection({ draft, update, check }: SectionPr
       addLabel="Add PVI"
       onAdd={() => set([...draft.pvis, { key: newKey('pvi'), station: '', elevation: '', curve_length: '', rest: {} }])}
     >
+      {request ? (
+        <div role="alert" className="mb-3 rounded-md border border-caution-500 bg-caution-100 p-3 text-sm text-caution-700" data-testid="profile-request">
+          <p className="font-semibold">{request[0]}</p>
+          {request.length > 1 ? (
+            <ul className="mt-1 list-disc pl-5">
+              {request.slice(1).map((r) => (
+                <li key={r}>{r}</li>
+              ))}
+            </ul>
+          ) : null}
+        </div>
+      ) : null}
       <ol className="space-y-2">
         {draft.pvis.map((v, i) => {
           const p = `profile.pvis.${i}`;

@@ -7,19 +7,24 @@
  */
 import { numberInputText, type Parsed, parseNumber, parsePercent, parseStation, percentInputText, stationInputText, type Units } from '@/lib/units';
 import type { AlignmentInput, BridgeDescription, PviInput } from '@/lib/geometry';
+import { deflectionsFromDraft, deflectionsToDraft, type DeflectionDraft } from './deflection-draft';
+import type { OffsetDraft } from './draft-types';
+import { edgeFromDraft, edgeToDraft, offsetDraft, type EdgeDraft } from './edge-draft';
 
-export type Side = 'LT' | 'RT';
-export interface OffsetDraft {
-  magnitude: string;
-  side: Side;
-}
+export type { OffsetDraft, Side } from './draft-types';
+export { offsetDraft } from './edge-draft';
 type Rest = Record<string, unknown>;
+/** An alignment element as typed; a spiral's start and end are each a tangent or a radius. */
 export interface ElementDraft {
   key: string;
-  type: 'line' | 'arc';
+  type: 'line' | 'arc' | 'spiral';
   length: string;
   radius: string;
   direction: 'left' | 'right';
+  start: 'tangent' | 'radius';
+  radius_start: string;
+  end: 'tangent' | 'radius';
+  radius_end: string;
   rest: Rest;
 }
 export interface PviDraft {
@@ -51,8 +56,8 @@ export interface GirderDraft {
   rest: Rest;
 }
 export interface DeckDraft {
-  left_edge_offset: OffsetDraft;
-  right_edge_offset: OffsetDraft;
+  left_edge_offset: EdgeDraft;
+  right_edge_offset: EdgeDraft;
   slab_thickness: string;
   edge_thickness: string;
   left_barrier_width: string;
@@ -72,6 +77,8 @@ export interface Draft {
   girders: GirderDraft[];
   points_per_span: string;
   chord_spaces: string;
+  /** Dead-load deflections per girder and span (none when the bridge has none). */
+  deflections: DeflectionDraft[];
   /** Fields the editor does not show (top_of_girder, future optional fields), carried through unchanged. */
   rest: Rest;
 }
@@ -79,11 +86,6 @@ export interface Draft {
 let counter = 0;
 /** A key for a new row (stable across re-renders and reordering). */
 export const newKey = (prefix: string) => `${prefix}-${Date.now().toString(36)}-${(counter++).toString(36)}`;
-
-export function offsetDraft(value: number | undefined): OffsetDraft {
-  if (value === undefined || !Number.isFinite(value)) return { magnitude: '', side: 'RT' };
-  return { magnitude: numberInputText(Math.abs(value)), side: value < 0 ? 'LT' : 'RT' };
-}
 
 function omit<T extends object>(obj: T, keys: string[]): Rest {
   const out: Rest = {};
@@ -103,8 +105,12 @@ export function alignmentToDraft(al: AlignmentInput, u: Units): Draft['alignment
       type: e.type,
       length: numberInputText(e.length),
       radius: e.type === 'arc' ? numberInputText(e.radius) : '',
-      direction: e.type === 'arc' ? e.direction : 'right',
-      rest: omit(e, ['type', 'length', 'radius', 'direction']),
+      direction: e.type === 'line' ? 'right' : e.direction,
+      start: e.type === 'spiral' && e.radius_start === null ? 'tangent' : 'radius',
+      radius_start: e.type === 'spiral' ? numberInputText(e.radius_start) : '',
+      end: e.type === 'spiral' && e.radius_end === null ? 'tangent' : 'radius',
+      radius_end: e.type === 'spiral' ? numberInputText(e.radius_end) : '',
+      rest: omit(e, ['type', 'length', 'radius', 'direction', 'radius_start', 'radius_end']),
     })),
     rest: omit(al, ['start_station', 'start_x', 'start_y', 'start_bearing_deg', 'elements']),
   };
@@ -138,8 +144,8 @@ export function toDraft(d: BridgeDescription): Draft {
       rest: omit(c, ['station', 'left', 'right']),
     })),
     deck: {
-      left_edge_offset: offsetDraft(d.deck.left_edge_offset),
-      right_edge_offset: offsetDraft(d.deck.right_edge_offset),
+      left_edge_offset: edgeToDraft(d.deck.left_edge_offset, u),
+      right_edge_offset: edgeToDraft(d.deck.right_edge_offset, u),
       slab_thickness: numberInputText(d.deck.slab_thickness),
       edge_thickness: numberInputText(d.deck.edge_thickness),
       left_barrier_width: numberInputText(d.deck.left_barrier_width),
@@ -151,7 +157,8 @@ export function toDraft(d: BridgeDescription): Draft {
     girders: d.girders.map((g) => ({ key: newKey('girder'), name: g.name, layout: g.layout, offsets: g.offsets.map(offsetDraft), rest: omit(g, ['name', 'layout', 'offsets']) })),
     points_per_span: numberInputText(d.points_per_span),
     chord_spaces: numberInputText(d.chord_spaces),
-    rest: omit(d, ['name', 'units', 'alignment', 'profile', 'cross_slopes', 'deck', 'bents', 'girders', 'points_per_span', 'chord_spaces']),
+    deflections: deflectionsToDraft(d.deflections),
+    rest: omit(d, ['name', 'units', 'alignment', 'profile', 'cross_slopes', 'deck', 'bents', 'girders', 'points_per_span', 'chord_spaces', 'deflections']),
   };
 }
 
@@ -200,6 +207,10 @@ export function toDescription(draft: Draft): { description: Record<string, unkno
         const p = `alignment.elements.${i}`;
         const length = num(`${p}.length`, e.length, `a length in ${u}`);
         if (e.type === 'line') return { ...e.rest, type: 'line', length };
+        if (e.type === 'spiral') {
+          const r = (which: 'start' | 'end') => (e[which] === 'tangent' ? null : num(`${p}.radius_${which}`, e[`radius_${which}`], `a radius in ${u}`));
+          return { ...e.rest, type: 'spiral', length, radius_start: r('start'), radius_end: r('end'), direction: e.direction };
+        }
         return { ...e.rest, type: 'arc', length, radius: num(`${p}.radius`, e.radius, `a radius in ${u}`), direction: e.direction };
       }),
     },
@@ -221,8 +232,8 @@ export function toDescription(draft: Draft): { description: Record<string, unkno
       const d = draft.deck;
       const out: Rest = {
         ...d.rest,
-        left_edge_offset: offset('deck.left_edge_offset', d.left_edge_offset),
-        right_edge_offset: offset('deck.right_edge_offset', d.right_edge_offset),
+        left_edge_offset: edgeFromDraft('deck.left_edge_offset', d.left_edge_offset, offset, station),
+        right_edge_offset: edgeFromDraft('deck.right_edge_offset', d.right_edge_offset, offset, station),
         slab_thickness: num('deck.slab_thickness', d.slab_thickness, `a thickness in ${u}`),
         edge_thickness: num('deck.edge_thickness', d.edge_thickness, `a thickness in ${u}`),
         left_barrier_width: num('deck.left_barrier_width', d.left_barrier_width, `a width in ${u}`),
@@ -249,6 +260,7 @@ export function toDescription(draft: Draft): { description: Record<string, unkno
   if (n !== undefined) description.points_per_span = n;
   const m = whole('chord_spaces', draft.chord_spaces, 'Chord spaces');
   if (m !== undefined) description.chord_spaces = m;
+  if (draft.deflections.length > 0) description.deflections = deflectionsFromDraft(draft.deflections, (path, text, what) => num(path, text, what));
   return { description, errors };
 }
 
