@@ -9,7 +9,7 @@ export const MAX_JSON_BYTES = 1024 * 1024;
  * Reads a request body into memory, stopping as soon as it passes `cap` bytes (declared or actual).
  * `tooLarge` and `missing` make the errors the caller wants to answer with.
  */
-export async function readBodyLimited(req: NextRequest, cap: number, tooLarge: () => Error, missing: () => Error): Promise<Buffer> {
+export async function readBodyLimited(req: Request, cap: number, tooLarge: () => Error, missing: () => Error): Promise<Buffer> {
   const declared = Number(req.headers.get('content-length') ?? '0');
   if (declared > cap) throw tooLarge();
   const reader = req.body?.getReader();

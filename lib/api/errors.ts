@@ -1,7 +1,23 @@
 import { NextResponse } from 'next/server';
-import type { z } from 'zod';
+import {
+  ConflictError,
+  DomainError,
+  fieldErrors,
+  invalidFields,
+  NotFoundError,
+  TooLargeError,
+  UnprocessableError,
+  UnsupportedTypeError,
+  UpstreamError,
+  ValidationError,
+} from '@/lib/errors';
 
-/** An error a person can act on, with the HTTP status it maps to. The message is shown as is. */
+export { fieldErrors };
+
+/**
+ * An error of the HTTP edge itself (body reading, origin and content-type checks), with its status.
+ * Below the edge, code throws the domain errors of lib/errors.ts instead. The message is shown as is.
+ */
 export class HttpError extends Error {
   constructor(
     readonly status: number,
@@ -12,21 +28,25 @@ export class HttpError extends Error {
   }
 }
 
-/** zod issues keyed by their dotted path ("girders.0.offsets"), the form the API and forms share. */
-export function fieldErrors(error: z.ZodError): Record<string, string[]> {
-  const fields: Record<string, string[]> = {};
-  for (const issue of error.issues) {
-    const key = issue.path.length ? issue.path.map(String).join('.') : '_';
-    (fields[key] ??= []).push(issue.message);
-  }
-  return fields;
+/** A failed zod parse of a request: 400 with the field errors. */
+export function invalidInput(error: Parameters<typeof invalidFields>[0]): ValidationError {
+  return invalidFields(error);
 }
 
-export function invalidInput(error: z.ZodError): HttpError {
-  const fields = fieldErrors(error);
-  const first = Object.entries(fields)[0];
-  const where = first && first[0] !== '_' ? ` (${first[0]}: ${first[1][0]})` : first ? ` (${first[1][0]})` : '';
-  return new HttpError(400, `Some fields are not valid${where}. Correct them and try again.`, fields);
+/** The HTTP status of each domain error. */
+const STATUS: [new (...args: never[]) => DomainError, number][] = [
+  [ValidationError, 400],
+  [NotFoundError, 404],
+  [ConflictError, 409],
+  [TooLargeError, 413],
+  [UnsupportedTypeError, 415],
+  [UnprocessableError, 422],
+  [UpstreamError, 502],
+];
+
+/** The HTTP status a domain error maps to (400 for one of no known kind). */
+export function statusOf(err: DomainError): number {
+  return STATUS.find(([kind]) => err instanceof kind)?.[1] ?? 400;
 }
 
 export function jsonError(status: number, error: string, fields?: Record<string, string[]>): NextResponse {
@@ -36,6 +56,7 @@ export function jsonError(status: number, error: string, fields?: Record<string,
 /** Maps anything thrown in a handler to a JSON answer that never carries a stack trace. */
 export function errorResponse(err: unknown): NextResponse {
   if (err instanceof HttpError) return jsonError(err.status, err.message, err.fields);
+  if (err instanceof DomainError) return jsonError(statusOf(err), err.message, err.fields);
   console.error('[chordline] unhandled error:', err);
   return jsonError(500, 'Something went wrong on the server. Try again; if it keeps happening, tell your administrator.');
 }

@@ -3,9 +3,9 @@
  * limit, optional `units` field with the bridge's unit), decodes the text and hands it to the
  * importer. Nothing is stored: the answer is fragments for the editor to show and the user to save.
  */
-import type { NextRequest } from 'next/server';
 import { z } from 'zod';
 import { HttpError } from '@/lib/api/errors';
+import { TooLargeError, ValidationError } from '@/lib/errors';
 import { filePart, readMultipart } from '@/lib/uploads/multipart';
 import type { AlignmentElementInput } from '@/lib/geometry';
 import { LandXmlAlignmentsError, LandXmlError, parseLandXml, type ImportedAlignment, type LengthUnit, type SkippedAlignment } from './landxml';
@@ -26,7 +26,7 @@ export interface LandXmlImportResponse {
   profile: ImportedAlignment['profile'];
 }
 
-const tooLarge = () => new HttpError(413, 'The file is larger than 5 MB. Export only the alignments you need and try again.', { file: ['Choose a file of 5 MB or less.'] });
+const tooLarge = () => new TooLargeError('The file is larger than 5 MB. Export only the alignments you need and try again.', { file: ['Choose a file of 5 MB or less.'] });
 
 /** Decodes the bytes by their byte-order mark or declared encoding; 415 when they are not text. */
 function decode(bytes: Uint8Array): string {
@@ -75,20 +75,23 @@ function failedFields(failed: SkippedAlignment[]): Record<string, string[]> {
   return fields;
 }
 
-/** Reads and imports an uploaded LandXML file; throws HttpError (400, 413, 415, 422) with a message a person can act on. */
-export async function importLandXmlUpload(req: NextRequest): Promise<LandXmlImportResponse> {
+/**
+ * Reads and imports an uploaded LandXML file (the upload edge: the reader's own errors keep their HTTP
+ * status); throws ValidationError, TooLargeError or HttpError (400, 415, 422) with a message a person can act on.
+ */
+export async function importLandXmlUpload(req: Request): Promise<LandXmlImportResponse> {
   let form: FormData;
   let file: File;
   try {
     form = await readMultipart(req, LANDXML_MAX_BYTES);
     file = filePart(form, 'file', LANDXML_MAX_BYTES);
   } catch (err) {
-    if (err instanceof HttpError && err.status === 413) throw tooLarge();
+    if (err instanceof TooLargeError) throw tooLarge();
     throw err;
   }
   const unitsRaw = form.get('units');
   const units = unitsField.safeParse(typeof unitsRaw === 'string' && unitsRaw !== '' ? unitsRaw : undefined);
-  if (!units.success) throw new HttpError(400, 'The units field must be "ft" or "m".', { units: [units.error.issues[0].message] });
+  if (!units.success) throw new ValidationError('The units field must be "ft" or "m".', { units: [units.error.issues[0].message] });
   const text = decode(new Uint8Array(await file.arrayBuffer()));
   try {
     const result = parseLandXml(text, units.data);

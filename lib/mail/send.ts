@@ -3,7 +3,7 @@ import path from 'node:path';
 import nodemailer from 'nodemailer';
 import { dataDir } from '@/lib/config';
 import { db } from '@/lib/db/connection';
-import { HttpError } from '@/lib/api/errors';
+import { UpstreamError } from '@/lib/errors';
 import { OutboxMessage } from '@/models';
 
 /** A text attachment (the field sheet CSV). */
@@ -53,7 +53,7 @@ export async function sendMail(message: MailMessage, userId: number | null): Pro
       return { via: 'smtp', messageId: info.messageId, outboxId: null };
     } catch (err) {
       console.error('[chordline] SMTP send failed:', (err as Error).message);
-      throw new HttpError(502, 'The mail server did not accept the message. Try again later, or tell your administrator.');
+      throw new UpstreamError('The mail server did not accept the message. Try again later, or tell your administrator.');
     } finally {
       transport.close();
     }

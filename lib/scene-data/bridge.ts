@@ -14,7 +14,7 @@ export interface BridgeSceneData {
   table: OffsetTable;
 }
 
-/** @throws HttpError 404 when there is no such bridge; 422 when its geometry cannot be computed. */
+/** @throws NotFoundError when there is no such bridge; UnprocessableError when its geometry cannot be computed. */
 export async function sceneDataForBridge(id: string): Promise<BridgeSceneData> {
   const detail = await getBridge(id);
   const { table } = await offsetsForBridge(id);

@@ -1,6 +1,5 @@
-import type { NextRequest } from 'next/server';
 import { z } from 'zod';
-import { HttpError, invalidInput } from '@/lib/api/errors';
+import { invalidFields, NotFoundError, UnsupportedTypeError, ValidationError } from '@/lib/errors';
 import type { SessionUser } from '@/lib/auth/session';
 import { db } from '@/lib/db/connection';
 import { filePart, readMultipart } from '@/lib/uploads/multipart';
@@ -11,7 +10,7 @@ import { Attachment, FieldCheck, User } from '@/models';
 import { attachmentUrls } from './attachment-urls';
 import { audit } from './audit';
 import { markFieldActivity } from './bridge-status';
-import { findBridgeById } from './tolerances';
+import { requireBridge } from './require-bridge';
 
 export type AttachmentJson = {
   id: number;
@@ -73,8 +72,8 @@ async function findReplay(bridgeId: number, clientKey: string | undefined): Prom
  * the user's name is kept only as neutralised text. A `client_key` field (8-64 of A-Z a-z 0-9 - _) makes
  * a resend return the attachment already stored under it (`replayed: true`) instead of a second copy.
  */
-export async function uploadAttachment(user: SessionUser, bridgeId: string, req: NextRequest): Promise<AttachmentJson & { replayed: boolean }> {
-  const bridge = await findBridgeById(bridgeId);
+export async function uploadAttachment(user: SessionUser, bridgeId: string, req: Request): Promise<AttachmentJson & { replayed: boolean }> {
+  const bridge = await requireBridge(bridgeId);
   const form = await readMultipart(req);
   const file = filePart(form);
   const text = (k: string) => {
@@ -82,19 +81,19 @@ export async function uploadAttachment(user: SessionUser, bridgeId: string, req:
     return typeof v === 'string' && v !== '' ? v : undefined;
   };
   const fields = uploadFieldsSchema.safeParse({ check_id: text('check_id'), caption: text('caption'), client_key: text('client_key') });
-  if (!fields.success) throw invalidInput(fields.error);
+  if (!fields.success) throw invalidFields(fields.error);
   const replay = await findReplay(bridge.id, fields.data.client_key);
   if (replay) return { ...replay, replayed: true };
   const bytes = new Uint8Array(await file.arrayBuffer());
   const type = sniffType(bytes);
   if (!type) {
-    throw new HttpError(415, 'Only photos (JPEG, PNG or WebP) and PDF files can be attached; this file is none of those, whatever its name says.', {
+    throw new UnsupportedTypeError('Only photos (JPEG, PNG or WebP) and PDF files can be attached; this file is none of those, whatever its name says.', {
       file: ['Choose a JPEG, PNG or WebP photo, or a PDF.'],
     });
   }
   if (fields.data.check_id !== undefined) {
     const check = await FieldCheck.findOne({ where: { id: fields.data.check_id, bridgeId: bridge.id } });
-    if (!check) throw new HttpError(400, 'That check does not belong to this bridge.', { check_id: ['Choose a check of this bridge.'] });
+    if (!check) throw new ValidationError('That check does not belong to this bridge.', { check_id: ['Choose a check of this bridge.'] });
   }
   const storedName = await saveUpload(bytes, type.ext);
   const sequelize = await db();
@@ -140,7 +139,7 @@ export async function uploadAttachment(user: SessionUser, bridgeId: string, req:
 
 /** Every attachment of a bridge, newest first. */
 export async function listAttachments(bridgeId: string): Promise<AttachmentJson[]> {
-  const bridge = await findBridgeById(bridgeId);
+  const bridge = await requireBridge(bridgeId);
   const rows = await Attachment.findAll({
     where: { bridgeId: bridge.id },
     include: [{ model: User, as: 'user', attributes: ['name'] }],
@@ -169,14 +168,14 @@ export async function attachmentResponse(id: string, size: 'full' | 'thumb' = 'f
   await db();
   const n = Number(id);
   const a = Number.isInteger(n) && n > 0 ? await Attachment.findByPk(n) : null;
-  if (!a) throw new HttpError(404, 'There is no attachment with that id.');
+  if (!a) throw new NotFoundError('There is no attachment with that id.');
   const image = a.contentType.startsWith('image/');
-  if (size === 'thumb' && !image) throw new HttpError(400, 'Only photos have thumbnails; ask for the file itself.', { size: ['Leave size out for a PDF.'] });
+  if (size === 'thumb' && !image) throw new ValidationError('Only photos have thumbnails; ask for the file itself.', { size: ['Leave size out for a PDF.'] });
   const original = async () => {
     try {
       return await readUpload(a.storedName);
     } catch {
-      throw new HttpError(404, 'The file of this attachment is missing from the server.');
+      throw new NotFoundError('The file of this attachment is missing from the server.');
     }
   };
   const thumb = size === 'thumb' ? await thumbnailOf(a.storedName, original) : null;

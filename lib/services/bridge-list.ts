@@ -1,6 +1,7 @@
 import { Op, type Order, type WhereOptions } from 'sequelize';
 import { z } from 'zod';
-import { HttpError } from '@/lib/api/errors';
+import { ValidationError } from '@/lib/errors';
+import { requireBridge } from './require-bridge';
 import { db } from '@/lib/db/connection';
 import { Bridge } from '@/models';
 import { recordOf, STAGES, type BridgeRecord } from './bridge-record';
@@ -73,14 +74,14 @@ function encodeCursor(c: Cursor): string {
 }
 
 function decodeCursor(text: string, sort: Sort): Cursor {
-  const bad = () => new HttpError(400, 'That cursor is not one this server gave out; start again from the first page.', { cursor: ['Use the X-Next-Cursor value of the previous page.'] });
+  const bad = () => new ValidationError('That cursor is not one this server gave out; start again from the first page.', { cursor: ['Use the X-Next-Cursor value of the previous page.'] });
   let parsed: z.infer<typeof cursorSchema>;
   try {
     parsed = cursorSchema.parse(JSON.parse(Buffer.from(text, 'base64url').toString('utf8')));
   } catch {
     throw bad();
   }
-  if (parsed[0] !== sort) throw new HttpError(400, `That cursor belongs to the ${parsed[0]} order; start again from the first page.`, { cursor: ['The order changed; drop the cursor.'] });
+  if (parsed[0] !== sort) throw new ValidationError(`That cursor belongs to the ${parsed[0]} order; start again from the first page.`, { cursor: ['The order changed; drop the cursor.'] });
   if (parsed[0] === 'activity' && Number.isNaN(Date.parse(parsed[1]))) throw bad();
   return { sort: parsed[0], key: parsed[1], id: parsed[2] };
 }

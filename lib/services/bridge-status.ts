@@ -1,5 +1,5 @@
 import type { Transaction } from 'sequelize';
-import { HttpError } from '@/lib/api/errors';
+import { DomainError } from '@/lib/errors';
 import { db } from '@/lib/db/connection';
 import type { OffsetTable } from '@/lib/geometry';
 import { Bridge, FieldCheck, SignOff } from '@/models';
@@ -92,7 +92,7 @@ export async function refreshStatus(bridgeId: number, options: { fieldWork?: boo
     });
   } catch (err) {
     // 404 (deleted meanwhile) and 422 (geometry that cannot be built) keep the last counters.
-    if (err instanceof HttpError) return;
+    if (err instanceof DomainError) return;
     console.error('[chordline] bridge status recount failed:', (err as Error).message);
   }
 }

@@ -2,7 +2,8 @@ import { Op } from 'sequelize';
 import { z } from 'zod';
 import { Bridge, GeometryRevision, User } from '@/models';
 import { db } from '@/lib/db/connection';
-import { HttpError } from '@/lib/api/errors';
+import { ConflictError, DomainError, NotFoundError, ValidationError } from '@/lib/errors';
+import { requireBridge } from './require-bridge';
 import type { SessionUser } from '@/lib/auth/session';
 import type { BridgeDescription } from '@/lib/geometry';
 import { checkedDescription } from './description';
@@ -36,28 +37,15 @@ function summary(b: Bridge): BridgeSummary {
   return { id: b.id, name: b.name, units: b.units, revision: b.currentRevision, updatedAt: b.updatedAt.toISOString(), ...recordOf(b) };
 }
 
-function parseId(id: string | number): number {
-  const n = Number(id);
-  if (!Number.isInteger(n) || n <= 0) throw new HttpError(404, 'There is no bridge with that id.');
-  return n;
-}
-
-async function findBridge(id: string | number): Promise<Bridge> {
-  await db();
-  const bridge = await Bridge.findByPk(parseId(id));
-  if (!bridge) throw new HttpError(404, 'There is no bridge with that id.');
-  return bridge;
-}
-
 /** The stored description of one revision (the latest when `revision` is omitted). */
 export async function getRevisionDescription(bridgeId: number, revision: number): Promise<BridgeDescription> {
   const row = await GeometryRevision.findOne({ where: { bridgeId, revision } });
-  if (!row) throw new HttpError(404, `Revision ${revision} of this bridge does not exist.`);
+  if (!row) throw new NotFoundError(`Revision ${revision} of this bridge does not exist.`);
   return JSON.parse(row.description) as BridgeDescription;
 }
 
 export async function getBridge(id: string | number): Promise<BridgeDetail> {
-  const bridge = await findBridge(id);
+  const bridge = await requireBridge(id);
   return { ...summary(bridge), description: await getRevisionDescription(bridge.id, bridge.currentRevision) };
 }
 
@@ -89,7 +77,7 @@ export async function listBridges(): Promise<BridgeRow[]> {
 
 /** Renames a bridge and/or changes its record; one audit event for each. */
 export async function updateBridge(user: SessionUser, id: string, input: z.infer<typeof updateBridgeSchema>): Promise<BridgeSummary> {
-  const bridge = await findBridge(id);
+  const bridge = await requireBridge(id);
   const sequelize = await db();
   await sequelize.transaction(async (transaction) => {
     const before = bridge.name;
@@ -108,7 +96,7 @@ export async function updateBridge(user: SessionUser, id: string, input: z.infer
 }
 
 export async function deleteBridge(user: SessionUser, id: string): Promise<void> {
-  const bridge = await findBridge(id);
+  const bridge = await requireBridge(id);
   const sequelize = await db();
   await sequelize.transaction(async (transaction) => {
     await GeometryRevision.destroy({ where: { bridgeId: bridge.id }, transaction });
@@ -118,7 +106,7 @@ export async function deleteBridge(user: SessionUser, id: string): Promise<void>
 }
 
 export async function listRevisions(id: string): Promise<RevisionSummary[]> {
-  const bridge = await findBridge(id);
+  const bridge = await requireBridge(id);
   const rows = await GeometryRevision.findAll({
     where: { bridgeId: bridge.id },
     include: [{ model: User, as: 'author', attributes: ['name', 'email'] }],
@@ -135,17 +123,17 @@ export async function listRevisions(id: string): Promise<RevisionSummary[]> {
  * update, so of several saves on the same base exactly one wins and the rest get 409.
  */
 export async function createRevision(user: SessionUser, id: string, input: z.infer<typeof createRevisionSchema>) {
-  const bridge = await findBridge(id);
+  const bridge = await requireBridge(id);
   const description = checkedDescription(input.description);
   if (description.units !== bridge.units) {
-    throw new HttpError(400, `This bridge is in ${bridge.units}; a revision cannot change its units.`, {
+    throw new ValidationError(`This bridge is in ${bridge.units}; a revision cannot change its units.`, {
       'description.units': [`Must stay "${bridge.units}".`],
     });
   }
   const next = input.base_revision + 1;
   const sequelize = await db();
   const stale = () =>
-    new HttpError(409, `Revision ${input.base_revision} is no longer the latest. Reload the bridge to see the newer revision, then make your change again.`);
+    new ConflictError(`Revision ${input.base_revision} is no longer the latest. Reload the bridge to see the newer revision, then make your change again.`);
   try {
     await sequelize.transaction(async (transaction) => {
       const [count] = await Bridge.update(
@@ -160,7 +148,7 @@ export async function createRevision(user: SessionUser, id: string, input: z.inf
       await audit(user.id, 'revision.create', 'bridge', bridge.id, { revision: next }, transaction);
     });
   } catch (err) {
-    if (err instanceof HttpError) throw err;
+    if (err instanceof DomainError) throw err;
     if ((err as Error).name === 'SequelizeUniqueConstraintError') throw stale();
     throw err;
   }
@@ -173,14 +161,14 @@ export type RevisionDetail = RevisionSummary & { bridge_id: number; description:
 
 /** One stored revision of a bridge with its description; 404 when the bridge or the revision is missing. */
 export async function getRevision(id: string, revision: string | number): Promise<RevisionDetail> {
-  const bridge = await findBridge(id);
+  const bridge = await requireBridge(id);
   const n = Number(revision);
-  if (!Number.isInteger(n) || n <= 0) throw new HttpError(404, `Revision ${String(revision).slice(0, 20)} of this bridge does not exist.`);
+  if (!Number.isInteger(n) || n <= 0) throw new NotFoundError(`Revision ${String(revision).slice(0, 20)} of this bridge does not exist.`);
   const row = await GeometryRevision.findOne({
     where: { bridgeId: bridge.id, revision: n },
     include: [{ model: User, as: 'author', attributes: ['name'] }],
   });
-  if (!row) throw new HttpError(404, `Revision ${n} of this bridge does not exist.`);
+  if (!row) throw new NotFoundError(`Revision ${n} of this bridge does not exist.`);
   const author = (row as GeometryRevision & { author?: User | null }).author;
   return {
     bridge_id: bridge.id,

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { HttpError } from '@/lib/api/errors';
+import { ValidationError } from '@/lib/errors';
 import type { SessionUser } from '@/lib/auth/session';
 import { db } from '@/lib/db/connection';
 import { bracketVerdict } from '@/lib/field/verdict';
@@ -9,7 +9,8 @@ import { attachmentUrls } from './attachment-urls';
 import { audit } from './audit';
 import { refreshStatus } from './bridge-status';
 import { offsetsForBridge, offsetsForRevision } from './offsets';
-import { fieldSettingsOf, findBridgeById } from './tolerances';
+import { fieldSettingsOf } from './tolerances';
+import { requireBridge } from './require-bridge';
 
 const measurement = (what: string) =>
   z
@@ -86,16 +87,16 @@ export function bracketRows(table: OffsetTable): OffsetPoint[] {
 export function findBracket(table: OffsetTable, span: number, girder: string, point: number): OffsetPoint {
   const spans = [...new Set(table.points.map((p) => p.span))].sort((a, b) => a - b);
   if (!spans.includes(span)) {
-    throw new HttpError(400, `This bridge has no span ${span}.`, { span: [`Choose a span from ${spans[0]} to ${spans[spans.length - 1]}.`] });
+    throw new ValidationError(`This bridge has no span ${span}.`, { span: [`Choose a span from ${spans[0]} to ${spans[spans.length - 1]}.`] });
   }
   const inSpan = table.points.filter((p) => p.span === span);
   const exterior = [...new Set(inSpan.filter((p) => p.side !== 'interior').map((p) => p.girder))];
   const girders = [...new Set(inSpan.map((p) => p.girder))];
   if (!girders.includes(girder)) {
-    throw new HttpError(400, `This bridge has no girder "${girder}".`, { girder: [`Choose an exterior girder: ${exterior.join(' or ')}.`] });
+    throw new ValidationError(`This bridge has no girder "${girder}".`, { girder: [`Choose an exterior girder: ${exterior.join(' or ')}.`] });
   }
   if (!exterior.includes(girder)) {
-    throw new HttpError(400, `${girder} is an interior girder; overhang checks are made at the exterior girders (${exterior.join(' and ')}).`, {
+    throw new ValidationError(`${girder} is an interior girder; overhang checks are made at the exterior girders (${exterior.join(' and ')}).`, {
       girder: [`${girder} carries no overhang. Choose ${exterior.join(' or ')}.`],
     });
   }
@@ -103,7 +104,7 @@ export function findBracket(table: OffsetTable, span: number, girder: string, po
   const row = rows.find((p) => p.point === point);
   if (!row) {
     const last = Math.max(...rows.map((p) => p.point));
-    throw new HttpError(400, `Span ${span} has girder points 0 to ${last}; there is no point ${point}.`, { point: [`Choose a point from 0 to ${last}.`] });
+    throw new ValidationError(`Span ${span} has girder points 0 to ${last}; there is no point ${point}.`, { point: [`Choose a point from 0 to ${last}.`] });
   }
   return row;
 }
@@ -159,8 +160,7 @@ export async function recordCheck(user: SessionUser, bridgeId: string, input: Ch
   const width = input.measured_edge_width ?? null;
   const reading = input.measured_drop_from_girder_top ?? null;
   if (reading !== null && row.drop_from_girder_top === null) {
-    throw new HttpError(
-      400,
+    throw new ValidationError(
       `The top of girder was not surveyed at span ${row.span}, ${row.girder}, point ${row.point}, so there is no level-bar reading to check there. Record the edge width, or ask the engineer to add the survey.`,
       { measured_drop_from_girder_top: ['No top-of-girder survey at this point; a level-bar reading cannot be checked here.'] },
     );
@@ -258,6 +258,6 @@ export async function listChecks(bridgeId: number): Promise<CheckJson[]> {
 
 /** GET /api/bridges/:id/checks: the bridge must exist (404 otherwise). */
 export async function listChecksForBridge(bridgeId: string): Promise<CheckJson[]> {
-  const bridge = await findBridgeById(bridgeId);
+  const bridge = await requireBridge(bridgeId);
   return listChecks(bridge.id);
 }

@@ -1,13 +1,13 @@
 import { parseBridge, parseBridgeSchema, type BridgeDescription } from '@/lib/geometry';
-import { HttpError } from '@/lib/api/errors';
+import { UnprocessableError, ValidationError } from '@/lib/errors';
 
-function schemaError(result: { fields: Record<string, string[]>; message: string }, fieldPrefix: string): HttpError {
+function schemaError(result: { fields: Record<string, string[]>; message: string }, fieldPrefix: string): ValidationError {
   const fields: Record<string, string[]> = {};
   for (const [k, v] of Object.entries(result.fields)) {
     const key = fieldPrefix === '_' ? k : k === '_' ? fieldPrefix : `${fieldPrefix}.${k}`;
     fields[key] = v;
   }
-  return new HttpError(400, result.message, fields);
+  return new ValidationError(result.message, fields);
 }
 
 /**
@@ -18,7 +18,7 @@ export function checkedDescription(json: unknown, fieldPrefix = 'description'): 
   const result = parseBridge(json);
   if (result.ok) return result.bridge;
   if (result.kind === 'schema') throw schemaError(result, fieldPrefix);
-  throw new HttpError(422, result.message);
+  throw new UnprocessableError(result.message);
 }
 
 /** The schema check alone (400 with field errors); the caller computes, which checks the geometry. */

@@ -1,5 +1,5 @@
 import { AuditEvent, User } from '@/models';
-import { findBridgeById } from './tolerances';
+import { requireBridge } from './require-bridge';
 
 export type AuditJson = { id: number; action: string; label: string; by: string | null; detail: Record<string, unknown>; created_at: string };
 
@@ -20,7 +20,7 @@ const DETAIL_KEYS = ['name', 'from', 'to', 'revision', 'check', 'span', 'girder'
 
 /** The audit log of one bridge, newest first (at most `limit` events). */
 export async function bridgeAudit(bridgeId: string, limit = 300): Promise<AuditJson[]> {
-  const bridge = await findBridgeById(bridgeId);
+  const bridge = await requireBridge(bridgeId);
   const rows = await AuditEvent.findAll({
     where: { entityType: 'bridge', entityId: String(bridge.id) },
     include: [{ model: User, as: 'user', attributes: ['name'] }],

@@ -4,7 +4,7 @@
  */
 import { z } from 'zod';
 import type { OffsetTable } from '@/lib/geometry';
-import { HttpError } from '@/lib/api/errors';
+import { ValidationError } from '@/lib/errors';
 import { offsetsForBridge } from './offsets';
 import { fieldSettingsOf } from './tolerances';
 import { csvCell } from '@/lib/geometry/csv';
@@ -170,7 +170,7 @@ export async function loadFieldSheet(bridgeId: string, span: number | null): Pro
   const { bridge, table } = await offsetsForBridge(bridgeId);
   const spans = [...new Set(table.points.map((p) => p.span))].sort((a, b) => a - b);
   if (span !== null && !spans.includes(span)) {
-    throw new HttpError(400, `This bridge has no span ${span}.`, { span: [`Choose a span from ${spans[0]} to ${spans[spans.length - 1]}.`] });
+    throw new ValidationError(`This bridge has no span ${span}.`, { span: [`Choose a span from ${spans[0]} to ${spans[spans.length - 1]}.`] });
   }
   const settings = fieldSettingsOf(bridge);
   return {

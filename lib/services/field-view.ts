@@ -1,5 +1,5 @@
-import { notFound } from 'next/navigation';
-import { HttpError } from '@/lib/api/errors';
+import { UnprocessableError } from '@/lib/errors';
+import { requireBridge } from './require-bridge';
 import { buildSheetGroups, type SheetGroup } from './field-sheet';
 import { offsetsForBridge } from './offsets';
 import { fieldSettingsOf, type FieldSettings } from './tolerances';
@@ -10,7 +10,8 @@ export type FieldView =
 
 /**
  * What the field pages need: the bridge, its tolerances and the bracket rows of its latest revision.
- * A missing bridge is the not-found page; geometry that cannot be built comes back as a problem text.
+ * A missing bridge throws NotFoundError (the page shows its not-found page); geometry that cannot be
+ * built comes back as a problem text.
  */
 export async function loadFieldView(id: string): Promise<FieldView> {
   try {
@@ -23,10 +24,8 @@ export async function loadFieldView(id: string): Promise<FieldView> {
       groups: buildSheetGroups(table, settings.base_rod_length, null),
     };
   } catch (err) {
-    if (err instanceof HttpError && err.status === 404) notFound();
-    if (err instanceof HttpError && err.status === 422) {
-      const { findBridgeById } = await import('./tolerances');
-      const bridge = await findBridgeById(id);
+    if (err instanceof UnprocessableError) {
+      const bridge = await requireBridge(id);
       return { ok: false, bridge: { id: bridge.id, name: bridge.name, revision: bridge.currentRevision }, problem: err.message };
     }
     throw err;

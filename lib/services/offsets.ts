@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { computeOffsetTable, GeometryError, offsetTableToCsv, type BridgeDescription, type OffsetTable } from '@/lib/geometry';
-import { HttpError } from '@/lib/api/errors';
+import { UnprocessableError, ValidationError } from '@/lib/errors';
+import { requireBridge } from './require-bridge';
 import { Bridge } from '@/models';
 import { db } from '@/lib/db/connection';
 import { schemaCheckedDescription } from './description';
@@ -12,7 +13,7 @@ export function computeChecked(bridge: BridgeDescription): OffsetTable {
   try {
     return computeOffsetTable(bridge);
   } catch (err) {
-    if (err instanceof GeometryError) throw new HttpError(422, err.message);
+    if (err instanceof GeometryError) throw new UnprocessableError(err.message);
     throw err;
   }
 }
@@ -45,10 +46,7 @@ const CACHE_LIMIT = 200;
  * and survey stamp.
  */
 export async function offsetsForBridge(id: string): Promise<{ bridge: Bridge; table: OffsetTable }> {
-  await db();
-  const n = Number(id);
-  const bridge = Number.isInteger(n) && n > 0 ? await Bridge.findByPk(n) : null;
-  if (!bridge) throw new HttpError(404, 'There is no bridge with that id.');
+  const bridge = await requireBridge(id);
   const survey = await storedSurvey(bridge.id);
   const key = `${bridge.id}:${bridge.createdAt.getTime()}:${bridge.currentRevision}:${survey.stamp}`;
   let table = cache.get(key);
@@ -68,7 +66,7 @@ export async function offsetsForBridge(id: string): Promise<{ bridge: Bridge; ta
 export async function offsetsForRevision(bridge: Bridge, revision: number): Promise<OffsetTable> {
   if (revision === bridge.currentRevision) return (await offsetsForBridge(String(bridge.id))).table;
   if (revision > bridge.currentRevision) {
-    throw new HttpError(400, `This bridge is at revision ${bridge.currentRevision}; there is no revision ${revision} yet.`, {
+    throw new ValidationError(`This bridge is at revision ${bridge.currentRevision}; there is no revision ${revision} yet.`, {
       revision: [`Choose a revision from 1 to ${bridge.currentRevision}.`],
     });
   }

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { HttpError } from '@/lib/api/errors';
+import { ConflictError, ValidationError } from '@/lib/errors';
 import type { SessionUser } from '@/lib/auth/session';
 import { db } from '@/lib/db/connection';
 import type { OffsetTable } from '@/lib/geometry';
@@ -116,7 +116,7 @@ export async function signOffSpan(user: SessionUser, bridgeId: string, input: z.
   const { bridge, table } = await offsetsForBridge(bridgeId);
   const spans = [...new Set(table.points.map((p) => p.span))].sort((a, b) => a - b);
   if (!spans.includes(input.span)) {
-    throw new HttpError(400, `This bridge has no span ${input.span}.`, { span: [`Choose a span from ${spans[0]} to ${spans[spans.length - 1]}.`] });
+    throw new ValidationError(`This bridge has no span ${input.span}.`, { span: [`Choose a span from ${spans[0]} to ${spans[spans.length - 1]}.`] });
   }
   const sequelize = await db();
   const created = await sequelize.transaction(async (transaction) => {
@@ -125,14 +125,13 @@ export async function signOffSpan(user: SessionUser, bridgeId: string, input: z.
     if (missing.length > 0) {
       const fields: Record<string, string[]> = {};
       for (const m of missing) (fields[`${m.girder} point ${m.point}`] ??= []).push(`${m.measure}: ${m.reason}`);
-      throw new HttpError(
-        409,
+      throw new ConflictError(
         `Span ${input.span} cannot be signed off yet: ${missing.length} ${missing.length === 1 ? 'check is' : 'checks are'} missing or out of tolerance (listed by girder point).`,
         fields,
       );
     }
     const existing = await SignOff.findOne({ where: { bridgeId: bridge.id, span: input.span, revision: bridge.currentRevision }, transaction });
-    if (existing) throw new HttpError(409, `Span ${input.span} is already signed off at revision ${bridge.currentRevision}.`);
+    if (existing) throw new ConflictError(`Span ${input.span} is already signed off at revision ${bridge.currentRevision}.`);
     const s = await SignOff.create({ bridgeId: bridge.id, span: input.span, revision: bridge.currentRevision, userId: user.id, note: input.note ?? '' }, { transaction });
     await audit(user.id, 'signoff.create', 'bridge', bridge.id, { signoff: s.id, span: input.span, revision: bridge.currentRevision }, transaction);
     return s;

@@ -7,7 +7,8 @@ import { Op, type Transaction } from 'sequelize';
 import { z } from 'zod';
 import { Bridge, GirderSurvey, SurveyImport, User } from '@/models';
 import { db } from '@/lib/db/connection';
-import { HttpError } from '@/lib/api/errors';
+import { ConflictError, ValidationError } from '@/lib/errors';
+import { requireBridge } from './require-bridge';
 import type { SessionUser } from '@/lib/auth/session';
 import { DEFAULT_POINTS_PER_SPAN, type BridgeDescription } from '@/lib/geometry';
 import { delimiterName, parseSurveyCsv, type SurveyCsvReport, type SurveyFraming } from '@/lib/import/survey-csv';
@@ -128,14 +129,6 @@ async function placedRows(bridgeId: number, onlyCurrent: boolean, transaction?: 
   return out;
 }
 
-async function findBridge(id: string | number): Promise<Bridge> {
-  await db();
-  const n = Number(id);
-  const bridge = Number.isInteger(n) && n > 0 ? await Bridge.findByPk(n) : null;
-  if (!bridge) throw new HttpError(404, 'There is no bridge with that id.');
-  return bridge;
-}
-
 /** Girders, span count and points per span of a description: what survey rows are checked against. */
 export function framingOf(description: BridgeDescription): SurveyFraming {
   return {
@@ -178,7 +171,7 @@ async function check(bridge: Bridge, csv: string): Promise<{ report: SurveyCsvRe
 
 /** Checks a survey CSV against the bridge's latest revision and reports every row. Writes nothing. */
 export async function previewSurvey(id: string, input: SurveyUpload): Promise<SurveyPreview> {
-  const bridge = await findBridge(id);
+  const bridge = await requireBridge(id);
   return (await check(bridge, input.csv)).preview;
 }
 
@@ -196,9 +189,9 @@ function reportFields(preview: SurveyPreview): Record<string, string[]> {
  * stamped with the time it was replaced. One transaction; one audit event.
  */
 export async function commitSurvey(user: SessionUser, id: string, input: SurveyUpload): Promise<{ import_id: number; stored: number; replaced: number; revision: number; delimiter: string }> {
-  const bridge = await findBridge(id);
+  const bridge = await requireBridge(id);
   if (input.revision !== undefined && input.revision !== bridge.currentRevision) {
-    throw new HttpError(409, `The rows were checked against revision ${input.revision}, but the bridge is now at revision ${bridge.currentRevision}. Check the file again.`);
+    throw new ConflictError(`The rows were checked against revision ${input.revision}, but the bridge is now at revision ${bridge.currentRevision}. Check the file again.`);
   }
   const { report, preview, divisions } = await check(bridge, input.csv);
   if (preview.summary.bad > 0 || preview.file_problems.length > 0 || preview.rows.length === 0) {
@@ -207,7 +200,7 @@ export async function commitSurvey(user: SessionUser, id: string, input: SurveyU
       count > 0
         ? `${count} of ${preview.summary.rows} rows have problems; nothing was stored. Correct them and import the file again.`
         : `${preview.file_problems[0] ?? 'The file holds no survey rows.'} Nothing was stored.`;
-    throw new HttpError(400, message, reportFields(preview));
+    throw new ValidationError(message, reportFields(preview));
   }
   const sequelize = await db();
   const stored = await sequelize.transaction(async (transaction) => {
@@ -246,7 +239,7 @@ export async function commitSurvey(user: SessionUser, id: string, input: SurveyU
 
 /** Stored values (current with their history) and the import log of a bridge, for the survey page and API. */
 export async function listSurvey(id: string | number): Promise<SurveyListing> {
-  const bridge = await findBridge(id);
+  const bridge = await requireBridge(id);
   const framing = framingOf(await getRevisionDescription(bridge.id, bridge.currentRevision));
   const [placed, imports] = await Promise.all([
     placedRows(bridge.id, false),

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { HttpError } from '@/lib/api/errors';
+import { requireBridge } from './require-bridge';
 import type { SessionUser } from '@/lib/auth/session';
 import { db } from '@/lib/db/connection';
 import { Bridge } from '@/models';
@@ -67,21 +67,13 @@ export const updateFieldSettingsSchema = z
   .strict()
   .refine((v) => Object.keys(v).length > 0, { message: 'Send at least one of width_tolerance, reading_tolerance, base_rod_length.' });
 
-export async function findBridgeById(id: string | number): Promise<Bridge> {
-  await db();
-  const n = Number(id);
-  const bridge = Number.isInteger(n) && n > 0 ? await Bridge.findByPk(n) : null;
-  if (!bridge) throw new HttpError(404, 'There is no bridge with that id.');
-  return bridge;
-}
-
 export async function getFieldSettings(id: string): Promise<FieldSettings> {
-  return fieldSettingsOf(await findBridgeById(id));
+  return fieldSettingsOf(await requireBridge(id));
 }
 
 /** An engineer sets the bridge's tolerances or base rod length; audited with before and after. */
 export async function updateFieldSettings(user: SessionUser, id: string, input: z.infer<typeof updateFieldSettingsSchema>): Promise<FieldSettings> {
-  const bridge = await findBridgeById(id);
+  const bridge = await requireBridge(id);
   const before = fieldSettingsOf(bridge);
   const sequelize = await db();
   await sequelize.transaction(async (transaction) => {

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { User } from '@/models';
 import { db } from '@/lib/db/connection';
-import { HttpError } from '@/lib/api/errors';
+import { NotFoundError, ValidationError } from '@/lib/errors';
 import { hashPassword } from '@/lib/auth/password';
 import { ROLES } from '@/lib/auth/roles';
 import { endSessions, forgetSessionUser, type SessionUser } from '@/lib/auth/session';
@@ -56,7 +56,7 @@ export async function createUser(actor: SessionUser | null, input: z.infer<typeo
   const existing = await User.findOne({ where: { email: input.email } });
   if (existing) {
     const removed = existing.removedAt != null;
-    throw new HttpError(400, removed ? 'That e-mail address belonged to a removed account; use another address.' : 'A user with that e-mail address already exists.', {
+    throw new ValidationError(removed ? 'That e-mail address belonged to a removed account; use another address.' : 'A user with that e-mail address already exists.', {
       email: [removed ? 'Belonged to a removed account.' : 'Already in use.'],
     });
   }
@@ -69,10 +69,10 @@ export async function updateUser(actor: SessionUser, id: string, input: z.infer<
   await db();
   const user = await findLiveUser(id);
   if (user.id === actor.id && input.role && input.role !== 'admin') {
-    throw new HttpError(400, 'You cannot take the administrator role away from yourself; ask another administrator.', { role: ['Keep your own role.'] });
+    throw new ValidationError('You cannot take the administrator role away from yourself; ask another administrator.', { role: ['Keep your own role.'] });
   }
   if (user.id === actor.id && input.disabled) {
-    throw new HttpError(400, 'You cannot disable your own account; ask another administrator.', { disabled: ['Keep your own account enabled.'] });
+    throw new ValidationError('You cannot disable your own account; ask another administrator.', { disabled: ['Keep your own account enabled.'] });
   }
   const changed: string[] = [];
   if (input.name !== undefined) {
@@ -104,7 +104,7 @@ export async function updateUser(actor: SessionUser, id: string, input: z.infer<
 async function findLiveUser(id: string): Promise<User> {
   const n = Number(id);
   const user = Number.isInteger(n) && n > 0 ? await User.findByPk(n) : null;
-  if (!user || user.removedAt) throw new HttpError(404, 'There is no user with that id.');
+  if (!user || user.removedAt) throw new NotFoundError('There is no user with that id.');
   return user;
 }
 
@@ -116,7 +116,7 @@ async function findLiveUser(id: string): Promise<User> {
 export async function removeUser(actor: SessionUser, id: string): Promise<{ removed: true; id: number }> {
   await db();
   const user = await findLiveUser(id);
-  if (user.id === actor.id) throw new HttpError(400, 'You cannot remove your own account; ask another administrator.');
+  if (user.id === actor.id) throw new ValidationError('You cannot remove your own account; ask another administrator.');
   user.removedAt = new Date();
   await user.save();
   await endSessions(user.id);

@@ -1,5 +1,5 @@
 import { notFound } from 'next/navigation';
-import { HttpError } from '@/lib/api/errors';
+import { NotFoundError } from '@/lib/errors';
 import { getBridge, listRevisions } from '@/lib/services/bridges';
 
 /** Awaits a read for a bridge page; "no such bridge" (404) becomes the not-found page. */
@@ -7,7 +7,7 @@ export async function orNotFound<T>(work: Promise<T>): Promise<T> {
   try {
     return await work;
   } catch (err) {
-    if (err instanceof HttpError && err.status === 404) notFound();
+    if (err instanceof NotFoundError) notFound();
     throw err;
   }
 }

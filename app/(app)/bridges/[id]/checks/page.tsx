@@ -8,13 +8,14 @@ import PhotoGallery from '@/components/checks/PhotoGallery';
 import PhotoUploadForm from '@/components/checks/PhotoUploadForm';
 import SignOffPanel from '@/components/checks/SignOffPanel';
 import { requireUser } from '@/lib/auth/server-session';
-import { HttpError } from '@/lib/api/errors';
+import { UnprocessableError } from '@/lib/errors';
 import { roleAllows } from '@/lib/auth/roles';
 import { listAttachments } from '@/lib/services/attachments';
 import { listChecks } from '@/lib/services/checks';
 import { bridgeAudit } from '@/lib/services/field-audit';
 import { signOffOverview } from '@/lib/services/signoff';
-import { findBridgeById, fieldSettingsOf } from '@/lib/services/tolerances';
+import { requireBridge } from '@/lib/services/require-bridge';
+import { fieldSettingsOf } from '@/lib/services/tolerances';
 import BridgeBreadcrumb from '@/components/BridgeBreadcrumb';
 import { orNotFound } from '../load-bridge';
 
@@ -23,7 +24,7 @@ export const metadata: Metadata = { title: 'Checks and sign-off' };
 type Params = Promise<{ id: string }>;
 
 function load(id: string) {
-  return orNotFound(findBridgeById(id));
+  return orNotFound(requireBridge(id));
 }
 
 export default async function ChecksPage({ params }: { params: Params }) {
@@ -37,7 +38,7 @@ export default async function ChecksPage({ params }: { params: Params }) {
     listAttachments(String(bridge.id)),
     bridgeAudit(String(bridge.id)),
     signOffOverview(String(bridge.id)).catch((err) => {
-      if (err instanceof HttpError && err.status === 422) return { problem: err.message };
+      if (err instanceof UnprocessableError) return { problem: err.message };
       throw err;
     }),
   ]);

@@ -5,6 +5,7 @@ import GeometryProblem from '@/components/editor/GeometryProblem';
 import { requireUser } from '@/lib/auth/server-session';
 import { roleAllows } from '@/lib/auth/roles';
 import { loadFieldView } from '@/lib/services/field-view';
+import { orNotFound } from '../load-bridge';
 
 export const metadata: Metadata = { title: 'Field mode' };
 
@@ -13,7 +14,7 @@ type Params = Promise<{ id: string }>;
 export default async function FieldPage({ params }: { params: Params }) {
   const { id } = await params;
   const user = await requireUser(`/bridges/${id}/field`);
-  const view = await loadFieldView(id);
+  const view = await orNotFound(loadFieldView(id));
   if (!view.ok || view.groups.length === 0) {
     return (
       <div className="max-w-xl">

@@ -9,6 +9,7 @@ import { dateTimeText, lengthText } from '@/lib/units';
 import { requireUser } from '@/lib/auth/server-session';
 import { roleAllows } from '@/lib/auth/roles';
 import { loadFieldView } from '@/lib/services/field-view';
+import { orNotFound } from '../load-bridge';
 import { ROD_DEFINITION } from '@/lib/services/field-sheet';
 import BridgeBreadcrumb from '@/components/BridgeBreadcrumb';
 
@@ -21,7 +22,7 @@ export default async function SheetPage({ params, searchParams }: { params: Para
   const { id } = await params;
   const user = await requireUser(`/bridges/${id}/sheet`);
   const { span: spanText } = await searchParams;
-  const view = await loadFieldView(id);
+  const view = await orNotFound(loadFieldView(id));
   const crumbs = (
     <BridgeBreadcrumb bridge={view.bridge} here="Field sheet" />
   );
