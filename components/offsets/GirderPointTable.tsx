@@ -9,9 +9,16 @@ import OffsetSortHeader, { type SortDirection } from '@/components/offsets/Offse
 
 const SIDE_NAME = { left: 'Left', right: 'Right' } as const;
 
-type Key = 'point' | 'station' | 'offset' | 'edge_width' | 'edge_drop' | 'form_target' | 'top_of_girder' | 'buildup' | 'drop_from_girder_top';
+type Key = 'point' | 'station' | 'offset' | 'edge_width' | 'edge_drop' | 'form_target' | 'top_of_girder' | 'buildup' | 'drop_from_girder_top' | 'deflection' | 'screed_grade';
+type Column = { key: Key; label: string; kind: 'count' | 'station' | 'offset' | 'length' | 'elevation'; strong?: boolean };
 
-const COLUMNS: { key: Key; label: string; kind: 'count' | 'station' | 'offset' | 'length' | 'elevation'; strong?: boolean }[] = [
+/** Shown only when the bridge has deflections: the sag still to come, and the grade the screed strikes. */
+const DEFLECTION_COLUMNS: Column[] = [
+  { key: 'deflection', label: 'Deflection', kind: 'length' },
+  { key: 'screed_grade', label: 'Screed grade', kind: 'elevation' },
+];
+
+const COLUMNS: Column[] = [
   { key: 'point', label: 'Point', kind: 'count' },
   { key: 'station', label: 'Station', kind: 'station' },
   { key: 'offset', label: 'Offset', kind: 'offset' },
@@ -34,6 +41,7 @@ export default function GirderPointTable({
   units,
   style,
   summary,
+  deflections = false,
 }: {
   span: number;
   side: 'left' | 'right';
@@ -41,7 +49,10 @@ export default function GirderPointTable({
   units: Units;
   style: DisplayStyle;
   summary?: SpanSummary;
+  /** The bridge has a deflection table: add the deflection and screed-grade columns. */
+  deflections?: boolean;
 }) {
+  const columns = deflections ? [...COLUMNS.slice(0, 6), ...DEFLECTION_COLUMNS, ...COLUMNS.slice(6)] : COLUMNS;
   const [sort, setSort] = useState<{ key: Key; direction: SortDirection }>({ key: 'point', direction: 'ascending' });
   const girder = rows[0]?.girder ?? summary?.girder ?? '';
   const fast = summary?.fastest_change ?? null;
@@ -92,7 +103,7 @@ export default function GirderPointTable({
         </caption>
         <thead className="bg-concrete-100">
           <tr className="align-bottom">
-            {COLUMNS.map((c, i) => (
+            {columns.map((c, i) => (
               <OffsetSortHeader
                 key={c.key}
                 label={c.label}
@@ -114,7 +125,7 @@ export default function GirderPointTable({
                 data-point={p.point}
                 className={`border-t border-concrete-100 ${marked ? 'bg-caution-100' : 'bg-white even:bg-concrete-50'} break-inside-avoid`}
               >
-                {COLUMNS.map((c, i) =>
+                {columns.map((c, i) =>
                   i === 0 ? (
                     <th
                       key={c.key}

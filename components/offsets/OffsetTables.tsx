@@ -11,7 +11,7 @@ import type { ChartBent } from '@/components/offsets/ChartStrip';
 import ChordOffsetTable from '@/components/offsets/ChordOffsetTable';
 import GeometryProblem from '@/components/editor/GeometryProblem';
 import GirderPointTable from '@/components/offsets/GirderPointTable';
-import type { ChordOffsetSetRow, OffsetPointRow, OffsetTableJson } from '@/components/offsets/offset-table-types';
+import { hasDeflections, type ChordOffsetSetRow, type OffsetPointRow, type OffsetTableJson } from '@/components/offsets/offset-table-types';
 import SlabElevationTable from '@/components/offsets/SlabElevationTable';
 import OffsetTableToolbar, { NEAR_STATION, type OffsetFilter } from '@/components/offsets/OffsetTableToolbar';
 import { parseStation, stationText, type Units } from '@/lib/units';
@@ -111,6 +111,7 @@ export default function OffsetTables({ bridgeId, bents }: { bridgeId: number; be
   const summaries = data.span_summaries ?? [];
   const allSpans = [...new Set(exterior.map((p) => p.span))].sort((a, b) => a - b);
   const groups = groupBySpan(visible, chords);
+  const deflections = hasDeflections(data.points);
   const shownStyle: DisplayStyle = units === 'm' ? 'metric' : style;
 
   return (
@@ -126,6 +127,12 @@ export default function OffsetTables({ bridgeId, bents }: { bridgeId: number; be
         shown={visible.length}
         total={exterior.length}
       />
+
+      {deflections ? (
+        <p className="rounded-md border border-brand-300 bg-brand-50 p-3 text-sm text-brand-800" data-testid="deflection-note">
+          This bridge has a dead-load deflection table: form targets, buildups and drops from the girder top include the deflection still to come, and the screed grade is the top of deck plus that deflection (set high so the deck ends at grade after the pour).
+        </p>
+      ) : null}
 
       <section aria-labelledby="charts-title" className="space-y-3">
         <h2 id="charts-title" className="text-xl font-bold text-concrete-900">
@@ -169,6 +176,7 @@ export default function OffsetTables({ bridgeId, bents }: { bridgeId: number; be
               units={units}
               style={shownStyle}
               summary={summaries.find((x) => x.span === g.span && x.side === s.side)}
+              deflections={deflections}
             />
           ))}
           {g.chords.length > 0 ? (
@@ -179,6 +187,7 @@ export default function OffsetTables({ bridgeId, bents }: { bridgeId: number; be
             </div>
           ) : null}
           <SlabElevationTable span={g.span} points={data.points.filter((p) => p.span === g.span)} units={units} />
+          {deflections ? <SlabElevationTable span={g.span} points={data.points.filter((p) => p.span === g.span)} units={units} field="screed_grade" /> : null}
         </section>
       ))}
     </div>

@@ -1,11 +1,17 @@
 import type { OffsetPointRow } from '@/components/offsets/offset-table-types';
 import { elevationCell, stationText, type Units } from '@/lib/units';
 
+/** What the table shows: the bottom of slab, or (with deflections) the screed grade, over each girder. */
+const WHAT = {
+  bottom_of_slab: { title: 'Bottom of slab', caption: 'bottom-of-slab elevation' },
+  screed_grade: { title: 'Screed grade (top of deck + deflection)', caption: 'screed grade (top of deck plus the deflection still to come)' },
+} as const;
+
 /**
- * Bottom-of-slab elevation over every girder's centreline (interior girders too) at each girder point
- * of one span: the construction elevations a designer puts on the plans. Folded by default.
+ * Bottom-of-slab elevation (or screed grade) over every girder's centreline (interior girders too) at
+ * each girder point of one span: the construction elevations a designer puts on the plans. Folded by default.
  */
-export default function SlabElevationTable({ span, points, units }: { span: number; points: OffsetPointRow[]; units: Units }) {
+export default function SlabElevationTable({ span, points, units, field = 'bottom_of_slab' }: { span: number; points: OffsetPointRow[]; units: Units; field?: keyof typeof WHAT }) {
   const girders = [...new Set(points.map((p) => p.girder))];
   const byKey = new Map(points.map((p) => [`${p.girder}\u0000${p.point}`, p]));
   const pointNumbers = [...new Set(points.map((p) => p.point))].sort((a, b) => a - b);
@@ -13,12 +19,12 @@ export default function SlabElevationTable({ span, points, units }: { span: numb
   return (
     <details className="card overflow-hidden">
       <summary className="cursor-pointer select-none px-4 py-3 font-semibold text-brand-700">
-        Bottom of slab over every girder, span {span} ({girders.length} girders, elevations in {units === 'm' ? 'm' : 'ft'})
+        {WHAT[field].title} over every girder, span {span} ({girders.length} girders, elevations in {units === 'm' ? 'm' : 'ft'})
       </summary>
       <div className="overflow-x-auto">
         <table className="w-full text-sm">
           <caption className="sr-only">
-            Span {span}: bottom-of-slab elevation over each girder centreline at each girder point
+            Span {span}: {WHAT[field].caption} over each girder centreline at each girder point
           </caption>
           <thead className="bg-concrete-100 text-concrete-700">
             <tr>
@@ -42,7 +48,7 @@ export default function SlabElevationTable({ span, points, units }: { span: numb
                   const p = byKey.get(`${g}\u0000${k}`);
                   return (
                     <td key={g} className="px-3 py-1.5 text-right tabular" title={p ? `${g} at ${stationText(p.station, units)}` : undefined}>
-                      {p ? elevationCell(p.bottom_of_slab, units) : '—'}
+                      {p ? elevationCell(p[field], units) : '—'}
                     </td>
                   );
                 })}
