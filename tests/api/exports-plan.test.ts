@@ -94,6 +94,29 @@ describe('GET /api/bridges/:id/plan.dxf', () => {
     expect(on('GUTTER').length).toBe(2);
   });
 
+  it('follows a flared edge: every vertex at the listed offset, linear in station between the rows', async () => {
+    // Contract, "deck": a flared edge is linear in station between the listed stations, constant beyond.
+    const rows = [
+      { station: 1250, offset: 21 },
+      { station: 1350, offset: 24 },
+    ];
+    const flared = { ...demo, deck: { ...demo.deck, right_edge_offset: rows } } as BridgeDescription;
+    const { on } = await readDxf(await demoBridge(people.engineer, flared));
+    const al = createAlignment(demo.alignment);
+    const expected = (s: number) => (s <= 1250 ? 21 : s >= 1350 ? 24 : 21 + ((s - 1250) / 100) * 3);
+    const right = on('DECK-EDGE').find((e) => al.stationOffset((e.vertices as { x: number; y: number }[])[0].x, (e.vertices as { x: number; y: number }[])[0].y).offset > 0);
+    const vs = right?.vertices as { x: number; y: number }[];
+    let inFlare = 0;
+    for (const v of vs) {
+      const so = al.stationOffset(v.x, v.y);
+      expect(Math.abs(so.offset - expected(so.station)), `station ${so.station}`).toBeLessThanOrEqual(0.001);
+      if (so.station > 1250 && so.station < 1350) inFlare++;
+    }
+    // The kinks of the flare are vertices, and the taper between them is sampled.
+    expect(inFlare).toBeGreaterThan(5);
+    for (const kink of rows) expect(vs.some((v) => Math.abs(al.stationOffset(v.x, v.y).station - kink.station) < 1e-6)).toBe(true);
+  });
+
   it('draws the alignment on its curve, ticks its stations and labels them', async () => {
     const { on } = await readDxf(await demoBridge(people.engineer));
     const line = on('ALIGNMENT', 'LWPOLYLINE');
