@@ -2,7 +2,9 @@ import type { BracketGroup } from '@/components/checks/check-types';
 import { lengthText, stationText, type Units } from '@/lib/units';
 
 /** One printed table of the field sheet: one span and exterior girder, one row per bracket, blanks to fill in. */
-export default function SheetTable({ group, units }: { group: BracketGroup; units: Units }) {
+export default function SheetTable({ group, units, deflections }: { group: BracketGroup; units: Units; deflections?: boolean }) {
+  // With a deflection table the crew also sees the sag still to come and the screed grade at each point.
+  const withDeflections = deflections ?? group.rows.some((r) => r.deflection !== 0);
   const num = (v: number | null) => (v === null ? '—' : lengthText(v, units).replace(/ (ft|m)$/, ''));
   return (
     <section className="sheet-group mb-8 break-inside-avoid print:mb-4" aria-labelledby={`sheet-${group.span}-${group.girder}`}>
@@ -22,6 +24,12 @@ export default function SheetTable({ group, units }: { group: BracketGroup; unit
               <th scope="col" className="border border-concrete-300 px-2 py-1">Form rod ({units})</th>
               <th scope="col" className="border border-concrete-300 px-2 py-1">Extra on both ({units})</th>
               <th scope="col" className="border border-concrete-300 px-2 py-1">Form target elev. ({units})</th>
+              {withDeflections ? (
+                <>
+                  <th scope="col" className="border border-concrete-300 px-2 py-1">Deflection ({units})</th>
+                  <th scope="col" className="border border-concrete-300 px-2 py-1">Screed grade ({units})</th>
+                </>
+              ) : null}
               <th scope="col" className="border border-concrete-300 px-2 py-1 bg-white">Measured width</th>
               <th scope="col" className="border border-concrete-300 px-2 py-1 bg-white">Measured reading</th>
               <th scope="col" className="border border-concrete-300 px-2 py-1 bg-white">OK / initials</th>
@@ -39,6 +47,12 @@ export default function SheetTable({ group, units }: { group: BracketGroup; unit
                 <td className="border border-concrete-300 px-2 py-1 text-right">{num(r.form_rod)}</td>
                 <td className={`border border-concrete-300 px-2 py-1 text-right ${r.extra_rod ? 'font-semibold text-caution-700' : ''}`}>{r.extra_rod === null ? '—' : num(r.extra_rod)}</td>
                 <td className="border border-concrete-300 px-2 py-1 text-right">{num(r.form_target)}</td>
+                {withDeflections ? (
+                  <>
+                    <td className="border border-concrete-300 px-2 py-1 text-right">{num(r.deflection)}</td>
+                    <td className="border border-concrete-300 px-2 py-1 text-right">{num(r.screed_grade)}</td>
+                  </>
+                ) : null}
                 <td className="min-w-24 border border-concrete-300 bg-white px-2 py-1" />
                 <td className="min-w-24 border border-concrete-300 bg-white px-2 py-1" />
                 <td className="min-w-20 border border-concrete-300 bg-white px-2 py-1" />

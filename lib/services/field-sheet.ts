@@ -7,6 +7,7 @@ import type { OffsetTable } from '@/lib/geometry';
 import { ValidationError } from '@/lib/errors';
 import { offsetsForBridge } from './offsets';
 import { fieldSettingsOf } from './tolerances';
+// eslint-disable-next-line no-restricted-imports -- csvCell (formula-safe CSV cell) is not in the engine index yet
 import { csvCell } from '@/lib/geometry/csv';
 import { lengthText, stationText, tapeLength, type Units } from '@/lib/units';
 
@@ -39,6 +40,10 @@ export type SheetRow = {
   edge_width_text: string;
   edge_width_decimal_text: string;
   form_target: number;
+  /** Dead-load deflection still to come at the girder point (positive down; 0 without a deflection table). */
+  deflection: number;
+  /** Top of deck over the girder plus the deflection: the grade the screed strikes before the pour. */
+  screed_grade: number;
   top_of_girder: number | null;
   buildup: number | null;
   /** Level-bar reading (drop from girder top), null where the top of girder was not surveyed. */
@@ -58,6 +63,8 @@ export type FieldSheet = {
   span: number | null;
   spans: number[];
   groups: SheetGroup[];
+  /** The bridge has a deflection table: the sheet shows the deflection and screed-grade columns. */
+  deflections?: boolean;
   caution: string;
   rod_definition: string;
 };
@@ -86,6 +93,8 @@ export function buildSheetGroups(table: OffsetTable, baseRod: number, span: numb
       edge_width_text: tapeLength(p.edge_width, table.units),
       edge_width_decimal_text: lengthText(p.edge_width, table.units),
       form_target: p.form_target,
+      deflection: p.deflection ?? 0,
+      screed_grade: p.screed_grade ?? p.top_of_deck,
       top_of_girder: p.top_of_girder,
       buildup: p.buildup,
       reading: p.drop_from_girder_top,
@@ -121,6 +130,7 @@ export function fieldSheetCsv(sheet: FieldSheet): string {
     `form_rod_${u}`,
     `extra_rod_${u}`,
     `form_target_${u}`,
+    ...(sheet.deflections ? [`deflection_${u}`, `screed_grade_${u}`] : []),
     `measured_edge_width_${u}`,
     `measured_reading_${u}`,
     'revision',
@@ -148,6 +158,7 @@ export function fieldSheetCsv(sheet: FieldSheet): string {
           opt(r.form_rod),
           opt(r.extra_rod),
           decimal(r.form_target, u),
+          ...(sheet.deflections ? [decimal(r.deflection, u), decimal(r.screed_grade, u)] : []),
           '',
           '',
           String(sheet.revision),
@@ -181,6 +192,7 @@ export async function loadFieldSheet(bridgeId: string, span: number | null): Pro
     span,
     spans,
     groups: buildSheetGroups(table, settings.base_rod_length, span),
+    deflections: table.points.some((p) => p.deflection !== 0),
     caution: SHEET_CAUTION,
     rod_definition: ROD_DEFINITION,
   };
