@@ -24,9 +24,14 @@ export function offsetsUnitsText(units: 'ft' | 'm', style: DisplayStyle): string
   return 'feet, to 0.01 ft';
 }
 
-function girderTable(span: number, side: 'left' | 'right', rows: OffsetPoint[], units: 'ft' | 'm', style: DisplayStyle, summary?: SpanSummary): PdfTable {
+/** True when the bridge's deflection table sets any deflection: the screen then adds its columns. */
+export function hasDeflections(table: OffsetTable): boolean {
+  return table.points.some((p) => typeof p.deflection === 'number' && p.deflection !== 0);
+}
+
+function girderTable(span: number, side: 'left' | 'right', rows: OffsetPoint[], units: 'ft' | 'm', style: DisplayStyle, summary: SpanSummary | undefined, deflections: boolean): PdfTable {
   const lu = lengthUnit(units, style);
-  const columns: PdfColumn[] = [
+  const base: PdfColumn[] = [
     { label: 'Point', share: 0.6, bold: true },
     { label: 'Station', share: 1.2 },
     { label: `Offset (${lu})`, share: 1.25 },
@@ -37,6 +42,12 @@ function girderTable(span: number, side: 'left' | 'right', rows: OffsetPoint[], 
     { label: `Buildup (${lu})`, share: 1 },
     { label: `Drop from girder top (${lu})`, share: 1.2, bold: true },
   ];
+  // As on screen: deflection and screed grade after the form target when the bridge has deflections.
+  const extra: PdfColumn[] = [
+    { label: `Deflection (${lu})`, share: 1 },
+    { label: `Screed grade (${units})`, share: 1.1 },
+  ];
+  const columns = deflections ? [...base.slice(0, 6), ...extra, ...base.slice(6)] : base;
   const sorted = [...rows].sort((a, b) => a.point - b.point);
   const fast = summary?.fastest_change ?? null;
   const girder = sorted[0]?.girder ?? summary?.girder ?? '';
@@ -55,6 +66,7 @@ function girderTable(span: number, side: 'left' | 'right', rows: OffsetPoint[], 
       lengthCell(p.edge_width, units, style),
       lengthCell(p.edge_drop, units, style),
       elevationCell(p.form_target, units),
+      ...(deflections ? [lengthCell(p.deflection, units, style), elevationCell(p.screed_grade, units)] : []),
       elevationCell(p.top_of_girder, units),
       lengthCell(p.buildup, units, style),
       lengthCell(p.drop_from_girder_top, units, style),
@@ -84,7 +96,12 @@ function chordTables(table: OffsetTable, span: number, style: DisplayStyle): Pdf
 /** Most girder columns in one bottom-of-slab table; wider bridges get several tables. */
 const SLAB_COLUMNS = 10;
 
-function slabTables(table: OffsetTable, span: number): PdfTable[] {
+const OVER_GIRDERS = {
+  bottom_of_slab: 'bottom of slab over every girder',
+  screed_grade: 'screed grade (top of deck plus the deflection still to come) over every girder',
+} as const;
+
+function slabTables(table: OffsetTable, span: number, field: keyof typeof OVER_GIRDERS = 'bottom_of_slab'): PdfTable[] {
   const points = table.points.filter((p) => p.span === span);
   const girders = [...new Set(points.map((p) => p.girder))];
   const byKey = new Map(points.map((p) => [`${p.girder}\u0000${p.point}`, p]));
@@ -94,13 +111,13 @@ function slabTables(table: OffsetTable, span: number): PdfTable[] {
     const some = girders.slice(i, i + SLAB_COLUMNS);
     const part = girders.length > SLAB_COLUMNS ? `, girders ${some[0]} to ${some[some.length - 1]}` : '';
     out.push({
-      caption: `Span ${span}: bottom of slab over every girder (${table.units})${part}`,
+      caption: `Span ${span}: ${OVER_GIRDERS[field]} (${table.units})${part}`,
       columns: [{ label: 'Point', share: 0.8, bold: true }, ...some.map((g) => ({ label: g, share: 1 }))],
       rows: numbers.map((k) => [
         String(k),
         ...some.map((g) => {
           const p = byKey.get(`${g}\u0000${k}`);
-          return p ? elevationCell(p.bottom_of_slab, table.units) : '—';
+          return p ? elevationCell(p[field], table.units) : '—';
         }),
       ]),
     });
@@ -116,12 +133,21 @@ export async function offsetsPdf(input: OffsetsPdfInput): Promise<Buffer> {
   const { table } = input;
   const units = table.units;
   const style = effectiveStyle(units, input.style);
-  const sheet = startSheet({ ...input.meta, kind: 'Offset table', unitsText: offsetsUnitsText(units, style) }, input.paper, 'portrait');
+  const deflections = hasDeflections(table);
+  // Eleven columns with the deflections: landscape keeps them readable.
+  const sheet = startSheet({ ...input.meta, kind: 'Offset table', unitsText: offsetsUnitsText(units, style) }, input.paper, deflections ? 'landscape' : 'portrait');
   paragraph(
     sheet,
     `Offsets left (LT) or right (RT) of the alignment. Edge width: girder centreline to deck edge, horizontal and square to the girder. Edge drop: bottom of slab over the girder to the bottom outside edge of the overhang. The form target includes the form settlement allowance. Buildup and drop from girder top appear where the top of girder has been surveyed.`,
     { size: 8.5, gap: 8 },
   );
+  if (deflections) {
+    paragraph(
+      sheet,
+      'This bridge has a dead-load deflection table: form targets, buildups and drops from the girder top include the deflection still to come, and the screed grade is the top of deck plus that deflection (set high so the deck ends at grade after the pour).',
+      { size: 8.5, gap: 8 },
+    );
+  }
   cautionBox(sheet, input.caution);
   const exterior = table.points.filter((p) => p.side !== 'interior');
   const spans = [...new Set(table.points.map((p) => p.span))].sort((a, b) => a - b);
@@ -131,10 +157,11 @@ export async function offsetsPdf(input: OffsetsPdfInput): Promise<Buffer> {
       const rows = exterior.filter((p) => p.span === span && p.side === side);
       if (rows.length === 0) continue;
       const summary = table.span_summaries?.find((s) => s.span === span && s.side === side);
-      drawTable(sheet, girderTable(span, side, rows, units, style, summary));
+      drawTable(sheet, girderTable(span, side, rows, units, style, summary, deflections));
     }
     for (const t of chordTables(table, span, style)) drawTable(sheet, t);
     for (const t of slabTables(table, span)) drawTable(sheet, t);
+    if (deflections) for (const t of slabTables(table, span, 'screed_grade')) drawTable(sheet, t);
   }
   return finishSheet(sheet);
 }

@@ -51,7 +51,7 @@ async function tableOf(id: string): Promise<OffsetTable> {
 }
 
 /** The girder-point row as the on-screen GirderPointTable renders it (lib/units table cells). */
-function screenRow(p: OffsetTable['points'][number], units: 'ft' | 'm', style: DisplayStyle): string {
+function screenRow(p: OffsetTable['points'][number], units: 'ft' | 'm', style: DisplayStyle, deflections = false): string {
   return [
     String(p.point),
     stationText(p.station, units),
@@ -59,6 +59,8 @@ function screenRow(p: OffsetTable['points'][number], units: 'ft' | 'm', style: D
     lengthCell(p.edge_width, units, style),
     lengthCell(p.edge_drop, units, style),
     elevationCell(p.form_target, units),
+    // With a deflection table the screen adds the deflection and the screed grade after the form target.
+    ...(deflections ? [lengthCell(p.deflection, units, style), elevationCell(p.screed_grade, units)] : []),
     elevationCell(p.top_of_girder, units),
     lengthCell(p.buildup, units, style),
     lengthCell(p.drop_from_girder_top, units, style),
@@ -111,6 +113,16 @@ describe('GET /api/bridges/:id/offsets.pdf', () => {
     const table = await tableOf(id);
     const right = table.points.filter((p) => p.side === 'right');
     for (const p of right) expect(pdf.lines.has(screenRow(p, 'ft', 'decimal-feet'))).toBe(true);
+  });
+
+  it('adds the deflection and screed-grade columns, as the screen does, when the bridge has a deflection table', async () => {
+    const deflections = [1, 2, 3].flatMap((span) => ['G1', 'G5'].map((girder) => ({ girder, span, values: [0, 0.03, 0.05, 0.06, 0.05, 0.03, 0] })));
+    const id = await demoBridge(people.engineer, { ...demoBridges[0], deflections });
+    const table = await tableOf(id);
+    expect(table.points.some((p) => p.deflection > 0)).toBe(true);
+    const pdf = await readPdf(offsetsPdf.GET, id, '?style=feet-inches');
+    for (const p of table.points.filter((q) => q.side !== 'interior')) expect(pdf.lines.has(screenRow(p, 'ft', 'feet-inches', true)), `${p.span} ${p.girder} ${p.point}`).toBe(true);
+    expect(pdf.all).toContain('screed grade (top of deck plus the deflection still to come) over every girder');
   });
 
   it('grows by pages as the table grows', async () => {
