@@ -4,7 +4,9 @@
  *   tsx lib/cli/offsets.ts <bridge.json> [--format json|csv] [--style decimal-feet|feet-inches|metric]
  *
  * JSON (default) prints the table at full precision; CSV prints display units, one row per girder
- * point. Any problem with the input prints ONE line on stderr naming it and exits with code 1.
+ * point. Problems with the input print on stderr, one line each naming the field (the first 20, then
+ * a count of the rest), and the command exits with code 1. Warnings (a spiral that kinks against its
+ * arc) print on stderr as "warning:" lines and the table is still printed.
  */
 import { readFileSync } from 'node:fs';
 import { computeOffsetTable, GeometryError, offsetTableToCsv, parseBridge, type DisplayStyle } from '../geometry';
@@ -12,8 +14,26 @@ import { computeOffsetTable, GeometryError, offsetTableToCsv, parseBridge, type 
 const USAGE = 'usage: offsets <bridge.json> [--format json|csv] [--style decimal-feet|feet-inches|metric]';
 const STYLES: readonly DisplayStyle[] = ['decimal-feet', 'feet-inches', 'metric'];
 
+function oneLine(message: string): string {
+  return message.replace(/\s*\n\s*/g, ' ');
+}
+
 function fail(message: string): never {
-  process.stderr.write(`${message.replace(/\s*\n\s*/g, ' ')}\n`);
+  process.stderr.write(`${oneLine(message)}\n`);
+  process.exit(1);
+}
+
+/** Most problems printed one per line; the rest are counted. */
+const MAX_LINES = 20;
+
+/** Every problem on its own line, named by its field path (unless the message already starts with it). */
+function failAll(file: string, problems: Array<{ path: string; message: string }>): never {
+  const lines = problems.slice(0, MAX_LINES).map(({ path, message }) => {
+    const named = path && path !== '_' && !message.startsWith(`${path}:`) ? `${path}: ${message}` : message;
+    return `${file}: ${oneLine(named)}`;
+  });
+  if (problems.length > MAX_LINES) lines.push(`${file}: and ${problems.length - MAX_LINES} more problem${problems.length - MAX_LINES > 1 ? 's' : ''}`);
+  process.stderr.write(`${lines.join('\n')}\n`);
   process.exit(1);
 }
 
@@ -56,14 +76,18 @@ function main(argv: string[]): void {
     fail(`${file}: not valid JSON (${(err as Error).message})`);
   }
   const parsed = parseBridge(json);
-  if (!parsed.ok) fail(`${file}: ${parsed.message}`);
+  if (!parsed.ok) {
+    if (parsed.kind === 'geometry') failAll(file, parsed.issues);
+    failAll(file, Object.entries(parsed.fields).flatMap(([path, messages]) => messages.map((message) => ({ path, message }))));
+  }
   let table;
   try {
     table = computeOffsetTable(parsed.bridge);
   } catch (err) {
-    if (err instanceof GeometryError) fail(`${file}: ${err.message}`);
+    if (err instanceof GeometryError) failAll(file, err.issues);
     throw err;
   }
+  for (const w of table.warnings ?? []) process.stderr.write(`${file}: warning: ${oneLine(`${w.path}: ${w.message}`)}\n`);
   process.stdout.write(format === 'csv' ? offsetTableToCsv(table, { style }) : `${JSON.stringify(table, null, 2)}\n`);
 }
 

@@ -1,10 +1,14 @@
 /**
- * Horizontal alignment: tangents and circular arcs laid end to end.
+ * Horizontal alignment: tangents, circular arcs and clothoid spirals laid end to end.
  *
  * Plan coordinates: x = easting, y = northing. Bearings are azimuths in radians inside the engine,
  * clockwise from north (north 0, east π/2); degrees only at the edges (input). Offsets are normal to
  * the alignment, positive to the RIGHT looking up-station.
  */
+import { edgeSpecOffsetAt, edgeSpecSlopeAt, isConstantEdge, type EdgeOffsetSpec } from './deck-edges';
+import { layOutSpiral, spiralBox, spiralCurvature, spiralFoot, spiralPoint, type SpiralShape } from './spiral';
+import { PARALLEL_SLOPE, residualAccepted, stepConverged } from './tolerance';
+
 
 /** A straight tangent of `length` (length units of the bridge). */
 export interface LineElementInput {
@@ -63,6 +67,8 @@ export interface StationOffset {
   offset: number;
   /** Azimuth of the alignment at that station, radians clockwise from north. */
   bearing: number;
+  /** Signed curvature of the alignment there (1/length; positive turning right, 0 on tangents). */
+  curvature: number;
 }
 
 /** Unit vector (x east, y north) of an azimuth given in radians clockwise from north; any angle. */
@@ -78,7 +84,7 @@ export function rightNormalOf(bearing: number): PlanPoint {
 const TWO_PI = 2 * Math.PI;
 
 interface Element {
-  kind: 'line' | 'arc';
+  kind: 'line' | 'arc' | 'spiral';
   startStation: number;
   length: number;
   x0: number;
@@ -89,6 +95,8 @@ interface Element {
   radius: number;
   cx: number;
   cy: number;
+  // Spiral only: its layout (curvatures, quadrature nodes).
+  spiral: SpiralShape | null;
   // Bounding box used by the nearest-element search.
   minX: number;
   minY: number;
@@ -107,6 +115,7 @@ interface BoxNode {
 }
 
 function elementPoint(e: Element, d: number): AlignmentPoint {
+  if (e.spiral) return spiralPoint(e.spiral, d);
   if (e.kind === 'line') {
     return { x: e.x0 + d * Math.sin(e.bearing0), y: e.y0 + d * Math.cos(e.bearing0), bearing: e.bearing0 };
   }
@@ -138,22 +147,38 @@ function arcParameter(e: Element, x: number, y: number): number {
   return phi * e.radius;
 }
 
+/** Signed curvature (positive turning right) of an element at distance d from its start. */
+function elementCurvature(e: Element, d: number): number {
+  if (e.spiral) return e.turn * spiralCurvature(e.spiral, d);
+  return e.kind === 'arc' ? e.turn / e.radius : 0;
+}
+
 function elementStationOffset(e: Element, x: number, y: number): StationOffset {
+  if (e.spiral) {
+    const f = spiralFoot(e.spiral, x, y);
+    return { station: e.startStation + f.t, offset: f.offset, bearing: f.bearing, curvature: elementCurvature(e, f.t) };
+  }
   if (e.kind === 'line') {
     const dx = x - e.x0;
     const dy = y - e.y0;
     const s = Math.sin(e.bearing0);
     const c = Math.cos(e.bearing0);
-    return { station: e.startStation + dx * s + dy * c, offset: dx * c - dy * s, bearing: e.bearing0 };
+    return { station: e.startStation + dx * s + dy * c, offset: dx * c - dy * s, bearing: e.bearing0, curvature: 0 };
   }
   const d = arcParameter(e, x, y);
   const dist = Math.sqrt((x - e.cx) * (x - e.cx) + (y - e.cy) * (y - e.cy));
   // Right turn: centre on the right, so going right brings the point nearer the centre.
   const offset = e.turn > 0 ? e.radius - dist : dist - e.radius;
-  return { station: e.startStation + d, offset, bearing: e.bearing0 + (e.turn * d) / e.radius };
+  return { station: e.startStation + d, offset, bearing: e.bearing0 + (e.turn * d) / e.radius, curvature: e.turn / e.radius };
 }
 
 function distanceToElement(e: Element, x: number, y: number): number {
+  if (e.spiral) {
+    const f = spiralFoot(e.spiral, x, y);
+    if (f.t >= 0 && f.t <= e.length) return Math.abs(f.offset);
+    const b = elementPoint(e, e.length);
+    return Math.sqrt(Math.min((x - e.x0) ** 2 + (y - e.y0) ** 2, (x - b.x) ** 2 + (y - b.y) ** 2));
+  }
   if (e.kind === 'line') {
     const s = Math.sin(e.bearing0);
     const c = Math.cos(e.bearing0);
@@ -200,6 +225,59 @@ function buildTree(elements: Element[], lo: number, hi: number): BoxNode {
   };
 }
 
+/** Curvature (1/length) of a spiral end radius; null (infinite) is 0. */
+function curvatureOf(radius: number | null): number {
+  return radius === null ? 0 : 1 / radius;
+}
+
+/** Lay out one element of positive length from its start point, bearing and station. */
+function layOutElement(el: AlignmentElementInput, station: number, x: number, y: number, bearing: number): Element {
+  const turn = el.type === 'line' ? 0 : el.direction === 'right' ? 1 : -1;
+  const radius = el.type === 'arc' ? el.radius : Infinity;
+  const rn = rightNormalOf(bearing);
+  const e: Element = {
+    kind: el.type,
+    startStation: station,
+    length: el.length,
+    x0: x,
+    y0: y,
+    bearing0: bearing,
+    turn,
+    radius,
+    cx: el.type === 'arc' ? x + turn * radius * rn.x : 0,
+    cy: el.type === 'arc' ? y + turn * radius * rn.y : 0,
+    spiral: el.type === 'spiral' ? layOutSpiral(x, y, bearing, el.length, curvatureOf(el.radius_start), curvatureOf(el.radius_end), turn) : null,
+    minX: 0,
+    minY: 0,
+    maxX: 0,
+    maxY: 0,
+  };
+  if (e.spiral) {
+    Object.assign(e, spiralBox(e.spiral));
+    return e;
+  }
+  const endPoint = elementPoint(e, el.length);
+  const xs = [x, endPoint.x];
+  const ys = [y, endPoint.y];
+  if (e.kind === 'arc') {
+    const sweep = el.length / radius;
+    if (sweep >= Math.PI) {
+      xs.push(e.cx - radius, e.cx + radius);
+      ys.push(e.cy - radius, e.cy + radius);
+    } else {
+      // An arc under a half turn lies inside the triangle of its ends and tangent intersection.
+      const t = radius * Math.tan(sweep / 2);
+      xs.push(x + t * Math.sin(bearing));
+      ys.push(y + t * Math.cos(bearing));
+    }
+  }
+  e.minX = Math.min(...xs);
+  e.maxX = Math.max(...xs);
+  e.minY = Math.min(...ys);
+  e.maxY = Math.max(...ys);
+  return e;
+}
+
 /**
  * A laid-out horizontal alignment. Build it once per bridge with {@link createAlignment}; every
  * query is O(log n) in the number of elements.
@@ -227,45 +305,9 @@ export class Alignment {
     for (const el of input.elements) {
       // Zero-length elements carry no geometry; skipping them keeps the search free of degenerate boxes.
       if (!(el.length > 0)) continue;
-      const turn = el.type === 'arc' ? (el.direction === 'right' ? 1 : -1) : 0;
-      const radius = el.type === 'arc' ? el.radius : Infinity;
-      const rn = rightNormalOf(bearing);
-      const e: Element = {
-        kind: el.type === 'spiral' ? 'line' : el.type,
-        startStation: station,
-        length: el.length,
-        x0: x,
-        y0: y,
-        bearing0: bearing,
-        turn,
-        radius,
-        cx: el.type === 'arc' ? x + turn * radius * rn.x : 0,
-        cy: el.type === 'arc' ? y + turn * radius * rn.y : 0,
-        minX: 0,
-        minY: 0,
-        maxX: 0,
-        maxY: 0,
-      };
-      const endPoint = elementPoint(e, el.length);
-      const xs = [x, endPoint.x];
-      const ys = [y, endPoint.y];
-      if (e.kind === 'arc') {
-        const sweep = el.length / radius;
-        if (sweep >= Math.PI) {
-          xs.push(e.cx - radius, e.cx + radius);
-          ys.push(e.cy - radius, e.cy + radius);
-        } else {
-          // An arc under a half turn lies inside the triangle of its ends and tangent intersection.
-          const t = radius * Math.tan(sweep / 2);
-          xs.push(x + t * Math.sin(bearing));
-          ys.push(y + t * Math.cos(bearing));
-        }
-      }
-      e.minX = Math.min(...xs);
-      e.maxX = Math.max(...xs);
-      e.minY = Math.min(...ys);
-      e.maxY = Math.max(...ys);
+      const e = layOutElement(el, station, x, y, bearing);
       this.elements.push(e);
+      const endPoint = elementPoint(e, el.length);
       x = endPoint.x;
       y = endPoint.y;
       bearing = endPoint.bearing;
@@ -344,7 +386,7 @@ export class Alignment {
     let along = dx * sb + dy * cb;
     if (along <= 0 || this.tree === null) {
       const off = dx * cb - dy * sb;
-      best = { station: this.startStation + along, offset: off, bearing: this.start.bearing };
+      best = { station: this.startStation + along, offset: off, bearing: this.start.bearing, curvature: 0 };
       bestDist = Math.abs(off);
       if (this.tree === null) return best;
     }
@@ -356,7 +398,7 @@ export class Alignment {
     if (along >= 0) {
       const off = dx * ce - dy * se;
       if (Math.abs(off) < bestDist) {
-        best = { station: this.endStation + along, offset: off, bearing: this.end.bearing };
+        best = { station: this.endStation + along, offset: off, bearing: this.end.bearing, curvature: 0 };
         bestDist = Math.abs(off);
       }
     }
@@ -401,6 +443,16 @@ export class Alignment {
     if (best === null) throw new SolveError(`the point (${x}, ${y}) cannot be placed against the alignment`);
     return best;
   }
+
+  /**
+   * Signed curvature of the alignment at a station (1/length; positive turning right, 0 on tangents
+   * and beyond either end). At a join the element that starts there counts.
+   */
+  curvatureAt(station: number): number {
+    if (this.elements.length === 0 || station < this.startStation || station > this.endStation) return 0;
+    const e = this.elements[this.elementIndexAt(station)];
+    return elementCurvature(e, station - e.startStation);
+  }
 }
 
 /**
@@ -424,39 +476,64 @@ export function skewedLineBearing(alignmentBearing: number, skewDeg: number): nu
 /** Thrown when a numerical solve on the alignment does not converge. */
 export class SolveError extends Error {}
 
-const SOLVE_TOLERANCE = 1e-11;
-
 /**
  * Distance t along the ray origin + t·direction (direction a unit vector) at which the offset from the
- * alignment equals `targetOffset`. Newton's method on the signed offset, whose gradient is the right
- * normal at the foot of the perpendicular. t may come out negative when the target lies behind.
+ * alignment equals the target: a constant offset, or a flared edge (offset varying with station), in
+ * which case the point's offset must equal the edge offset at the point's own station. Newton's method
+ * on offset − target, whose gradient is the right normal at the foot of the perpendicular less, for a
+ * flare, the edge's rate times the station's gradient (the tangent over 1 − κ·offset); bisection
+ * takes over when Newton stalls on a kink of a flare. t may come out negative when the target lies behind.
+ * @param target signed offset (length units, positive right) or a flared edge's station/offset list.
  * @throws SolveError when the ray runs parallel to the offset lines or does not converge.
  */
 export function distanceAlongRayToOffset(
   alignment: Alignment,
   origin: PlanPoint,
   direction: PlanPoint,
-  targetOffset: number,
+  target: EdgeOffsetSpec,
   firstGuess = 0,
 ): number {
+  const flat = typeof target === 'number' ? target : isConstantEdge(target) ? target[0].offset : null;
   // Coordinates carry rounding in proportion to their size (state-plane eastings run to millions), so
   // the step that counts as converged grows with them; Newton's last step is then far below 1e-6.
   const scale = Math.max(1, Math.abs(origin.x), Math.abs(origin.y));
+  const residual = (t: number) => {
+    const q = alignment.stationOffset(origin.x + t * direction.x, origin.y + t * direction.y);
+    return { q, f: q.offset - (flat ?? edgeSpecOffsetAt(target, q.station)) };
+  };
   let t = firstGuess;
   let best = { t, f: Infinity };
+  const bracket = { lo: NaN, hi: NaN };
   for (let iter = 0; iter < 60; iter++) {
-    const q = alignment.stationOffset(origin.x + t * direction.x, origin.y + t * direction.y);
-    const f = q.offset - targetOffset;
+    const { q, f } = residual(t);
     if (Math.abs(f) < Math.abs(best.f)) best = { t, f };
-    const slope = direction.x * Math.cos(q.bearing) - direction.y * Math.sin(q.bearing);
-    if (Math.abs(slope) < 1e-9) throw new SolveError('the line runs parallel to the alignment');
+    if (f < 0) bracket.lo = t;
+    else bracket.hi = t;
+    let slope = direction.x * Math.cos(q.bearing) - direction.y * Math.sin(q.bearing);
+    if (flat === null) {
+      const along = direction.x * Math.sin(q.bearing) + direction.y * Math.cos(q.bearing);
+      slope -= (edgeSpecSlopeAt(target, q.station) * along) / (1 - q.curvature * q.offset);
+    }
+    if (Math.abs(slope) < PARALLEL_SLOPE) throw new SolveError('the line runs parallel to the alignment');
     const step = f / slope;
     t -= step;
-    if (Math.abs(step) <= SOLVE_TOLERANCE * Math.max(scale, Math.abs(t))) return t;
+    if (stepConverged(step, Math.max(scale, Math.abs(t)))) return t;
   }
+  if (flat === null && Number.isFinite(bracket.lo) && Number.isFinite(bracket.hi)) return bisect(residual, bracket.lo, bracket.hi, scale);
   // Stalled at the floor of rounding noise: accept the best point when it is on the line to 1e-9 of scale.
-  if (Math.abs(best.f) <= 1e-9 * scale) return best.t;
+  if (residualAccepted(best.f, scale)) return best.t;
   throw new SolveError('the solve for the offset did not converge');
+}
+
+/** Bisection between a negative and a positive residual, to the solver's step tolerance. */
+function bisect(residual: (t: number) => { f: number }, lo: number, hi: number, scale: number): number {
+  for (let i = 0; i < 200; i++) {
+    const mid = (lo + hi) / 2;
+    if (residual(mid).f < 0) lo = mid;
+    else hi = mid;
+    if (stepConverged(hi - lo, Math.max(scale, Math.abs(mid)))) break;
+  }
+  return (lo + hi) / 2;
 }
 
 /**
@@ -464,20 +541,21 @@ export function distanceAlongRayToOffset(
  * @param station station where the line crosses the alignment (length units).
  * @param skewDeg degrees from the alignment's right normal, positive when the right end is further
  * up-station; |skewDeg| < 90.
- * @param offset target offset (length units, positive right). On a curve the line is straight in plan
- * while the offset is measured normal to the curve, so the point is solved numerically.
+ * @param offset target offset (length units, positive right), or a flared edge's station/offset list
+ * (the point whose offset equals the edge's offset at its own station). On a curve the line is
+ * straight in plan while the offset is measured normal to the curve, so the point is solved numerically.
  * @returns the plan point with the station and offset found by the inverse at that point.
  */
 export function pointOnSkewedLine(
   alignment: Alignment,
   station: number,
   skewDeg: number,
-  offset: number,
+  offset: EdgeOffsetSpec,
 ): PlanPoint & { station: number; offset: number } {
   const base = alignment.pointAt(station);
   const lineBearing = skewedLineBearing(base.bearing, skewDeg);
   const dir = directionOf(lineBearing);
-  const guess = offset / Math.cos((skewDeg * Math.PI) / 180);
+  const guess = edgeSpecOffsetAt(offset, station) / Math.cos((skewDeg * Math.PI) / 180);
   const t = distanceAlongRayToOffset(alignment, base, dir, offset, guess);
   const x = base.x + t * dir.x;
   const y = base.y + t * dir.y;

@@ -4,10 +4,12 @@
  */
 import { distanceAlongRayToOffset, type Alignment, type PlanPoint } from '@/lib/geometry/alignment';
 import { outwardNormal } from '@/lib/geometry/overhang';
+import type { EdgeOffsetSpec } from '@/lib/geometry/deck-edges';
 import type { ChordOffsetSet } from '@/lib/geometry/types';
 
 /**
- * Perpendicular distance from a point of a chord to the edge line (constant offset `edgeOffset`),
+ * Perpendicular distance from a point of a chord to the edge line (a constant offset, or a flared
+ * station/offset list whose line is the points at the edge offset of their own station),
  * positive when the edge lies outward of the chord (away from the alignment).
  * @param chordDirection plan direction Ea → Eb (up-station).
  */
@@ -16,7 +18,7 @@ export function chordOffsetAt(
   chordPoint: PlanPoint,
   chordDirection: PlanPoint,
   side: 'left' | 'right',
-  edgeOffset: number,
+  edgeOffset: EdgeOffsetSpec,
 ): number {
   return distanceAlongRayToOffset(alignment, chordPoint, outwardNormal(chordDirection, side), edgeOffset, 0);
 }
@@ -32,7 +34,7 @@ export function chordOffsetSet(
   side: 'left' | 'right',
   ea: PlanPoint,
   eb: PlanPoint,
-  edgeOffset: number,
+  edgeOffset: EdgeOffsetSpec,
   spaces: number,
 ): ChordOffsetSet {
   const dx = eb.x - ea.x;
@@ -58,7 +60,7 @@ export function edgeMiddleOrdinate(
   ea: PlanPoint,
   eb: PlanPoint,
   side: 'left' | 'right',
-  edgeOffset: number,
+  edgeOffset: EdgeOffsetSpec,
 ): number {
   const dir = { x: eb.x - ea.x, y: eb.y - ea.y };
   const mid = { x: (ea.x + eb.x) / 2, y: (ea.y + eb.y) / 2 };

@@ -6,6 +6,7 @@
  */
 import type { Alignment } from '@/lib/geometry/alignment';
 import type { Profile } from '@/lib/geometry/profile';
+import { edgeSpecOffsetAt, isConstantEdge, type EdgeOffsetSpec } from '@/lib/geometry/deck-edges';
 
 /** Cross slopes at one station. */
 export interface CrossSlopeInput {
@@ -14,10 +15,10 @@ export interface CrossSlopeInput {
   right: number;
 }
 
-/** Deck edges and barriers; offsets signed (left negative), lengths in the bridge's unit. */
+/** Deck edges (constant or flared) and barriers; offsets signed (left negative), lengths in the bridge's unit. */
 export interface DeckEdgesInput {
-  left_edge_offset: number;
-  right_edge_offset: number;
+  left_edge_offset: EdgeOffsetSpec;
+  right_edge_offset: EdgeOffsetSpec;
   left_barrier_width: number;
   right_barrier_width: number;
 }
@@ -48,13 +49,13 @@ export function crossSlopeAt(slopes: readonly CrossSlopeInput[], station: number
 }
 
 /**
- * Gutter line offsets: each edge moved inward (toward the alignment side of the deck) by that side's
- * barrier width. Signed offsets in length units.
+ * Gutter line offsets at a station: each edge (its offset at that station, for a flared edge) moved
+ * inward by that side's barrier width. Signed offsets in length units.
  */
-export function gutterOffsets(deck: DeckEdgesInput): { left: number; right: number } {
+export function gutterOffsets(deck: DeckEdgesInput, station = 0): { left: number; right: number } {
   return {
-    left: deck.left_edge_offset + deck.left_barrier_width,
-    right: deck.right_edge_offset - deck.right_barrier_width,
+    left: edgeSpecOffsetAt(deck.left_edge_offset, station) + deck.left_barrier_width,
+    right: edgeSpecOffsetAt(deck.right_edge_offset, station) - deck.right_barrier_width,
   };
 }
 
@@ -68,26 +69,28 @@ export function sideOfOffset(offset: number): DeckSide {
  * gutter line, level from there to the edge (under the barrier).
  */
 export class DeckSurface {
-  private readonly gutter: { left: number; right: number };
+  // Constant gutter offsets when both edges are constant; null when an edge flares.
+  private readonly gutter: { left: number; right: number } | null;
 
   constructor(
     private readonly alignment: Alignment,
     private readonly profile: Profile,
     private readonly slopes: readonly CrossSlopeInput[],
-    deck: DeckEdgesInput,
+    private readonly deck: DeckEdgesInput,
   ) {
-    this.gutter = gutterOffsets(deck);
+    this.gutter = isConstantEdge(deck.left_edge_offset) && isConstantEdge(deck.right_edge_offset) ? gutterOffsets(deck) : null;
   }
 
   /**
-   * Top of deck at a station and offset: PGL(s) + slope_side(s) × min(|o|, |gutter offset of side|).
+   * Top of deck at a station and offset: PGL(s) + slope_side(s) × min(|o|, |gutter offset of side at s|).
    * @param station length units; @param offset length units, positive right.
    * @returns elevation in length units.
    */
   topOfDeckAtStationOffset(station: number, offset: number): number {
     const side = sideOfOffset(offset);
     const slope = crossSlopeAt(this.slopes, station)[side];
-    const reach = Math.min(Math.abs(offset), Math.abs(this.gutter[side]));
+    const gutter = this.gutter ?? gutterOffsets(this.deck, station);
+    const reach = Math.min(Math.abs(offset), Math.abs(gutter[side]));
     return this.profile.elevationAt(station) + slope * reach;
   }
 

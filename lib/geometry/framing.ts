@@ -2,6 +2,7 @@
  * Framing: bent lines, girder lines and girder points.
  */
 import { pointOnSkewedLine, type Alignment, type PlanPoint } from './alignment';
+import type { EdgeOffsetSpec } from './deck-edges';
 
 /** A bent as described: station where its line crosses the alignment, skew in degrees. */
 export interface BentInput {
@@ -32,8 +33,10 @@ export interface GirderPoint extends LocatedPoint {
 /**
  * Point of bent line `bent` at offset `offset` (length units, positive right), solved numerically
  * on a curve (the bent line is straight in plan, the offset is measured normal to the alignment).
+ * `offset` may be a flared edge's station/offset list: the point whose offset equals the edge's
+ * offset at its own station.
  */
-export function bentLinePoint(alignment: Alignment, bent: BentInput, offset: number): LocatedPoint {
+export function bentLinePoint(alignment: Alignment, bent: BentInput, offset: EdgeOffsetSpec): LocatedPoint {
   return pointOnSkewedLine(alignment, bent.station, bent.skew_deg, offset);
 }
 

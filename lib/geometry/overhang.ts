@@ -2,6 +2,7 @@
  * Overhang numbers at exterior girder points: edge point, edge width and the elevations a crew sets.
  */
 import { distanceAlongRayToOffset, type Alignment, type PlanPoint } from './alignment';
+import { edgeSpecOffsetAt, type EdgeOffsetSpec } from './deck-edges';
 import type { DeckSurface } from '@/lib/geometry/cross-section';
 import type { GirderPoint } from './framing';
 
@@ -28,19 +29,21 @@ export function outwardNormal(direction: PlanPoint, side: 'left' | 'right'): Pla
 
 /**
  * Edge point of a chord-layout girder point: from Pk horizontally along the girder's plan
- * perpendicular, outward, to the deck edge line (constant offset `edgeOffset`), solved numerically.
+ * perpendicular, outward, to the deck edge line, solved numerically. A flared edge line is the set of
+ * points whose offset equals the edge offset at their own station, so the solve iterates on both.
  * @param girderDirection plan direction of the girder (Pa → Pb), any length.
- * @param edgeOffset signed offset of the edge line (length units, positive right).
+ * @param edgeOffset the edge: a signed offset (length units, positive right) or a flared station/offset list.
  */
 export function chordEdgePoint(
   alignment: Alignment,
   pk: GirderPoint,
   girderDirection: PlanPoint,
   side: 'left' | 'right',
-  edgeOffset: number,
+  edgeOffset: EdgeOffsetSpec,
 ): EdgePoint {
   const w = outwardNormal(girderDirection, side);
-  const guess = side === 'left' ? pk.offset - edgeOffset : edgeOffset - pk.offset;
+  const here = edgeSpecOffsetAt(edgeOffset, pk.station);
+  const guess = side === 'left' ? pk.offset - here : here - pk.offset;
   const t = distanceAlongRayToOffset(alignment, pk, w, edgeOffset, guess);
   const x = pk.x + t * w.x;
   const y = pk.y + t * w.y;
@@ -50,9 +53,11 @@ export function chordEdgePoint(
 
 /**
  * Edge point of a curved-layout girder point: along the alignment normal at the girder point's
- * station, so Ek lies at the same station on the edge line and the width is the offset difference.
+ * station, so Ek lies at the same station on the edge line (at the edge's offset at that station) and
+ * the width is the offset difference.
  */
-export function curvedEdgePoint(alignment: Alignment, pk: GirderPoint, side: 'left' | 'right', edgeOffset: number): EdgePoint {
+export function curvedEdgePoint(alignment: Alignment, pk: GirderPoint, side: 'left' | 'right', edge: EdgeOffsetSpec): EdgePoint {
+  const edgeOffset = edgeSpecOffsetAt(edge, pk.station);
   const p = alignment.pointAt(pk.station, edgeOffset);
   const edgeWidth = side === 'left' ? pk.offset - edgeOffset : edgeOffset - pk.offset;
   return { x: p.x, y: p.y, station: pk.station, offset: edgeOffset, edgeWidth };
@@ -67,14 +72,19 @@ export interface OverhangElevations {
   formTarget: number;
   buildup: number | null;
   dropFromGirderTop: number | null;
+  /** Deflection still to come at Pk (positive downward) and the screed grade over the girder. */
+  deflection: number;
+  screedGrade: number;
 }
 
 /**
- * Elevations at a girder point and its edge point.
+ * Elevations at a girder point and its edge point (data contract, "Definitions").
  * bottom of slab = top of deck at Pk − slab thickness; edge bottom = top of deck at Ek − edge
  * thickness; edge drop = bottom of slab − edge bottom (positive when the edge is lower); form target
- * = edge bottom + form settlement; buildup = bottom of slab − top of girder; drop from girder top =
- * top of girder − form target.
+ * = edge bottom + form settlement + deflection; buildup = bottom of slab + deflection − top of girder;
+ * drop from girder top = top of girder − form target; screed grade = top of deck + deflection.
+ * @param deflection dead-load deflection still to come at Pk (length units, positive downward; Ek
+ * rides with its girder point).
  */
 export function overhangElevations(
   surface: DeckSurface,
@@ -84,18 +94,21 @@ export function overhangElevations(
   edgeThickness: number,
   formSettlement: number,
   topOfGirder: number | null,
+  deflection = 0,
 ): OverhangElevations {
   const topOfDeck = surface.topOfDeckAtStationOffset(pk.station, pk.offset);
   const bottomOfSlab = topOfDeck - slabThickness;
   const edgeBottom = surface.topOfDeckAtStationOffset(ek.station, ek.offset) - edgeThickness;
-  const formTarget = edgeBottom + formSettlement;
+  const formTarget = edgeBottom + formSettlement + deflection;
   return {
     topOfDeck,
     bottomOfSlab,
     edgeBottom,
     edgeDrop: bottomOfSlab - edgeBottom,
     formTarget,
-    buildup: topOfGirder === null ? null : bottomOfSlab - topOfGirder,
+    buildup: topOfGirder === null ? null : bottomOfSlab + deflection - topOfGirder,
     dropFromGirderTop: topOfGirder === null ? null : topOfGirder - formTarget,
+    deflection,
+    screedGrade: topOfDeck + deflection,
   };
 }

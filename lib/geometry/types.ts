@@ -77,4 +77,9 @@ export interface OffsetTable {
   points: OffsetPoint[];
   chord_offsets: ChordOffsetSet[];
   span_summaries: SpanSummary[];
+  /**
+   * Things worth a look that do not refuse the bridge (a spiral whose end curvature differs by more
+   * than 0.1 % from the arc it joins); present only when there are some.
+   */
+  warnings?: Array<{ path: string; message: string }>;
 }
