@@ -25,7 +25,7 @@ function sourceLine({ bridge, online, kept, fromPhone }: Pick<Props, 'bridge' | 
 
 /** Field mode's header: back to the checks, the bridge, where the numbers come from, what waits to be sent. */
 export default function FieldHeader({ bridge, online, kept, fromPhone, waiting, checksFailed }: Props) {
-  const badge = waiting ? `${waiting} waiting${online ? '' : ' · offline'}` : !online || checksFailed ? 'Offline' : 'All sent';
+  const badge = waiting ? `${waiting} waiting` : !online || checksFailed ? 'Offline' : 'All sent';
   return (
     <header className="flex items-center gap-3 bg-brand-800 px-4 py-3 text-white">
       <Link href={`/bridges/${bridge.id}/checks`} className="rounded-md px-2 py-1 text-sm font-semibold text-brand-100 hover:bg-brand-700" aria-label="Leave field mode, go to the check history">

@@ -47,7 +47,7 @@ export default function FieldMode({ canRecord, user, renderedAt, ...server }: Pr
   const onSaved = useCallback((check: CheckRow) => void mutate((list) => [check, ...(list ?? []).filter((c) => c.id !== check.id)], { revalidate: false }), [mutate]);
   const queue = useFieldQueue(bridge.id, user, bridge.revision, onSaved);
 
-  const { states, current } = useBracketVerdicts({ checks, waiting: queue.items, groups, tolerances, revision: bridge.revision, span, group, row });
+  const { states, current } = useBracketVerdicts({ checks, waiting: queue.items, groups, tolerances, revision: bridge.revision, online, span, group, row });
 
   const go = (to: number) => setIndex(Math.max(0, Math.min(group.rows.length - 1, to)));
   const pickSpan = (s: number) => {

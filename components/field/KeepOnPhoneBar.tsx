@@ -16,6 +16,8 @@ type Props = {
  * opens on the deck without a connection. Once kept, says when, and updates on request.
  */
 export default function KeepOnPhoneBar({ kept, online, busy, error, onKeep }: Props) {
+  // Offline with a kept copy, the header already says where the numbers come from and when they were saved.
+  if (!online && kept) return null;
   return (
     <div className="flex items-center gap-2 border-b border-brand-900 bg-brand-900 px-4 py-1.5 text-xs text-brand-50">
       <p className="min-w-0 flex-1" data-testid="kept-status">

@@ -7,7 +7,7 @@ import { bracketVerdict } from '@/lib/field/verdict';
 export const bracketKey = (span: number, girder: string, point: number) => `${span}|${girder}|${point}`;
 
 /** The verdict the server would give, worked out at once on the phone (the server's answer replaces it). */
-export function localVerdict(p: OutboxCheck, targets: { width: number; reading: number | null }, tol: { width: number; reading: number }): Verdict {
+export function localVerdict(p: OutboxCheck, targets: { width: number; reading: number | null }, tol: { width: number; reading: number }, online: boolean): Verdict {
   const judged = bracketVerdict(
     { measuredWidth: p.body.measured_edge_width, computedWidth: targets.width, measuredReading: p.body.measured_drop_from_girder_top, computedReading: targets.reading },
     tol,
@@ -16,8 +16,8 @@ export function localVerdict(p: OutboxCheck, targets: { width: number; reading: 
     ...judged,
     measuredWidth: p.body.measured_edge_width,
     measuredReading: p.body.measured_drop_from_girder_top,
-    state: p.lastError ? 'waiting' : 'sending',
-    note: p.lastError,
+    state: p.lastError || !online ? 'waiting' : 'sending',
+    note: p.lastError ?? (online ? null : 'No connection: kept on this phone, sent when the connection returns.'),
     when: p.takenAt,
     checkId: null,
     clientKey: p.key,

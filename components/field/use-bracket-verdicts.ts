@@ -13,6 +13,7 @@ type Args = {
   groups: BracketGroup[];
   tolerances: { width: number; reading: number };
   revision: number;
+  online: boolean;
   span: number;
   group: BracketGroup;
   row: BracketRow;
@@ -22,17 +23,17 @@ type Args = {
  * The latest word on every bracket of the girder on screen (a waiting measurement, newest, wins over the
  * server's latest check), as chip states for the point strip and the verdict of the current bracket.
  */
-export function useBracketVerdicts({ checks, waiting, groups, tolerances, revision, span, group, row }: Args): { states: PointState[]; current: Verdict | null } {
+export function useBracketVerdicts({ checks, waiting, groups, tolerances, revision, online, span, group, row }: Args): { states: PointState[]; current: Verdict | null } {
   const latest = useMemo(() => {
     const map = new Map<string, Verdict>();
     for (const c of [...(checks ?? [])].reverse()) map.set(bracketKey(c.span, c.girder, c.point), serverVerdict(c));
     for (const p of waiting) {
       if (p.kind !== 'check') continue;
       const r = groups.find((g) => g.span === p.body.span && g.girder === p.body.girder)?.rows.find((x) => x.point === p.body.point);
-      if (r) map.set(bracketKey(p.body.span, p.body.girder, p.body.point), localVerdict(p, { width: r.edge_width, reading: r.reading }, tolerances));
+      if (r) map.set(bracketKey(p.body.span, p.body.girder, p.body.point), localVerdict(p, { width: r.edge_width, reading: r.reading }, tolerances, online));
     }
     return map;
-  }, [checks, waiting, groups, tolerances]);
+  }, [checks, waiting, groups, tolerances, online]);
 
   const states: PointState[] = group.rows.map((r) => {
     const v = latest.get(bracketKey(span, group.girder, r.point));

@@ -4,6 +4,7 @@ import { useCallback, useEffect, useState } from 'react';
 import { keptBridge } from '@/components/offline/kept-bridges';
 import type { KeptBridge } from '@/components/offline/offline-db';
 import { fromKept, keepForField, type FieldData } from './keep-for-field';
+import { useOnline } from './use-online';
 
 /** A page rendered this recently came from the server, not from the phone's page cache. */
 const FRESH_PAGE_MS = 10 * 60 * 1000;
@@ -16,7 +17,7 @@ const FRESH_PAGE_MS = 10 * 60 * 1000;
 export function useFieldData(server: FieldData, userId: number, renderedAt: string) {
   const id = server.bridge.id;
   const [kept, setKept] = useState<KeptBridge | null>(null);
-  const [online, setOnline] = useState(true);
+  const online = useOnline();
   const [keeping, setKeeping] = useState<{ busy: boolean; error: string | null }>({ busy: false, error: null });
 
   const keep = useCallback(async () => {
@@ -31,7 +32,6 @@ export function useFieldData(server: FieldData, userId: number, renderedAt: stri
 
   useEffect(() => {
     let gone = false;
-    setOnline(navigator.onLine);
     keptBridge(id)
       .then((copy) => {
         if (gone) return;
@@ -41,14 +41,8 @@ export function useFieldData(server: FieldData, userId: number, renderedAt: stri
         if (copy && navigator.onLine && fresh) keepForField(server, userId).then((c) => !gone && setKept(c), () => undefined);
       })
       .catch(() => undefined);
-    const goOnline = () => setOnline(true);
-    const goOffline = () => setOnline(false);
-    window.addEventListener('online', goOnline);
-    window.addEventListener('offline', goOffline);
     return () => {
       gone = true;
-      window.removeEventListener('online', goOnline);
-      window.removeEventListener('offline', goOffline);
     };
     // The server data is the page's; it changes only with a new page.
     // eslint-disable-next-line react-hooks/exhaustive-deps -- keyed on the bridge and the page render

@@ -5,6 +5,7 @@ import type { CheckRow } from '@/components/checks/check-types';
 import type { CheckBody, OutboxItem } from '@/components/offline/offline-db';
 import { emitOutbox, onOutbox } from '@/components/offline/outbox-events';
 import { outboxItems, queueCheck, type OutboxUser } from '@/components/offline/outbox';
+import { useOnline } from './use-online';
 
 /** An item the server refused (400/403/404): shown with its reason, never resent. */
 export type RefusedItem = { key: string; what: string; reason: string };
@@ -17,7 +18,7 @@ export type RefusedItem = { key: string; what: string; reason: string };
 export function useFieldQueue(bridgeId: number, user: OutboxUser, revision: number, onSaved: (check: CheckRow) => void) {
   const [items, setItems] = useState<OutboxItem[]>([]);
   const [refused, setRefused] = useState<RefusedItem[]>([]);
-  const [online, setOnline] = useState(true);
+  const online = useOnline();
 
   const reload = useCallback(() => {
     outboxItems(bridgeId)
@@ -27,19 +28,12 @@ export function useFieldQueue(bridgeId: number, user: OutboxUser, revision: numb
 
   useEffect(() => {
     reload();
-    setOnline(navigator.onLine);
-    const goOnline = () => setOnline(true);
-    const goOffline = () => setOnline(false);
-    window.addEventListener('online', goOnline);
-    window.addEventListener('offline', goOffline);
     const stop = onOutbox((event) => {
       if (event.type === 'changed') reload();
       if (event.type === 'saved' && event.bridgeId === bridgeId) onSaved(event.check);
       if (event.type === 'refused' && event.bridgeId === bridgeId) setRefused((r) => [...r, { key: event.key, what: event.what, reason: event.reason }]);
     });
     return () => {
-      window.removeEventListener('online', goOnline);
-      window.removeEventListener('offline', goOffline);
       stop();
     };
   }, [bridgeId, reload, onSaved]);

@@ -7,7 +7,7 @@ const distDir = (process.env.NEXT_DIST_DIR || '.next').replace(/^\.\//, '').repl
 export const { dynamic, dynamicParams, revalidate, generateStaticParams, GET } = createSerwistRoute({
   swSrc: 'lib/sw/service-worker.ts',
   useNativeEsbuild: true,
-  globPatterns: [`${distDir}static/**/*.{js,css,woff,woff2}`, 'public/icons/*.png'],
+  globPatterns: [`${distDir}static/**/*.{js,css,woff2}`, 'public/icons/*.png'],
   additionalPrecacheEntries: [{ url: '/offline', revision: String(Date.now()) }],
   maximumFileSizeToCacheInBytes: 4 * 1024 * 1024,
 });
