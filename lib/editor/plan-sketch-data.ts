@@ -4,6 +4,7 @@
  * right, the left side of the alignment up) and scaled into an SVG box. Pure; no React.
  */
 import { bentLinePoint, createAlignment, edgeOffsetAt, type BridgeDescription, type OffsetTable, type PlanPoint } from '@/lib/geometry';
+import { sketchMarks } from './plan-sketch-marks';
 
 export interface SketchPolyline {
   points: string;
@@ -20,6 +21,12 @@ export interface SketchData {
   northDeg: number;
   /** Length of the scale bar in bridge units and on screen. */
   scale: { length: number; px: number };
+  /** Stretches of alignment that are clothoid spirals, with what they join (drawn apart from tangents and arcs). */
+  spirals: { points: string; label: string }[];
+  /** Ticks across the alignment where one element meets the next. */
+  joins: { x1: number; y1: number; x2: number; y2: number }[];
+  /** The listed stations of flared deck edges, on the edge line. */
+  flareStations: { x: number; y: number }[];
 }
 
 const WIDTH = 480;
@@ -103,6 +110,7 @@ export function planSketchData(bridge: BridgeDescription, table: OffsetTable | n
     const Y = (p: { v: number }) => offsetY + (p.v - minV) * scale;
     const poly = (pts: { u: number; v: number }[]) => pts.map((p) => `${X(p).toFixed(1)},${Y(p).toFixed(1)}`).join(' ');
     if (![scale, height].every(Number.isFinite)) return null;
+    const marks = sketchMarks(bridge, al, local, s0, s1, 7 / scale);
     const barLength = niceLength((WIDTH - 2 * MARGIN) / scale / 4);
     return {
       width: WIDTH,
@@ -121,6 +129,9 @@ export function planSketchData(bridge: BridgeDescription, table: OffsetTable | n
       // North (0, 1) in local axes: u = dir.y, v = right.y; screen y grows downward with v.
       northDeg: (Math.atan2(dir.y, -right.y) * 180) / Math.PI,
       scale: { length: barLength, px: barLength * scale },
+      spirals: marks.spirals.map((m) => ({ points: poly(m.pts), label: m.label })),
+      joins: marks.joins.map((j) => ({ x1: X(j.p), y1: Y(j.p), x2: X(j.q), y2: Y(j.q) })),
+      flareStations: marks.flareStations.map((f) => ({ x: X(f), y: Y(f) })),
     };
   } catch {
     return null;
