@@ -6,7 +6,7 @@ type Message = {
   to: string[];
   subject: string;
   text: string;
-  attachments: { filename: string; content_type: string; size: number; content: string }[];
+  attachments: { filename: string; content_type: string; size: number; content: string; encoding?: 'text' | 'base64' }[];
   sent_by: string | null;
   created_at: string;
 };
@@ -36,14 +36,24 @@ export default function OutboxList({ messages }: { messages: Message[] }) {
             <summary className="cursor-pointer text-sm font-semibold text-brand-700">Message text</summary>
             <pre className="mt-1 max-h-72 overflow-auto whitespace-pre-wrap rounded bg-concrete-50 p-3 text-xs text-concrete-900">{m.text}</pre>
           </details>
-          {m.attachments.map((a) => (
-            <details key={a.filename} className="mt-2">
-              <summary className="cursor-pointer text-sm font-semibold text-brand-700">
-                {a.filename} <span className="font-normal text-concrete-600">({a.content_type.split(';')[0]}, {(a.size / 1024).toFixed(1)} KB)</span>
-              </summary>
-              <pre className="tabular mt-1 max-h-72 overflow-auto rounded bg-concrete-50 p-3 text-xs text-concrete-900">{a.content}</pre>
-            </details>
-          ))}
+          {m.attachments.map((a) =>
+            a.encoding === 'base64' ? (
+              // A file (the sheet's PDF): downloaded, not shown as text.
+              <p key={a.filename} className="mt-2 text-sm">
+                <a href={`data:${a.content_type.split(';')[0]};base64,${a.content}`} download={a.filename} className="font-semibold text-brand-700 underline">
+                  {a.filename}
+                </a>{' '}
+                <span className="text-concrete-600">({a.content_type.split(';')[0]}, {(a.size / 1024).toFixed(1)} KB)</span>
+              </p>
+            ) : (
+              <details key={a.filename} className="mt-2">
+                <summary className="cursor-pointer text-sm font-semibold text-brand-700">
+                  {a.filename} <span className="font-normal text-concrete-600">({a.content_type.split(';')[0]}, {(a.size / 1024).toFixed(1)} KB)</span>
+                </summary>
+                <pre className="tabular mt-1 max-h-72 overflow-auto rounded bg-concrete-50 p-3 text-xs text-concrete-900">{a.content}</pre>
+              </details>
+            ),
+          )}
         </li>
       ))}
     </ol>

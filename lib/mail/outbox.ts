@@ -1,7 +1,8 @@
 import { db } from '@/lib/db/connection';
 import { OutboxMessage, User } from '@/models';
 
-export type OutboxAttachmentJson = { filename: string; content_type: string; size: number; content: string };
+/** A kept attachment; `encoding` base64 means `content` holds the bytes (a PDF) in base64, else the text itself. */
+export type OutboxAttachmentJson = { filename: string; content_type: string; size: number; content: string; encoding: 'text' | 'base64' };
 
 export type OutboxJson = {
   id: number;
@@ -36,11 +37,12 @@ export async function listOutbox(limit = 100): Promise<OutboxJson[]> {
     to: parseList<string>(r.recipients).filter((x) => typeof x === 'string'),
     subject: r.subject,
     text: r.textBody,
-    attachments: parseList<{ filename: string; contentType: string; size: number; content: string }>(r.attachments).map((a) => ({
+    attachments: parseList<{ filename: string; contentType: string; size: number; content: string; encoding?: string }>(r.attachments).map((a) => ({
       filename: String(a.filename),
       content_type: String(a.contentType),
       size: Number(a.size),
       content: String(a.content),
+      encoding: a.encoding === 'base64' ? ('base64' as const) : ('text' as const),
     })),
     sent_by: r.userId !== null ? (names.get(r.userId) ?? null) : null,
     created_at: r.createdAt.toISOString(),

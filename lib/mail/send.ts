@@ -6,8 +6,14 @@ import { db } from '@/lib/db/connection';
 import { UpstreamError } from '@/lib/errors';
 import { OutboxMessage } from '@/models';
 
-/** A text attachment (the field sheet CSV). */
-export type MailAttachment = { filename: string; contentType: string; content: string };
+/** An attachment: text (the field sheet CSV) or bytes (its PDF). */
+export type MailAttachment = { filename: string; contentType: string; content: string | Buffer };
+
+/** How the outbox keeps an attachment: text as is, bytes as base64 (`encoding`), with the size in bytes. */
+function outboxAttachment(a: MailAttachment) {
+  if (typeof a.content === 'string') return { ...a, size: Buffer.byteLength(a.content, 'utf8') };
+  return { ...a, content: a.content.toString('base64'), encoding: 'base64', size: a.content.byteLength };
+}
 
 export type MailMessage = { to: string[]; subject: string; text: string; attachments: MailAttachment[] };
 
@@ -71,7 +77,7 @@ export async function sendMail(message: MailMessage, userId: number | null): Pro
         recipients: JSON.stringify(message.to),
         subject: message.subject,
         textBody: message.text,
-        attachments: JSON.stringify(message.attachments.map((a) => ({ ...a, size: Buffer.byteLength(a.content, 'utf8') }))),
+        attachments: JSON.stringify(message.attachments.map(outboxAttachment)),
         raw,
         userId,
       },
