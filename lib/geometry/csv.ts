@@ -23,7 +23,8 @@ export function csvCell(text: string): string {
  * station (display text), offset (LT/RT), edge width, edge drop, form target, top of girder, buildup,
  * drop from girder top. Elevations (form target, top of girder) stay in decimal feet or metres in every
  * style because they are read against a level; widths and drops follow the style (feet-inches to the
- * nearest 1/8"). Empty cells where a value does not apply (interior girders, no survey).
+ * nearest 1/8"). Empty cells where a value does not apply (interior girders, no survey). With
+ * deflections, two more columns at the end: deflection (a length) and screed grade (an elevation).
  */
 export function offsetTableToCsv(table: OffsetTable, options: CsvOptions = {}): string {
   const metric = table.units === 'm';
@@ -49,6 +50,9 @@ export function offsetTableToCsv(table: OffsetTable, options: CsvOptions = {}): 
     `top_of_deck_${elevationUnit}`,
     `bottom_of_slab_${elevationUnit}`,
   ];
+  // Deflection and screed grade only when the bridge's deflection table sets a deflection somewhere.
+  const deflections = table.points.some((p) => typeof p.deflection === 'number' && p.deflection !== 0);
+  if (deflections) header.push(`deflection_${lengthUnit}`, `screed_grade_${elevationUnit}`);
   const lines = [header.join(',')];
   for (const p of table.points) {
     lines.push(
@@ -67,6 +71,7 @@ export function offsetTableToCsv(table: OffsetTable, options: CsvOptions = {}): 
         length(p.drop_from_girder_top),
         elevation(p.top_of_deck),
         elevation(p.bottom_of_slab),
+        ...(deflections ? [length(p.deflection), elevation(p.screed_grade)] : []),
       ]
         .map(csvCell)
         .join(','),
