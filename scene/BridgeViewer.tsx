@@ -21,6 +21,8 @@ export interface BridgeViewerProps {
   name: string;
   revision?: number;
   showStats?: boolean;
+  /** Start with the sun's shadows off (the benchmark compares both). */
+  noShadows?: boolean;
 }
 
 /** Heights are raised this much in the views along the edge, so the corner at each bent shows. */
@@ -31,7 +33,7 @@ function reframed(desc: BridgeDescription, layout: 'chord' | 'curved'): BridgeDe
 }
 
 /** The 3D view of a stored bridge with its controls; the numbers all come from the engine. */
-export default function BridgeViewer({ description, table, name, revision, showStats = false }: BridgeViewerProps) {
+export default function BridgeViewer({ description, table, name, revision, showStats = false, noShadows = false }: BridgeViewerProps) {
   const units = table.units;
   const layouts = new Set(description.girders.map((g) => g.layout));
   const designed: Framing = layouts.size === 1 ? (layouts.has('curved') ? 'curved' : 'chord') : 'designed';
@@ -41,7 +43,7 @@ export default function BridgeViewer({ description, table, name, revision, showS
   const [view, setView] = useState<{ name: ViewName; version: number }>({ name: 'orbit', version: 0 });
   const [selected, setSelected] = useState<number | null>(null);
   const [showDeck, setShowDeck] = useState(true);
-  const [shadows, setShadows] = useState(true);
+  const [shadows, setShadows] = useState(!noShadows);
   const [pourValue, setPourValue] = useState(0);
   const [deltaT, setDeltaT] = useState(0);
   const [showControls, setShowControls] = useState(false);

@@ -36,6 +36,11 @@ export interface SceneStats {
   triangles: number;
   frames: number;
   shadows: boolean;
+  /** performance.now() when the first frame was drawn (ms since the page started). */
+  firstFrameMs: number | null;
+  /** The last frame intervals (ms), a ring of `frameDeltas.length`; `frameDeltaCount` written so far. */
+  frameDeltas: Float64Array;
+  frameDeltaCount: number;
   /** CSS size of the picture (px). */
   width: number;
   height: number;
@@ -61,6 +66,9 @@ export function sceneStats(): SceneStats {
       triangles: 0,
       frames: 0,
       shadows: false,
+      firstFrameMs: null,
+      frameDeltas: new Float64Array(600),
+      frameDeltaCount: 0,
       width: 0,
       height: 0,
       get labels() {

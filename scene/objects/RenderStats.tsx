@@ -11,13 +11,16 @@ import { sceneStats } from '../stats';
  */
 export default function RenderStats({ target, shadows }: { target?: RefObject<HTMLElement | null>; shadows: boolean }) {
   const last = useRef({ calls: -1, triangles: -1, frames: 0 });
-  useFrame(({ gl, size }) => {
+  useFrame(({ gl, size }, delta) => {
     const s = last.current;
     s.frames += 1;
+    const stats = sceneStats();
+    if (stats.firstFrameMs === null) stats.firstFrameMs = performance.now();
+    stats.frameDeltas[stats.frameDeltaCount % stats.frameDeltas.length] = delta * 1000;
+    stats.frameDeltaCount += 1;
     // info.render holds the previous frame's totals here (it is reset when a frame starts).
     const calls = gl.info.render.calls;
     const triangles = gl.info.render.triangles;
-    const stats = sceneStats();
     stats.drawCalls = calls;
     stats.triangles = triangles;
     stats.frames = s.frames;

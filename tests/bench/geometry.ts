@@ -12,7 +12,8 @@ function median(values: number[]): number {
   return s.length % 2 ? s[(s.length - 1) / 2] : (s[s.length / 2 - 1] + s[s.length / 2]) / 2;
 }
 
-function twelveSpanBridge(): BridgeDescription {
+/** The 12-span benchmark bridge (also drawn by the 3D benchmark, tests/bench/scene.ts). */
+export function twelveSpanBridge(): BridgeDescription {
   const spans = 12;
   const bents = Array.from({ length: spans + 1 }, (_, i) => ({ name: `Bent ${i + 1}`, station: 1100 + i * 95, skew_deg: (i % 3) * 6 - 6 }));
   const offsets = [-17.4, -8.7, 0, 8.7, 17.4];
@@ -92,5 +93,8 @@ function benchInverse(): void {
   }
 }
 
-benchTable();
-benchInverse();
+// Run only as the engine benchmark itself, not when the 3D benchmark borrows the bridge.
+if (/geometry\.ts$/.test(process.argv[1] ?? '')) {
+  benchTable();
+  benchInverse();
+}

@@ -11,10 +11,10 @@ import { orNotFound } from '../load-bridge';
 
 export const metadata: Metadata = { title: '3D view' };
 
-export default async function BridgeViewPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ stats?: string }> }) {
+export default async function BridgeViewPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ stats?: string; shadows?: string }> }) {
   const { id } = await params;
   await requireUser(`/bridges/${id}/view`);
-  const { stats } = await searchParams;
+  const { stats, shadows } = await searchParams;
   const data = await orNotFound(sceneDataForBridge(id));
   const offsetsHref = `/bridges/${data.id}/offsets`;
   return (
@@ -35,7 +35,7 @@ export default async function BridgeViewPage({ params, searchParams }: { params:
         }
       />
       <div className="space-y-6">
-        <LazyBridgeViewer description={data.description} table={data.table} name={data.name} revision={data.revision} showStats={stats === '1'} offsetsHref={offsetsHref} />
+        <LazyBridgeViewer description={data.description} table={data.table} name={data.name} revision={data.revision} showStats={stats === '1'} noShadows={shadows === '0'} offsetsHref={offsetsHref} />
         <EdgeWidthSummary table={data.table} />
         <SafetyCaution />
       </div>
