@@ -32,6 +32,8 @@ export class Bridge extends Model<InferAttributes<Bridge>, InferCreationAttribut
   declare lastFieldAt: CreationOptional<Date | null>;
   /** Newest activity of any kind (creation, edits, field work): the portfolio's default order. */
   declare activityAt: CreationOptional<Date>;
+  /** Name, structure number and route in lower case, for the portfolio search; set on every save. */
+  declare searchText: CreationOptional<string>;
 
   static initModel(sequelize: Sequelize): void {
     Bridge.init(
@@ -59,8 +61,22 @@ export class Bridge extends Model<InferAttributes<Bridge>, InferCreationAttribut
         spansAwaitingSignoff: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0, field: 'spans_awaiting_signoff' },
         lastFieldAt: { type: DataTypes.DATE, allowNull: true, field: 'last_field_at' },
         activityAt: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW, field: 'activity_at' },
+        searchText: { type: DataTypes.STRING(400), allowNull: false, defaultValue: '', field: 'search_text' },
       },
-      { sequelize, tableName: 'bridges' },
+      {
+        sequelize,
+        tableName: 'bridges',
+        hooks: {
+          beforeSave: (b) => {
+            b.searchText = searchTextOf(b.name, b.structureNumber, b.route);
+          },
+        },
+      },
     );
   }
+}
+
+/** The search column's text: name, structure number and route, lower case, at most 400 characters. */
+export function searchTextOf(name: string, structureNumber: string | undefined, route: string | undefined): string {
+  return [name, structureNumber ?? '', route ?? ''].join(' ').toLowerCase().slice(0, 400);
 }

@@ -113,9 +113,8 @@ export async function listBridgePage(query: BridgeListQuery): Promise<{ rows: Br
   const sequelize = await db();
   const and: WhereOptions[] = [];
   if (query.q) {
-    const p = sequelize.escape(containsPattern(query.q));
-    const like = (column: string) => `lower(${column}) LIKE ${p} ESCAPE '\\'`;
-    and.push(sequelize.literal(`(${like('name')} OR ${like('structure_number')} OR ${like('route')})`));
+    // search_text is name, structure number and route in lower case (models/Bridge.ts keeps it).
+    and.push(sequelize.literal(`search_text LIKE ${sequelize.escape(containsPattern(query.q))} ESCAPE '\\'`));
   }
   if (query.stage) and.push({ stage: query.stage });
   if (query.district) and.push({ district: query.district });
@@ -147,4 +146,10 @@ export async function listDistricts(): Promise<string[]> {
   await db();
   const rows = await Bridge.findAll({ attributes: ['district'], where: { district: { [Op.ne]: '' } }, group: ['district'], order: [['district', 'ASC']], limit: 500 });
   return rows.map((r) => r.district);
+}
+
+/** One bridge as a portfolio row (record and status counters); 404 when there is no such bridge. */
+export async function bridgeRow(id: string | number): Promise<BridgeRow> {
+  const bridge = await requireBridge(id);
+  return rowOf(bridge);
 }

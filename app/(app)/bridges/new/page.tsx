@@ -19,7 +19,7 @@ export default async function NewBridgePage() {
   }
   return (
     <>
-      <PageHeader title="New bridge" subtitle="Give the bridge a name and its geometry. You can rename it later." />
+      <PageHeader title="New bridge" subtitle="Choose where to start, then fill in the record and finish the geometry in the form editor." />
       <NewBridgeForm />
     </>
   );

@@ -1,0 +1,128 @@
+/**
+ * Data benchmark (not a test): `npm run bench:data`.
+ * Fills a throwaway SQLite database in a temp folder with 100 bridges, measures, grows it to 10,000
+ * bridges (three revisions each, 20 field checks and 2 photo records per bridge: 200,000 checks and
+ * 20,000 photos at the large size, with the audit events those writes leave) and measures again:
+ *  - the portfolio API (GET /api/bridges through its route handler with a signed session: first page,
+ *    a search, a district filter, the "out of tolerance" filter, and the fifth page by cursor);
+ *  - the portfolio page (the page's reads plus the server render of its filter form and table);
+ *  - one bridge's checks page (the page's reads: checks with photos, attachments, audit, sign-off state);
+ *  - one bridge's audit log (GET /api/bridges/:id/audit through its route handler).
+ * Each figure is the median of 15 runs after 3 warm-ups. Target: every 10,000-bridge figure within
+ * 2× of its 100-bridge figure (indexes and keyset pages, no whole-table reads). Prints the ratios.
+ */
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { createElement } from 'react';
+import { renderToString } from 'react-dom/server';
+import { NextRequest } from 'next/server';
+import { CHECKS_PER_BRIDGE, PHOTOS_PER_BRIDGE, fillBridges } from './data-fill';
+
+const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'chordline-bench-data-'));
+process.env.DATA_DIR = dir;
+process.env.CHORDLINE_NO_DEMO = '1';
+process.env.NEXTAUTH_SECRET = 'bench-secret-for-a-throwaway-database';
+process.env.NEXTAUTH_URL = 'http://localhost:3000';
+
+const RUNS = 15;
+const WARM = 3;
+
+async function median(work: () => Promise<unknown>): Promise<number> {
+  for (let i = 0; i < WARM; i++) await work();
+  const times: number[] = [];
+  for (let i = 0; i < RUNS; i++) {
+    const t = process.hrtime.bigint();
+    await work();
+    times.push(Number(process.hrtime.bigint() - t) / 1e6);
+  }
+  times.sort((a, b) => a - b);
+  return times[Math.floor(RUNS / 2)];
+}
+
+async function main() {
+  // Loaded after DATA_DIR is set: the connection reads it on first use.
+  const { db, closeDb } = await import('../../lib/db/connection');
+  const bridgesRoute = await import('../../app/api/bridges/route');
+  const auditRoute = await import('../../app/api/bridges/[id]/audit/route');
+  const { listBridgePage, listDistricts, bridgeListQuerySchema } = await import('../../lib/services/bridge-list');
+  const { listChecks } = await import('../../lib/services/checks');
+  const { listAttachments } = await import('../../lib/services/attachments');
+  const { bridgeAudit } = await import('../../lib/services/field-audit');
+  const { signOffOverview } = await import('../../lib/services/signoff');
+  const { Bridge } = await import('../../models');
+  const PortfolioTable = (await import('../../components/bridges/PortfolioTable')).default;
+  const PortfolioFilters = (await import('../../components/bridges/PortfolioFilters')).default;
+
+  const { makeUsers } = await import('../api/helpers');
+
+  const sequelize = await db();
+  // Signed-in sessions made the way the API tests make them (real users, signed session cookies).
+  const { engineer } = await makeUsers();
+  const user = { id: engineer.id };
+  const cookie = engineer.cookie;
+
+  const api = async (handler: unknown, url: string, params: Record<string, string> = {}) => {
+    const req = new NextRequest(new URL(url, 'http://localhost:3000'), { headers: { cookie } });
+    const res = await (handler as (r: NextRequest, c: { params: Promise<Record<string, string>> }) => Promise<Response>)(req, { params: Promise.resolve(params) });
+    if (res.status !== 200) throw new Error(`${url} answered ${res.status}: ${await res.text()}`);
+    return { body: await res.text(), next: res.headers.get('X-Next-Cursor') };
+  };
+  const fifthPage = async () => {
+    let cursor: string | null = null;
+    for (let i = 0; i < 5; i++) cursor = (await api(bridgesRoute.GET, `/api/bridges?limit=20${cursor ? `&cursor=${encodeURIComponent(cursor)}` : ''}`)).next;
+  };
+  const page = async () => {
+    const query = bridgeListQuerySchema.parse({});
+    const [rows, districts] = await Promise.all([listBridgePage(query), listDistricts()]);
+    return renderToString(createElement('div', null, createElement(PortfolioFilters, { query, districts }), createElement(PortfolioTable, { rows: rows.rows })));
+  };
+  const checksPage = async () => {
+    const bridge = await Bridge.findByPk(1);
+    return Promise.all([listChecks(bridge!.id), listAttachments('1'), bridgeAudit('1'), signOffOverview('1')]);
+  };
+
+  const cases: [string, () => Promise<unknown>][] = [
+    ['portfolio API, first page (100 rows)', () => api(bridgesRoute.GET, '/api/bridges')],
+    ['portfolio API, search "BN-0004"', () => api(bridgesRoute.GET, '/api/bridges?q=BN-0004')],
+    ['portfolio API, one district', () => api(bridgesRoute.GET, '/api/bridges?district=Coast')],
+    ['portfolio API, out-of-tolerance filter', () => api(bridgesRoute.GET, '/api/bridges?attention=failures')],
+    ['portfolio API, fifth page of 20 by cursor', fifthPage],
+    ['portfolio page (reads + server render)', page],
+    ['one bridge: checks page reads', checksPage],
+    ['one bridge: audit log API', () => api(auditRoute.GET, '/api/bridges/1/audit', { id: '1' })],
+  ];
+
+  const results = new Map<string, number[]>();
+  const sizes = [100, 10_000];
+  let filled = 0;
+  for (const size of sizes) {
+    const t = Date.now();
+    await fillBridges(sequelize, filled + 1, size, user.id);
+    filled = size;
+    await sequelize.query('ANALYZE');
+    console.log(`filled ${size.toLocaleString('en-US')} bridges (${(size * 3).toLocaleString('en-US')} revisions, ${(size * CHECKS_PER_BRIDGE).toLocaleString('en-US')} checks, ${(size * PHOTOS_PER_BRIDGE).toLocaleString('en-US')} photo records) in ${((Date.now() - t) / 1000).toFixed(1)} s`);
+    for (const [name, work] of cases) {
+      const ms = await median(work);
+      results.set(name, [...(results.get(name) ?? []), ms]);
+    }
+  }
+
+  console.log('\n| measure | 100 bridges (ms) | 10,000 bridges (ms) | ratio |');
+  console.log('| --- | ---: | ---: | ---: |');
+  let worst = 0;
+  for (const [name, [small, large]] of results) {
+    const ratio = large / small;
+    worst = Math.max(worst, ratio);
+    console.log(`| ${name} | ${small.toFixed(2)} | ${large.toFixed(2)} | ${ratio.toFixed(2)} |`);
+  }
+  console.log(`\nworst ratio ${worst.toFixed(2)} (target under 2): ${worst < 2 ? 'met' : 'NOT met'}`);
+  await closeDb();
+  fs.rmSync(dir, { recursive: true, force: true });
+}
+
+main().catch((err) => {
+  console.error(err);
+  fs.rmSync(dir, { recursive: true, force: true });
+  process.exit(1);
+});
