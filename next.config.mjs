@@ -23,17 +23,17 @@ const nextConfig = {
   serverExternalPackages: ['sequelize', 'sqlite3', 'pg', 'pg-hstore', 'umzug', 'nodemailer', 'bcryptjs', 'jimp', 'esbuild', 'esbuild-wasm', 'pdfkit'],
   poweredByHeader: false,
   async headers() {
+    const common = [
+      { key: 'X-Content-Type-Options', value: 'nosniff' },
+      { key: 'Referrer-Policy', value: 'strict-origin-when-cross-origin' },
+      { key: 'X-Frame-Options', value: 'DENY' },
+      { key: 'Permissions-Policy', value: 'camera=(self), geolocation=(), microphone=()' },
+    ];
     return [
-      {
-        source: '/:path*',
-        headers: [
-          { key: 'Content-Security-Policy', value: csp },
-          { key: 'X-Content-Type-Options', value: 'nosniff' },
-          { key: 'Referrer-Policy', value: 'strict-origin-when-cross-origin' },
-          { key: 'X-Frame-Options', value: 'DENY' },
-          { key: 'Permissions-Policy', value: 'camera=(self), geolocation=(), microphone=()' },
-        ],
-      },
+      // Attachments set their own stricter policy (default-src 'none'; sandbox); the site-wide one
+      // must not replace it.
+      { source: '/((?!api/attachments/).*)', headers: [{ key: 'Content-Security-Policy', value: csp }, ...common] },
+      { source: '/api/attachments/:path*', headers: common },
     ];
   },
 };

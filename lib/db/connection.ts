@@ -6,6 +6,7 @@ import { Umzug, SequelizeStorage } from 'umzug';
 import { dataDir, usesPostgres } from '@/lib/config';
 import { initModels } from '@/models';
 import { migrations } from '@/migrations';
+import { preparePrivateStore } from './private-files';
 
 /** Opens the store: PostgreSQL when DATABASE_URL says so, else the SQLite file in DATA_DIR. */
 function openSequelize(): Sequelize {
@@ -13,11 +14,13 @@ function openSequelize(): Sequelize {
     return new Sequelize(process.env.DATABASE_URL as string, { dialect: 'postgres', logging: false });
   }
   const dir = dataDir();
-  fs.mkdirSync(dir, { recursive: true });
+  const storage = path.join(dir, 'chordline.sqlite');
+  // The store is readable by the server's user only (0700 folder, 0600 files).
+  preparePrivateStore(dir, storage);
   return new Sequelize({
     dialect: 'sqlite',
     dialectModule: { ...sqlite3, Database: PatientDatabase },
-    storage: path.join(dir, 'chordline.sqlite'),
+    storage,
     logging: false,
     // Sequelize opens a separate SQLite connection per transaction. IMMEDIATE takes the write lock at
     // BEGIN, so a transaction that reads and then writes never fails halfway on a lock upgrade; it

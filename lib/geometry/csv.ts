@@ -13,9 +13,22 @@ export interface CsvOptions {
   style?: DisplayStyle;
 }
 
-/** One CSV cell (RFC 4180): quoted when it holds a comma, a quote or a line break. */
+/**
+ * A text cell a spreadsheet would run as a formula (it begins, after any spaces, with `=`, `+`, `-`,
+ * `@`, a tab or a carriage return: OWASP "CSV Injection") gets a leading apostrophe, which spreadsheets
+ * read as "this is text" and do not show. Numbers and our own number formats (-0.125, feet-inches
+ * -1'-2 3/8", stations -0+50.00) are left as they are: nothing in them can name a cell or call a function.
+ */
+export function neutraliseFormula(text: string): string {
+  if (!/^[ ]*[=+\-@\t\r]/.test(text)) return text;
+  if (/^[+-]?\d+(\.\d+)?$/.test(text) || /^-?\d+'-\d+( \d\/\d)?"$/.test(text) || /^-?\d+\+\d+(\.\d+)?$/.test(text)) return text;
+  return `'${text}`;
+}
+
+/** One CSV cell (RFC 4180): formula-like text neutralised, quoted when it holds a comma, a quote or a line break. */
 export function csvCell(text: string): string {
-  return /[",\n\r]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
+  const safe = neutraliseFormula(text);
+  return /[",\n\r]/.test(safe) ? `"${safe.replace(/"/g, '""')}"` : safe;
 }
 
 /**

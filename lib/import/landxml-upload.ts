@@ -7,6 +7,7 @@ import { z } from 'zod';
 import { HttpError } from '@/lib/api/errors';
 import { TooLargeError, ValidationError } from '@/lib/errors';
 import { filePart, readMultipart } from '@/lib/uploads/multipart';
+import { checkAlignmentCount } from './landxml-limits';
 import type { AlignmentElementInput } from '@/lib/geometry';
 import { LandXmlAlignmentsError, LandXmlError, parseLandXml, type ImportedAlignment, type LengthUnit, type SkippedAlignment } from './landxml';
 import { decodeXmlBytes, XmlReadError } from './xml-tree';
@@ -93,6 +94,7 @@ export async function importLandXmlUpload(req: Request): Promise<LandXmlImportRe
   const units = unitsField.safeParse(typeof unitsRaw === 'string' && unitsRaw !== '' ? unitsRaw : undefined);
   if (!units.success) throw new ValidationError('The units field must be "ft" or "m".', { units: [units.error.issues[0].message] });
   const text = decode(new Uint8Array(await file.arrayBuffer()));
+  checkAlignmentCount(text);
   try {
     const result = parseLandXml(text, units.data);
     const alignments = result.alignments.map(slim);

@@ -15,6 +15,12 @@ export const DESCRIPTION_LIMITS = {
   deflection_values: 201,
 } as const;
 
+/**
+ * Longest girder name, characters: the one limit everywhere a girder is named (descriptions, field
+ * checks, surveyed tops; the field_checks.girder column holds 60).
+ */
+export const GIRDER_NAME_MAX = 60;
+
 /** Deepest nesting of arrays and objects a request body may have (a description needs 4). */
 export const MAX_JSON_DEPTH = 32;
 
@@ -41,6 +47,14 @@ export function descriptionSizeProblems(json: unknown): SizeProblem[] {
   over('bents', len(d.bents), L.bents, 'The number of bents');
   over('girders', len(d.girders), L.girders, 'The number of girders');
   over('top_of_girder', len(d.top_of_girder), L.top_of_girder, 'The number of surveyed girder tops');
+  if (Array.isArray(d.girders)) {
+    d.girders.forEach((g, i) => {
+      const name = g && typeof g === 'object' ? (g as Record<string, unknown>).name : undefined;
+      if (typeof name === 'string' && name.length > GIRDER_NAME_MAX) {
+        out.push({ path: `girders.${i}.name`, message: `Girder ${i + 1}'s name is ${name.length} characters; the limit is ${GIRDER_NAME_MAX}.` });
+      }
+    });
+  }
   if (Array.isArray(d.deflections)) {
     d.deflections.forEach((entry, i) => {
       const values = entry && typeof entry === 'object' ? (entry as Record<string, unknown>).values : undefined;

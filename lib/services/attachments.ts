@@ -6,8 +6,11 @@ import { filePart, readMultipart } from '@/lib/uploads/multipart';
 import { sniffType } from '@/lib/uploads/sniff';
 import { neutraliseName, readUpload, removeUpload, saveUpload } from '@/lib/uploads/store';
 import { thumbnailOf } from '@/lib/uploads/thumbnail';
+import { photoPixelProblem } from '@/lib/uploads/pixels';
+import { HttpError as PhotoLimitError } from '@/lib/api/errors';
 import { Attachment, FieldCheck, User } from '@/models';
 import { attachmentUrls } from './attachment-urls';
+import { cleanText } from '@/lib/text/clean';
 import { audit } from './audit';
 import { markFieldActivity } from './bridge-status';
 import { requireBridge } from './require-bridge';
@@ -52,7 +55,7 @@ const uploadFieldsSchema = z.object({
     .regex(/^\d+$/, 'check_id must be the number of a check of this bridge.')
     .transform(Number)
     .optional(),
-  caption: z.string().trim().max(300, 'Keep the caption under 300 characters.').optional().default(''),
+  caption: z.string().transform(cleanText).pipe(z.string().max(300, 'Keep the caption under 300 characters.')).optional().default(''),
   client_key: z
     .string()
     .regex(/^[A-Za-z0-9_-]{8,64}$/, 'client_key must be 8 to 64 letters, digits, - or _.')
@@ -91,6 +94,8 @@ export async function uploadAttachment(user: SessionUser, bridgeId: string, req:
       file: ['Choose a JPEG, PNG or WebP photo, or a PDF.'],
     });
   }
+  const pixels = photoPixelProblem(bytes, type.contentType);
+  if (pixels) throw new PhotoLimitError(422, pixels, { file: [pixels] });
   if (fields.data.check_id !== undefined) {
     const check = await FieldCheck.findOne({ where: { id: fields.data.check_id, bridgeId: bridge.id } });
     if (!check) throw new ValidationError('That check does not belong to this bridge.', { check_id: ['Choose a check of this bridge.'] });
@@ -188,7 +193,8 @@ export async function attachmentResponse(id: string, size: 'full' | 'thumb' = 'f
       'X-Content-Type-Options': 'nosniff',
       'Content-Disposition': contentDisposition(image ? 'inline' : 'attachment', a.originalName),
       'Content-Security-Policy': "default-src 'none'; sandbox",
-      'Cache-Control': 'private, max-age=3600',
+      // Never kept by the browser: a photo must not stay readable after sign-out.
+      'Cache-Control': 'no-store',
     },
   });
 }

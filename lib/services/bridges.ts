@@ -7,6 +7,8 @@ import { requireBridge } from './require-bridge';
 import type { SessionUser } from '@/lib/auth/session';
 import type { BridgeDescription } from '@/lib/geometry';
 import { checkedDescription } from './description';
+import { bridgeFiles, removeStoredFiles } from './attachment-files';
+import { cleanName } from '@/lib/text/clean';
 import { audit } from './audit';
 import { bridgeRecordSchema, recordAttributes, recordOf, RECORD_KEYS, type BridgeRecord } from './bridge-record';
 import { markActivity, refreshStatus } from './bridge-status';
@@ -14,9 +16,8 @@ import { listBridgePage, MAX_LIMIT, type BridgeRow } from './bridge-list';
 
 export const bridgeNameSchema = z
   .string({ error: 'Give the bridge a name.' })
-  .trim()
-  .min(1, 'Give the bridge a name.')
-  .max(200, 'Keep the name under 200 characters.');
+  .transform(cleanName)
+  .pipe(z.string().min(1, 'Give the bridge a name.').max(200, 'Keep the name under 200 characters.'));
 
 export const createBridgeSchema = bridgeRecordSchema.extend({ name: bridgeNameSchema, description: z.unknown() });
 /** PATCH body: a new name and/or any field of the bridge record; at least one. */
@@ -97,12 +98,15 @@ export async function updateBridge(user: SessionUser, id: string, input: z.infer
 
 export async function deleteBridge(user: SessionUser, id: string): Promise<void> {
   const bridge = await requireBridge(id);
+  const files = await bridgeFiles(bridge.id);
   const sequelize = await db();
   await sequelize.transaction(async (transaction) => {
     await GeometryRevision.destroy({ where: { bridgeId: bridge.id }, transaction });
     await bridge.destroy({ transaction });
     await audit(user.id, 'bridge.delete', 'bridge', bridge.id, { name: bridge.name }, transaction);
   });
+  // The photos, PDFs and thumbnails go with it (after the commit, so a failed delete keeps them).
+  await removeStoredFiles(files);
 }
 
 export async function listRevisions(id: string): Promise<RevisionSummary[]> {

@@ -1,4 +1,5 @@
 import { parseBridge, parseBridgeSchema, type BridgeDescription } from '@/lib/geometry';
+import { assertDescriptionSize } from '@/lib/limits/assert-description-size';
 import { UnprocessableError, ValidationError } from '@/lib/errors';
 
 function schemaError(result: { fields: Record<string, string[]>; message: string }, fieldPrefix: string): ValidationError {
@@ -15,6 +16,7 @@ function schemaError(result: { fields: Record<string, string[]>; message: string
  * that cannot be built is 422 naming the span, girder or point. Stored revisions always compute.
  */
 export function checkedDescription(json: unknown, fieldPrefix = 'description'): BridgeDescription {
+  assertDescriptionSize(json, fieldPrefix);
   const result = parseBridge(json);
   if (result.ok) return result.bridge;
   if (result.kind === 'schema') throw schemaError(result, fieldPrefix);

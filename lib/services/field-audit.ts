@@ -1,4 +1,5 @@
 import { AuditEvent, User } from '@/models';
+import { roleAllows, type Role } from '@/lib/auth/roles';
 import { requireBridge } from './require-bridge';
 
 export type AuditJson = { id: number; action: string; label: string; by: string | null; detail: Record<string, unknown>; created_at: string };
@@ -19,7 +20,9 @@ export const ACTION_LABELS: Record<string, string> = {
 const DETAIL_KEYS = ['name', 'from', 'to', 'revision', 'check', 'span', 'girder', 'point', 'pass', 'supersedes', 'attachment', 'content_type', 'size', 'via', 'outbox', 'signoff', 'before', 'after', 'demo'];
 
 /** The audit log of one bridge, newest first (at most `limit` events). */
-export async function bridgeAudit(bridgeId: string, limit = 300): Promise<AuditJson[]> {
+export async function bridgeAudit(bridgeId: string, limit = 300, viewerRole: Role = 'crew'): Promise<AuditJson[]> {
+  // Who a sheet was e-mailed to is for the people who send sheets, not for every reader.
+  const seesRecipients = roleAllows(viewerRole, ['inspector', 'engineer']);
   const bridge = await requireBridge(bridgeId);
   const rows = await AuditEvent.findAll({
     where: { entityType: 'bridge', entityId: String(bridge.id) },
@@ -35,6 +38,7 @@ export async function bridgeAudit(bridgeId: string, limit = 300): Promise<AuditJ
     } catch {}
     const detail: Record<string, unknown> = {};
     for (const k of DETAIL_KEYS) if (k in raw) detail[k] = raw[k];
+    if (e.action === 'sheet.send' && !seesRecipients && Array.isArray(detail.to)) detail.to = `${detail.to.length} recipient${detail.to.length === 1 ? '' : 's'}`;
     return {
       id: e.id,
       action: e.action,

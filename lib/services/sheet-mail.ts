@@ -1,4 +1,7 @@
 import { z } from 'zod';
+import { Op } from 'sequelize';
+import { AuditEvent } from '@/models';
+import { HttpError } from '@/lib/api/errors';
 import type { SessionUser } from '@/lib/auth/session';
 import { db } from '@/lib/db/connection';
 import { sendMail, type MailResult } from '@/lib/mail/send';
@@ -42,11 +45,33 @@ export function sheetSummary(sheet: FieldSheet, sender: string): string {
   return lines.join('\n') + '\n';
 }
 
+/** Most recipients one person may send field sheets to within an hour, counted over every app server. */
+export const SHEET_RECIPIENTS_PER_HOUR = 30;
+
+/** 429 when this send would take the sender over {@link SHEET_RECIPIENTS_PER_HOUR} in the last hour. */
+async function checkSendRate(userId: number, recipients: number): Promise<void> {
+  await db();
+  const since = new Date(Date.now() - 60 * 60 * 1000);
+  const sent = await AuditEvent.findAll({ where: { userId, action: 'sheet.send', createdAt: { [Op.gte]: since } }, attributes: ['detail'] });
+  const count = sent.reduce((n, e) => {
+    try {
+      const to = (JSON.parse(e.detail ?? '{}') as { to?: unknown }).to;
+      return n + (Array.isArray(to) ? to.length : 1);
+    } catch {
+      return n + 1;
+    }
+  }, 0);
+  if (count + recipients > SHEET_RECIPIENTS_PER_HOUR) {
+    throw new HttpError(429, `You have sent field sheets to ${count} recipients in the last hour; the limit is ${SHEET_RECIPIENTS_PER_HOUR} an hour. Try again later.`);
+  }
+}
+
 /** Sends the field sheet (CSV attached, summary in the body) and records it in the audit log. */
 export async function sendSheet(user: SessionUser, bridgeId: string, input: z.infer<typeof sendSheetSchema>): Promise<{ via: MailResult['via']; to: string[]; subject: string; outbox_id: number | null }> {
   const span = input.span ?? null;
   const sheet = await loadFieldSheet(bridgeId, span);
   const to = [...new Set(input.to.map((a) => a.trim()))];
+  await checkSendRate(user.id, to.length);
   const subject = `Field sheet: ${sheet.bridge.name.replace(/[\r\n]+/g, ' ')}${span ? `, span ${span}` : ''} (revision ${sheet.revision})`;
   const filename = `${safeFileName(sheet.bridge.name)}-rev${sheet.revision}-field-sheet${span ? `-span${span}` : ''}.csv`;
   const result = await sendMail(

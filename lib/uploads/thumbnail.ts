@@ -3,13 +3,14 @@ import fs from 'node:fs/promises';
 import path from 'node:path';
 import { Worker } from 'node:worker_threads';
 import { dataDir } from '@/lib/config';
-import { photoPixels } from './pixels';
+import { MAX_PHOTO_MEGAPIXELS, photoPixels } from './pixels';
+import { PRIVATE_DIR_MODE, PRIVATE_FILE_MODE } from '@/lib/db/private-files';
 
 /** Longest side of a thumbnail, pixels: sharp on a phone's 2× screen at the 160 px the lists show. */
 export const THUMBNAIL_SIDE = 320;
 
-/** Largest photo decoded for a thumbnail, megapixels (phone cameras give 12–50); larger serve themselves. */
-export const MAX_SOURCE_MEGAPIXELS = 64;
+/** Largest photo decoded for a thumbnail, megapixels: the upload limit; larger (older uploads) serve themselves. */
+export const MAX_SOURCE_MEGAPIXELS = MAX_PHOTO_MEGAPIXELS;
 
 // Runs in a worker thread so decoding a large photo never stalls the server's other requests. The
 // worker is CommonJS code evaluated in place; `jimp` resolves from the working directory, which is the
@@ -94,8 +95,8 @@ export async function thumbnailOf(storedName: string, original: () => Promise<Bu
   // sees half a file. A cache that cannot be written costs only a decode next time.
   const tmp = `${file}.${process.pid}.${crypto.randomBytes(6).toString('hex')}.tmp`;
   try {
-    await fs.mkdir(dir, { recursive: true });
-    await fs.writeFile(tmp, thumb);
+    await fs.mkdir(dir, { recursive: true, mode: PRIVATE_DIR_MODE });
+    await fs.writeFile(tmp, thumb, { mode: PRIVATE_FILE_MODE });
     await fs.rename(tmp, file);
   } catch {
     await fs.rm(tmp, { force: true }).catch(() => undefined);

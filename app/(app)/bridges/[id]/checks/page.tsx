@@ -36,7 +36,7 @@ export default async function ChecksPage({ params }: { params: Params }) {
   const [checks, attachments, events, overview] = await Promise.all([
     listChecks(bridge.id),
     listAttachments(String(bridge.id)),
-    bridgeAudit(String(bridge.id)),
+    bridgeAudit(String(bridge.id), 300, user.role),
     signOffOverview(String(bridge.id)).catch((err) => {
       if (err instanceof UnprocessableError) return { problem: err.message };
       throw err;
