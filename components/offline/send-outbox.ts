@@ -111,6 +111,13 @@ async function run(): Promise<SendRun> {
 }
 
 let running: Promise<SendRun> | null = null;
+/** Asked again while a run was finishing: run once more, so an item added at that moment is not left waiting. */
+let again = false;
+
+function runLocked(): Promise<SendRun> {
+  const locks = typeof navigator !== 'undefined' ? navigator.locks : undefined;
+  return locks ? (async () => await locks.request('chordline-outbox', () => run()))() : run();
+}
 
 /**
  * Sends this user's waiting items to the server one by one, in the order taken, each with its client
@@ -119,10 +126,20 @@ let running: Promise<SendRun> | null = null;
  * check's id from the store when the check is saved.
  */
 export function sendOutbox(): Promise<SendRun> {
-  if (running) return running;
-  const locks = typeof navigator !== 'undefined' ? navigator.locks : undefined;
-  const go: Promise<SendRun> = locks ? (async () => await locks.request('chordline-outbox', () => run()))() : run();
-  const current = go.finally(() => {
+  if (running) {
+    again = true;
+    return running;
+  }
+  const current = (async () => {
+    let result = await runLocked();
+    while (again && result.stopped === null) {
+      again = false;
+      const next = await runLocked();
+      result = { ...next, sent: result.sent + next.sent };
+    }
+    again = false;
+    return result;
+  })().finally(() => {
     running = null;
   });
   running = current;

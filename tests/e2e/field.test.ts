@@ -83,7 +83,7 @@ describe('field mode on a phone', () => {
     // A photo for that check, as the phone's camera would hand it over.
     const png = await new Jimp({ width: 640, height: 480, color: 0x5a7d9aff }).getBuffer('image/png');
     await page.locator('input[type=file]').setInputFiles({ name: 'bracket.png', mimeType: 'image/png', buffer: png });
-    await expect.poll(() => page.getByText(/Photo attached to check #\d+/).count()).toBe(1);
+    await expect.poll(() => page.getByText(/Photo attached to check #\d+/).count(), { timeout: 30000 }).toBe(1);
 
     // Next bracket, six inches wide → FAIL.
     await page.getByRole('button', { name: /Next/ }).click();
