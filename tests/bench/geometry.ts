@@ -12,7 +12,7 @@ function median(values: number[]): number {
   return s.length % 2 ? s[(s.length - 1) / 2] : (s[s.length / 2 - 1] + s[s.length / 2]) / 2;
 }
 
-/** The 12-span benchmark bridge (also drawn by the 3D benchmark, tests/bench/scene.ts). */
+/** The 12-span benchmark bridge (also drawn by the 3D benchmark, tests/bench/scene-3d.ts). */
 export function twelveSpanBridge(): BridgeDescription {
   const spans = 12;
   const bents = Array.from({ length: spans + 1 }, (_, i) => ({ name: `Bent ${i + 1}`, station: 1100 + i * 95, skew_deg: (i % 3) * 6 - 6 }));
