@@ -76,4 +76,15 @@ describe('offsets command', () => {
     expect(lines).toHaveLength(1);
     expect(lines[0]).toMatch(pattern);
   }, 60000);
+
+  it('prints every problem on its own line, the first 20 and then a count', () => {
+    const b = straightBridge();
+    const slopes = Array.from({ length: 25 }, (_, i) => ({ station: i * 10, left: 0.8, right: -0.02 }));
+    const r = run(file('many.json', JSON.stringify({ ...b, cross_slopes: slopes })));
+    expect(r.code).toBe(1);
+    const lines = r.stderr.split('\n').filter((l) => l.length > 0);
+    expect(lines).toHaveLength(21);
+    expect(lines[3]).toMatch(/many\.json: cross_slopes\.3\.left: 0\.8 is steeper than 15 %; did you mean 0\.08\?/);
+    expect(lines[20]).toMatch(/and 5 more problems/);
+  }, 60000);
 });

@@ -3,8 +3,8 @@ import { demoBridges } from '@/lib/demo/bridges';
 import { bridgeDescriptionSchema, computeOffsetTable, offsetTableToCsv, validateGeometry } from '@/lib/geometry';
 
 describe('demo bridges', () => {
-  it('are two, pass the schema and compute without geometry issues', () => {
-    expect(demoBridges).toHaveLength(2);
+  it('are three, pass the schema and compute without geometry issues', () => {
+    expect(demoBridges).toHaveLength(3);
     for (const b of demoBridges) {
       expect(bridgeDescriptionSchema.safeParse(b).success).toBe(true);
       expect(validateGeometry(b)).toEqual([]);
@@ -32,6 +32,28 @@ describe('demo bridges', () => {
     for (const s of steel.span_summaries) expect(s.max_edge_width - s.min_edge_width).toBeLessThan(1e-9);
     // Surveyed tops of girder give buildups on span 1 of the precast bridge.
     expect(precast.points.filter((p) => p.buildup !== null && p.side !== 'interior').length).toBeGreaterThanOrEqual(4);
+  });
+
+  it('the ramp shows a spiral, a flared edge and deflections in its targets', () => {
+    const ramp = demoBridges[2];
+    const els = ramp.alignment.elements;
+    expect(els.map((e) => e.type)).toEqual(['line', 'spiral', 'arc', 'spiral', 'line']);
+    // Its first two bents lie inside the entry spiral (stations 3120 to 3320).
+    expect(ramp.bents.filter((b) => b.station > 3120 && b.station < 3320)).toHaveLength(2);
+    expect(Array.isArray(ramp.deck.right_edge_offset)).toBe(true);
+    const t = computeOffsetTable(ramp);
+    expect(t.warnings).toBeUndefined();
+    expect(ramp.deflections).toHaveLength(ramp.girders.length * (ramp.bents.length - 1));
+    for (const p of t.points) {
+      // Tenth points: the table's values land on the girder points.
+      const d = ramp.deflections!.find((e) => e.girder === p.girder && e.span === p.span)!.values[p.point];
+      expect(p.deflection).toBe(d);
+      expect(p.screed_grade).toBeCloseTo(p.top_of_deck + d, 12);
+      if (p.side !== 'interior') expect(p.form_target!).toBeCloseTo(p.edge_bottom! + 0.02 + d, 12);
+    }
+    // The flare widens the deck toward Abutment 4: the right edge points move outward span by span.
+    const right = t.points.filter((p) => p.side === 'right' && p.point === 0);
+    for (let i = 1; i < right.length; i++) expect(right[i].offset).toBeGreaterThan(right[i - 1].offset);
   });
 
   it('export to CSV in every style', () => {
