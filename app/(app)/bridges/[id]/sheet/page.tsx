@@ -3,6 +3,7 @@ import Link from 'next/link';
 import GeometryProblem from '@/components/editor/GeometryProblem';
 import SafetyCaution from '@/components/SafetyCaution';
 import SheetPrintButton from '@/components/sheet/SheetPrintButton';
+import SheetPdfDownload from '@/components/sheet/SheetPdfDownload';
 import SheetSendForm from '@/components/sheet/SheetSendForm';
 import SheetTable from '@/components/sheet/SheetTable';
 import { dateTimeText, lengthText } from '@/lib/units';
@@ -63,6 +64,7 @@ export default async function SheetPage({ params, searchParams }: { params: Para
           <a href={csvHref} className="btn-secondary" download>
             Download CSV
           </a>
+          <SheetPdfDownload bridgeId={view.bridge.id} units={units} span={span} />
           <Link href={`/bridges/${view.bridge.id}/field`} className="btn-secondary">
             Field mode
           </Link>
