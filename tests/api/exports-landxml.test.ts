@@ -126,6 +126,31 @@ describe('GET /api/bridges/:id/alignment.xml', () => {
     await roundTrip(left);
   });
 
+  it('writes clothoids as <Spiral spiType="clothoid"> with INF for a tangent end, and they round-trip too', async () => {
+    const spirals = {
+      ...demoBridges[0],
+      alignment: {
+        ...demoBridges[0].alignment,
+        elements: [
+          { type: 'line' as const, length: 150 },
+          { type: 'spiral' as const, length: 40, radius_start: null, radius_end: 1000, direction: 'right' as const },
+          { type: 'arc' as const, length: 420, radius: 1000, direction: 'right' as const },
+          { type: 'spiral' as const, length: 60, radius_start: 1000, radius_end: 700, direction: 'right' as const },
+          { type: 'spiral' as const, length: 80, radius_start: 700, radius_end: null, direction: 'right' as const },
+          { type: 'line' as const, length: 200 },
+        ],
+      },
+    } as BridgeDescription;
+    const { xml } = await roundTrip(spirals);
+    const geom = ((((new XMLParser({ ignoreAttributes: false }).parse(xml) as Node).LandXML as Node).Alignments as Node).Alignment as Node).CoordGeom as Node;
+    const list = geom.Spiral as Node[];
+    expect(list.map((s) => [s['@_spiType'], s['@_rot'], s['@_radiusStart'], s['@_radiusEnd'], s['@_length']])).toEqual([
+      ['clothoid', 'cw', 'INF', '1000', '40'],
+      ['clothoid', 'cw', '1000', '700', '60'],
+      ['clothoid', 'cw', '700', 'INF', '80'],
+    ]);
+  });
+
   it('uses only LandXML 1.2 element and attribute names, northing first, in the bridge’s unit', async () => {
     const { xml } = await roundTrip(demoBridges[0]);
     // fast-xml-parser: an independent XML reader.
