@@ -7,6 +7,7 @@ import { db } from '@/lib/db/connection';
 import { sendMail, type MailResult } from '@/lib/mail/send';
 import { audit } from './audit';
 import { fieldSheetCsv, loadFieldSheet, safeFileName, type FieldSheet } from './field-sheet';
+import { fieldSheetPdfForBridge } from './exports';
 import { lengthText, tapeAndDecimalLength } from '@/lib/units';
 
 /** Body of POST /api/bridges/:id/send-sheet. */
@@ -37,7 +38,7 @@ export function sheetSummary(sheet: FieldSheet, sender: string): string {
   }
   lines.push(
     '',
-    `The attached CSV lists every bracket: station, edge width, level-bar reading and rods, form target, and blank columns for the measurements. Base rod length ${len(sheet.base_rod_length)}.`,
+    `The attached PDF is the printable sheet, with each span's sign-off. The attached CSV lists every bracket: station, edge width, level-bar reading and rods, form target, and blank columns for the measurements. Base rod length ${len(sheet.base_rod_length)}.`,
     sheet.rod_definition,
     '',
     `CAUTION: ${sheet.caution}`,
@@ -66,7 +67,7 @@ async function checkSendRate(userId: number, recipients: number): Promise<void> 
   }
 }
 
-/** Sends the field sheet (CSV attached, summary in the body) and records it in the audit log. */
+/** Sends the field sheet (CSV and PDF attached, summary in the body) and records it in the audit log. */
 export async function sendSheet(user: SessionUser, bridgeId: string, input: z.infer<typeof sendSheetSchema>): Promise<{ via: MailResult['via']; to: string[]; subject: string; outbox_id: number | null }> {
   const span = input.span ?? null;
   const sheet = await loadFieldSheet(bridgeId, span);
@@ -74,10 +75,13 @@ export async function sendSheet(user: SessionUser, bridgeId: string, input: z.in
   await checkSendRate(user.id, to.length);
   const subject = `Field sheet: ${sheet.bridge.name.replace(/[\r\n]+/g, ' ')}${span ? `, span ${span}` : ''} (revision ${sheet.revision})`;
   const filename = `${safeFileName(sheet.bridge.name)}-rev${sheet.revision}-field-sheet${span ? `-span${span}` : ''}.csv`;
-  const result = await sendMail(
-    { to, subject, text: sheetSummary(sheet, user.name), attachments: [{ filename, contentType: 'text/csv; charset=utf-8', content: fieldSheetCsv(sheet) }] },
-    user.id,
-  );
+  // The same PDF the field-sheet.pdf route serves (paper by the bridge's units).
+  const pdf = await fieldSheetPdfForBridge(bridgeId, { span });
+  const attachments = [
+    { filename, contentType: 'text/csv; charset=utf-8', content: fieldSheetCsv(sheet) },
+    { filename: pdf.filename, contentType: pdf.contentType, content: pdf.body },
+  ];
+  const result = await sendMail({ to, subject, text: sheetSummary(sheet, user.name), attachments }, user.id);
   await db();
   await audit(user.id, 'sheet.send', 'bridge', sheet.bridge.id, { to, span, revision: sheet.revision, via: result.via, outbox: result.outboxId });
   return { via: result.via, to, subject, outbox_id: result.outboxId };

@@ -52,7 +52,7 @@ describe('POST /api/bridges/:id/send-sheet without an SMTP server (local outbox)
     expect(msg.subject).toMatch(/Field sheet/);
     expect(msg.subject).toMatch(/span 1/);
     expect(msg.text).toMatch(/CAUTION: Geometry only/);
-    expect(msg.attachments).toHaveLength(1);
+    expect(msg.attachments).toHaveLength(2);
     expect(msg.attachments[0].filename).toMatch(/-rev1-field-sheet-span1\.csv$/);
     // The attachment is the same sheet the CSV route serves.
     expect(msg.attachments[0].content).toBe(await csvOf(1));
@@ -61,6 +61,29 @@ describe('POST /api/bridges/:id/send-sheet without an SMTP server (local outbox)
     const raw = fs.readFileSync(eml, 'utf8');
     const csvPart = mimeParts(raw).find((p) => /text\/csv/i.test(p.headers));
     expect(csvPart?.body).toBe(await csvOf(1));
+  });
+
+  it('attaches the field sheet as PDF too: span 1 only, its revision and every bracket', async () => {
+    const res = await send('inspector', { to: ['site.office@example.com'], span: 1 });
+    expect(res.status, res.text).toBe(202);
+    const raw = fs.readFileSync(path.join(process.env.DATA_DIR as string, 'outbox', `${String(res.json.outbox_id).padStart(6, '0')}.eml`), 'utf8');
+    // The PDF part of the MIME message (RFC 2046), base64 decoded to its bytes.
+    const part = mimeParts(raw).find((p) => /application\/pdf/i.test(p.headers));
+    expect(part?.headers).toMatch(/-rev1-field-sheet-span1\.pdf/);
+    const body = raw.split(/application\/pdf/i)[1].split(/\r?\n\r?\n/)[1].split(/\r?\n--/)[0];
+    const bytes = Buffer.from(body.replace(/\s+/g, ''), 'base64');
+    expect(bytes.subarray(0, 5).toString('latin1')).toBe('%PDF-');
+    // pdf-parse (pdf.js): an independent reader of the attached file.
+    const { PDFParse } = await import('pdf-parse');
+    const parser = new PDFParse({ data: new Uint8Array(bytes) });
+    const text = (await parser.getText()).text;
+    await parser.destroy();
+    expect(text).toContain('Revision 1');
+    expect(text).toContain('Span 1 · G1');
+    expect(text).not.toContain('Span 2 · G1');
+    // Every bracket of span 1 is a row starting with its point and station, as on the sheet page.
+    const csvRows = (await csvOf(1)).trim().split('\n').slice(3).map((l) => l.split(','));
+    for (const r of csvRows) expect(text).toContain(`${r[3]} ${r[4]} `);
   });
 
   it('serves the sheet CSV for one span or all; a span that is not a whole number or does not exist is a 400', async () => {
