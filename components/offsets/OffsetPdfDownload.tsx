@@ -16,7 +16,7 @@ export default function OffsetPdfDownload({ bridgeId, units, style }: { bridgeId
   return (
     <span className="inline-flex items-stretch gap-1">
       <a href={`/api/bridges/${bridgeId}/offsets.pdf?style=${pdfStyle}&paper=${paper}`} className="btn-secondary min-h-11" download>
-        Download PDF
+        Download PDF ({pdfStyle === 'metric' ? 'metric' : pdfStyle === 'feet-inches' ? 'feet-inches' : 'decimal feet'})
       </a>
       <label htmlFor={`${id}-paper`} className="sr-only">
         Paper size of the PDF
