@@ -8,6 +8,8 @@ let browser: Browser;
 
 // A phone-sized viewport (390 × 844 CSS px, a common phone size), touch enabled.
 const PHONE = { viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true, deviceScaleFactor: 2 };
+// Room to wait on a busy machine (an upper bound on waiting, not a timing check).
+const SOON = { timeout: 30000 };
 
 beforeAll(async () => {
   browser = await launchChromium();
@@ -36,7 +38,7 @@ async function openControlledFieldMode(page: Page, id: string): Promise<void> {
     await navigator.serviceWorker.ready;
   });
   if (!(await page.evaluate(() => Boolean(navigator.serviceWorker.controller)))) await page.reload();
-  await expect.poll(() => page.evaluate(() => Boolean(navigator.serviceWorker.controller))).toBe(true);
+  await expect.poll(() => page.evaluate(() => Boolean(navigator.serviceWorker.controller)), SOON).toBe(true);
   await page.getByTestId('target-width').waitFor();
 }
 
@@ -74,7 +76,7 @@ async function decimalTarget(page: Page): Promise<number> {
 async function recordHere(page: Page): Promise<void> {
   await page.getByLabel(/Measured edge width/).fill((await decimalTarget(page)).toFixed(2));
   await page.getByRole('button', { name: 'Record' }).click();
-  await expect.poll(() => page.getByTestId('field-verdict').textContent()).toBe('PASS');
+  await expect.poll(() => page.getByTestId('field-verdict').textContent(), SOON).toBe('PASS');
 }
 
 async function pickLastSpan(page: Page): Promise<{ span: number; girder: string }> {
@@ -150,7 +152,7 @@ describe('field mode without a connection', () => {
     await context.setOffline(true);
     await page.reload();
     await page.getByTestId('target-width').waitFor();
-    await expect.poll(() => page.getByTestId('field-source').textContent()).toMatch(/^offline · saved \d\d:\d\d · revision 1$/);
+    await expect.poll(() => page.getByTestId('field-source').textContent(), SOON).toMatch(/^offline · saved \d\d:\d\d · revision 1$/);
     await pickLastSpan(page);
     // The numbers on screen offline are the kept offset table's, the same as online.
     expect(await page.getByTestId('target-width').textContent()).toBe(onlineTarget);
@@ -162,8 +164,8 @@ describe('field mode without a connection', () => {
     // A camera photo larger than the phone keeps (2400 × 1800 px); made small before it is stored.
     const png = await new Jimp({ width: 2400, height: 1800, color: 0x5a7d9aff }).getBuffer('image/png');
     await page.locator('input[type=file]').setInputFiles({ name: 'edge.png', mimeType: 'image/png', buffer: png });
-    await expect.poll(() => page.getByText(/Photo kept on this phone/).count()).toBe(1);
-    await expect.poll(() => page.getByTestId('field-waiting').textContent()).toBe('4 waiting');
+    await expect.poll(() => page.getByText(/Photo kept on this phone/).count(), SOON).toBe(1);
+    await expect.poll(() => page.getByTestId('field-waiting').textContent(), SOON).toBe('4 waiting');
     const waiting = await waitingItems(page);
     expect(waiting.map((w) => w.kind)).toEqual(['check', 'check', 'check', 'photo']);
     expect(waiting[3].checkKey).toBe(waiting[2].key);
@@ -174,7 +176,7 @@ describe('field mode without a connection', () => {
     errors.push(...trackPageErrors(page));
     await page.goto(`${baseUrl}/bridges/${id}/field`);
     await page.getByTestId('target-width').waitFor();
-    await expect.poll(() => page.getByTestId('field-waiting').textContent()).toBe('4 waiting');
+    await expect.poll(() => page.getByTestId('field-waiting').textContent(), SOON).toBe('4 waiting');
 
     await context.setOffline(false);
     await expect.poll(() => page.getByTestId('field-waiting').textContent(), { timeout: 60000 }).toBe('All sent');
@@ -239,8 +241,87 @@ describe('field mode without a connection', () => {
     await page.goto(`${baseUrl}/bridges/${id}/checks`);
     for (const c of sent) {
       const row = page.locator('tbody tr').filter({ has: page.locator('td:first-child', { hasText: new RegExp(`^${c.id}$`) }) });
-      await expect.poll(() => row.textContent()).toMatch(/rev 1\s*\(older revision\)/);
+      await expect.poll(() => row.textContent(), SOON).toMatch(/rev 1\s*\(older revision\)/);
     }
+    await context.close();
+  });
+});
+
+describe('nothing lost, nothing leaked', () => {
+  const DESK = { viewport: { width: 1280, height: 800 } };
+
+  function outboxCount(page: Page): Promise<number> {
+    return waitingItems(page).then((items) => items.length);
+  }
+
+  it('keeps a measurement through an expired sign-in and another person signing in, then sends it under the person who took it', async () => {
+    const context = await browser.newContext(DESK);
+    const page = await context.newPage();
+    await signIn(page, baseUrl, 'inspector@example.com');
+    const inspector = await page.evaluate(async () => (await (await fetch('/api/auth/session')).json()).user.name as string);
+    const id = await bridgeId(page, 'Quarry Lane Connector');
+    await openControlledFieldMode(page, id);
+    await keepOnPhone(page);
+    await context.setOffline(true);
+    await recordHere(page);
+    const [item] = await waitingItems(page);
+
+    // The sign-in expires while the phone is offline; the connection comes back.
+    await context.clearCookies();
+    await context.setOffline(false);
+    await expect.poll(() => page.getByText('Signed out: sign in again to send.').count(), { timeout: 60000 }).toBeGreaterThan(0);
+    expect(await outboxCount(page)).toBe(1);
+
+    // Someone else signs in on this phone: the measurement is not theirs to send.
+    await signIn(page, baseUrl, 'crew@example.com');
+    await page.goto(`${baseUrl}/bridges/${id}/field`);
+    await expect.poll(() => page.getByText(/taken on this phone by inspector@example\.com wait for that person/).count(), SOON).toBe(1);
+    expect(await outboxCount(page)).toBe(1);
+    const early = await apiGet<Check[]>(page, `/api/bridges/${id}/checks`);
+    expect(early.filter((c) => c.client_key === item.key)).toEqual([]);
+    // Signing out with nothing of their own waiting does not ask, and leaves the inspector's measurement.
+    await page.goto(`${baseUrl}/bridges`);
+    await page.getByRole('button', { name: 'Sign out' }).click();
+    await page.waitForURL(/\/signin/);
+    expect(await outboxCount(page)).toBe(1);
+
+    // The inspector signs in again: it goes, once, under the inspector's name.
+    await signIn(page, baseUrl, 'inspector@example.com');
+    await expect.poll(() => outboxCount(page), { timeout: 60000 }).toBe(0);
+    const sent = (await apiGet<(Check & { by: string })[]>(page, `/api/bridges/${id}/checks`)).filter((c) => c.client_key === item.key);
+    expect(sent).toHaveLength(1);
+    expect(sent[0].by).toBe(inspector);
+    await context.close();
+  });
+
+  it('asks before signing out deletes unsent measurements, then clears the bridge data from the phone', async () => {
+    const context = await browser.newContext(DESK);
+    const page = await context.newPage();
+    await signIn(page, baseUrl, 'inspector@example.com');
+    const id = await bridgeId(page, 'Marlow Creek Overpass');
+    await openControlledFieldMode(page, id);
+    await keepOnPhone(page);
+    await context.setOffline(true);
+    await recordHere(page);
+    await page.getByRole('button', { name: 'Sign out' }).click();
+    await expect.poll(() => page.getByRole('alertdialog').textContent(), SOON).toMatch(/1 measurement or photo has not reached the server yet/);
+    await page.getByRole('button', { name: 'Stay signed in' }).click();
+    expect(await outboxCount(page)).toBe(1);
+    await page.getByRole('button', { name: 'Sign out' }).click();
+    await page.getByRole('button', { name: 'Delete and sign out' }).click();
+    await expect.poll(() => outboxCount(page), SOON).toBe(0);
+    const left = await page.evaluate(
+      () =>
+        new Promise<{ bridges: number; caches: string[] }>((resolve) => {
+          const open = indexedDB.open('chordline-offline');
+          open.onsuccess = () => {
+            const req = open.result.transaction('bridges').objectStore('bridges').count();
+            req.onsuccess = async () => resolve({ bridges: req.result, caches: await caches.keys() });
+          };
+        }),
+    );
+    expect(left.bridges).toBe(0);
+    expect(left.caches.filter((c) => ['chordline-pages', 'chordline-rsc', 'chordline-data', 'chordline-photos'].includes(c))).toEqual([]);
     await context.close();
   });
 });
