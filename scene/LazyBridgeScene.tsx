@@ -1,9 +1,9 @@
 'use client';
 
 import dynamic from 'next/dynamic';
-import { useEffect, useState, type ReactNode } from 'react';
+import type { ReactNode } from 'react';
 import type { BridgeSceneProps } from './BridgeScene';
-import { hasWebGL } from './webgl';
+import { useWebGL } from './webgl';
 import SceneErrorBoundary from './SceneErrorBoundary';
 
 // three.js loads only where a scene is drawn, and only in the browser.
@@ -14,8 +14,7 @@ const BridgeScene = dynamic(() => import('./BridgeScene'), {
 
 /** The scene, or `fallback` when the browser has no WebGL or the scene fails to start. */
 export default function LazyBridgeScene({ fallback, ...props }: BridgeSceneProps & { fallback: ReactNode }) {
-  const [webgl, setWebgl] = useState<boolean | null>(null);
-  useEffect(() => setWebgl(hasWebGL()), []);
+  const webgl = useWebGL();
   if (webgl === null) return null;
   if (!webgl) return <>{fallback}</>;
   return (

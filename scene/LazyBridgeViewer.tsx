@@ -1,9 +1,8 @@
 'use client';
 
 import dynamic from 'next/dynamic';
-import { useEffect, useState } from 'react';
 import type { BridgeViewerProps } from './BridgeViewer';
-import { hasWebGL } from './webgl';
+import { useWebGL } from './webgl';
 import NoWebGL from './NoWebGL';
 import SceneErrorBoundary from './SceneErrorBoundary';
 
@@ -20,8 +19,7 @@ const BridgeViewer = dynamic(() => import('./BridgeViewer'), { ssr: false, loadi
 
 /** The bridge's 3D view, or a plain message with a way to the numbers when there is no WebGL. */
 export default function LazyBridgeViewer(props: BridgeViewerProps & { offsetsHref: string }) {
-  const [webgl, setWebgl] = useState<boolean | null>(null);
-  useEffect(() => setWebgl(hasWebGL()), []);
+  const webgl = useWebGL();
   if (webgl === null) return <Loading />;
   const fallback = <NoWebGL offsetsHref={props.offsetsHref} />;
   if (!webgl) return fallback;

@@ -1,3 +1,5 @@
+import { useSyncExternalStore } from 'react';
+
 /** True when the browser can create a WebGL context (hardware or software). Client only. */
 export function hasWebGL(): boolean {
   try {
@@ -9,4 +11,19 @@ export function hasWebGL(): boolean {
   } catch {
     return false;
   }
+}
+
+let webglAnswer: boolean | undefined;
+const noSubscription = () => () => {};
+
+/**
+ * Whether this browser has WebGL: null while rendering on the server and during hydration, then the
+ * answer (asked once per page load).
+ */
+export function useWebGL(): boolean | null {
+  return useSyncExternalStore(
+    noSubscription,
+    () => (webglAnswer ??= hasWebGL()),
+    () => null,
+  );
 }

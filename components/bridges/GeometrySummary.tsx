@@ -1,6 +1,6 @@
-import type { BridgeDescription } from '@/lib/geometry/schema';
+import type { BridgeDescription } from '@/lib/geometry';
 import SummaryTable from '@/components/offsets/SummaryTable';
-import { enteredLengthText, lengthText, offsetText, slopeText, stationText, type Units } from '@/lib/units';
+import { enteredLengthText, lengthText, offsetText, slopeText, stationsAlong, stationText, type Units } from '@/lib/units';
 
 /** Plain-language summary of a stored description: alignment, profile, section, bents, spans, girders. */
 export default function GeometrySummary({ description }: { description: BridgeDescription }) {
@@ -12,12 +12,10 @@ export default function GeometrySummary({ description }: { description: BridgeDe
   const edgeText = (e: BridgeDescription['deck']['left_edge_offset']) =>
     typeof e === 'number' ? offsetText(e, units, true) : `flared: ${e.map((r) => `${sta(r.station)} ${offsetText(r.offset, units, true)}`).join(' · ')}`;
 
-  let station = description.alignment.start_station;
+  const ends = stationsAlong(description.alignment.start_station, description.alignment.elements.map((el) => el.length));
   const elements = description.alignment.elements.map((el, i) => {
-    const from = station;
-    station += el.length;
     const kind = el.type === 'arc' ? `Curve ${el.direction}` : 'Tangent';
-    return [String(i + 1), kind, sta(from), sta(station), len(el.length), el.type === 'arc' ? len(el.radius) : '—'];
+    return [String(i + 1), kind, sta(ends[i]), sta(ends[i + 1]), len(el.length), el.type === 'arc' ? len(el.radius) : '—'];
   });
 
   const bents = description.bents.map((b) => [b.name, sta(b.station), `${b.skew_deg.toFixed(2)}°`]);

@@ -1,4 +1,4 @@
-import { lengthText, stationText, type Units } from '@/lib/units';
+import { lengthText, stationsAlong, stationText, type Units } from '@/lib/units';
 import type { ImportedAlignment } from '@/lib/import/landxml';
 
 type Element = ImportedAlignment['alignment']['elements'][number];
@@ -18,12 +18,9 @@ export default function LandXmlPreview({ item, units }: { item: ImportedAlignmen
   const al = item.alignment;
   // The "no profile" note is said in the box above; the others are listed at the end.
   const notes = item.notes.filter((n) => !(item.profile === null && n.startsWith('No profile came')));
-  let station = al.start_station;
-  const rows = al.elements.map((e, i) => {
-    const from = station;
-    station += e.length;
-    return { i, e, from, to: station };
-  });
+  const ends = stationsAlong(al.start_station, al.elements.map((e) => e.length));
+  const rows = al.elements.map((e, i) => ({ i, e, from: ends[i], to: ends[i + 1] }));
+  const station = ends[ends.length - 1];
   return (
     <div className="space-y-3" data-testid="landxml-preview">
       <p className="text-sm text-concrete-700">

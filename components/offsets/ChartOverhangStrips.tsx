@@ -1,7 +1,6 @@
 'use client';
 
-import type { DisplayStyle } from '@/lib/geometry/format';
-import type { SpanSummary } from '@/lib/geometry/types';
+import type { DisplayStyle, SpanSummary } from '@/lib/geometry';
 import ChartStrip, { type ChartBent, type ChartSeries } from '@/components/offsets/ChartStrip';
 import type { OffsetPointRow } from '@/components/offsets/offset-table-types';
 import { lengthWithUnit, stationText, type Units } from '@/lib/units';

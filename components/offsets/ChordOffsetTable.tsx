@@ -1,7 +1,7 @@
 'use client';
 
 import { useMemo, useState } from 'react';
-import type { DisplayStyle } from '@/lib/geometry/format';
+import type { DisplayStyle } from '@/lib/geometry';
 import type { ChordOffsetSetRow } from '@/components/offsets/offset-table-types';
 import { lengthCell, lengthUnit, lengthWithUnit, type Units } from '@/lib/units';
 import OffsetSortHeader, { type SortDirection } from '@/components/offsets/OffsetSortHeader';

@@ -1,8 +1,7 @@
 'use client';
 
 import { useMemo, useState } from 'react';
-import type { DisplayStyle } from '@/lib/geometry/format';
-import type { SpanSummary } from '@/lib/geometry/types';
+import type { DisplayStyle, SpanSummary } from '@/lib/geometry';
 import type { OffsetPointRow } from '@/components/offsets/offset-table-types';
 import { elevationCell, lengthCell, lengthUnit, lengthWithUnit, offsetCell, stationText, type Units } from '@/lib/units';
 import OffsetSortHeader, { type SortDirection } from '@/components/offsets/OffsetSortHeader';

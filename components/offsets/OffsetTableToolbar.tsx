@@ -2,7 +2,7 @@
 
 import { useId } from 'react';
 import OffsetPdfDownload from '@/components/offsets/OffsetPdfDownload';
-import type { DisplayStyle } from '@/lib/geometry/format';
+import type { DisplayStyle } from '@/lib/geometry';
 import type { Units } from '@/lib/units';
 
 /** How near a typed station ("12+45") a girder point must lie to be shown, either side. */

@@ -1,9 +1,8 @@
 'use client';
 
-import { useEffect, useMemo, useState } from 'react';
+import { useMemo, useState, useSyncExternalStore } from 'react';
 import useSWR from 'swr';
-import type { DisplayStyle } from '@/lib/geometry/format';
-import type { SpanSummary } from '@/lib/geometry/types';
+import type { DisplayStyle, SpanSummary } from '@/lib/geometry';
 import { fetcher, type ApiError } from '@/lib/client/api-client';
 import { LoadFailed, Loading } from '@/components/LoadState';
 import ChartOverhangStrips from '@/components/offsets/ChartOverhangStrips';
@@ -20,6 +19,15 @@ type TableJson = OffsetTableJson & { span_summaries?: SpanSummary[] };
 type SpanGroup = { span: number; sides: { side: 'left' | 'right'; rows: OffsetPointRow[] }[]; chords: ChordOffsetSetRow[] };
 
 const STYLE_KEY = 'chordline.offsetStyle';
+
+/** The display style saved in this browser, or null. */
+function savedStyle(): DisplayStyle | null {
+  const saved = window.localStorage.getItem(STYLE_KEY);
+  return saved === 'decimal-feet' || saved === 'feet-inches' ? saved : null;
+}
+
+/** Nothing to listen to: the saved style is read once the page is in the browser. */
+const noSubscription = () => () => {};
 
 function groupBySpan(points: OffsetPointRow[], chords: ChordOffsetSetRow[]): SpanGroup[] {
   const spans = new Map<number, SpanGroup>();
@@ -69,15 +77,13 @@ export default function OffsetTables({ bridgeId, bents }: { bridgeId: number; be
   const { data, error, isLoading, mutate } = useSWR<TableJson, ApiError>(`/api/bridges/${bridgeId}/offsets`, fetcher, {
     revalidateOnFocus: false,
   });
-  const [style, setStyle] = useState<DisplayStyle>('decimal-feet');
+  // The style chosen on this page, else the one saved in this browser (read after hydration), else decimal feet.
+  const [chosen, setChosen] = useState<DisplayStyle | null>(null);
+  const saved = useSyncExternalStore(noSubscription, savedStyle, () => null);
+  const style: DisplayStyle = chosen ?? saved ?? 'decimal-feet';
   const [filter, setFilter] = useState<OffsetFilter>({ span: 'all', side: 'both', text: '' });
-
-  useEffect(() => {
-    const saved = window.localStorage.getItem(STYLE_KEY);
-    if (saved === 'decimal-feet' || saved === 'feet-inches') setStyle(saved);
-  }, []);
   const chooseStyle = (s: DisplayStyle) => {
-    setStyle(s);
+    setChosen(s);
     window.localStorage.setItem(STYLE_KEY, s);
   };
 

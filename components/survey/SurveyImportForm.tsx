@@ -2,7 +2,7 @@
 
 import { useRouter } from 'next/navigation';
 import Link from 'next/link';
-import { useEffect, useId, useState } from 'react';
+import { useId, useState, useSyncExternalStore } from 'react';
 import { mutate } from 'swr';
 import { ApiError, sendJson } from '@/lib/client/api-client';
 import SurveyPreviewTable, { type SurveyPreviewJson } from '@/components/survey/SurveyPreviewTable';
@@ -17,6 +17,9 @@ type Stored = { import_id: number; stored: number; replaced: number; revision: n
  * Top-of-girder survey upload: the file is checked row by row first (POST …/survey/preview writes
  * nothing); only a file without problems can then be stored (POST …/survey).
  */
+/** Nothing to listen to: the snapshot only tells the server's render from the browser's. */
+const noSubscription = () => () => {};
+
 export default function SurveyImportForm({ bridgeId, units }: { bridgeId: number; units: Units }) {
   const router = useRouter();
   const id = useId();
@@ -25,9 +28,8 @@ export default function SurveyImportForm({ bridgeId, units }: { bridgeId: number
   const [error, setError] = useState<string | null>(null);
   const [stored, setStored] = useState<Stored | null>(null);
   const [busy, setBusy] = useState<'checking' | 'storing' | null>(null);
-  // The file input works only once the page is interactive; until then it is shown disabled.
-  const [ready, setReady] = useState(false);
-  useEffect(() => setReady(true), []);
+  // The file input works only once the page is interactive (hydrated); until then it is shown disabled.
+  const ready = useSyncExternalStore(noSubscription, () => true, () => false);
 
   async function check(name: string, text: string) {
     setBusy('checking');

@@ -2,7 +2,7 @@ import { NextResponse, type NextRequest } from 'next/server';
 import type { z } from 'zod';
 import { roleAllows, type Role } from '@/lib/auth/roles';
 import { sessionUserFromRequest, type SessionUser } from '@/lib/auth/session';
-import { errorResponse, HttpError, invalidInput, jsonError } from './errors';
+import { errorResponse, invalidInput, jsonError } from './errors';
 import { readJson } from './body';
 import { crossSiteReason, UNSAFE_METHODS } from './origin';
 

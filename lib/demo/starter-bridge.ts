@@ -1,4 +1,4 @@
-import type { BridgeDescriptionInput } from '@/lib/geometry/schema';
+import type { BridgeDescriptionInput } from '@/lib/geometry';
 import type { Units } from '@/lib/units';
 
 /**

@@ -3,7 +3,6 @@ import { computeOffsetTable, GeometryError, offsetTableToCsv, type BridgeDescrip
 import { UnprocessableError, ValidationError } from '@/lib/errors';
 import { requireBridge } from './require-bridge';
 import { Bridge } from '@/models';
-import { db } from '@/lib/db/connection';
 import { schemaCheckedDescription } from './description';
 import { getRevisionDescription } from './bridges';
 import { storedSurvey, withSurvey } from './survey';

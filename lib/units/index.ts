@@ -5,7 +5,7 @@
 export { decimalsFor, stationBlock, type Units } from './units';
 export { LENGTH_TOLERANCE, POINT_TOLERANCE, atLeast, atMost, nearlyEqual, nearlyZero, safeDivisor } from './tolerance';
 export { differenceText, enteredLengthText, lengthText, readingLength, slopeText, tapeAndDecimalLength, tapeLength } from './length-text';
-export { offsetText, stationText } from './station-text';
+export { offsetText, stationsAlong, stationText } from './station-text';
 export { deviationText, toleranceText, type MeasureKind } from './deviation-text';
 export { effectiveStyle, elevationCell, lengthCell, lengthUnit, lengthWithUnit, offsetCell, type DisplayStyle } from './table-cells';
 export { parseLength } from './parse-length';

@@ -19,3 +19,10 @@ export function offsetText(value: number, units: Units, withUnit = false): strin
   const [magnitude, side] = text.split(' ');
   return side ? `${magnitude} ${units} ${side}` : `${magnitude} ${units}`;
 }
+
+/** Stations at the ends of consecutive lengths from `start`: [start, start + l0, start + l0 + l1, …]. */
+export function stationsAlong(start: number, lengths: readonly number[]): number[] {
+  const out = [start];
+  for (const l of lengths) out.push(out[out.length - 1] + l);
+  return out;
+}

@@ -4,7 +4,7 @@ import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { demoBridges } from '@/lib/demo/bridges';
-import { formatFeet, formatFeetInches, formatMetres } from '@/lib/geometry/format';
+import { formatFeet, formatFeetInches, formatMetres } from '@/lib/geometry';
 import { launchChromium, signIn, trackPageErrors } from './browser';
 
 const baseUrl = inject('baseUrl');

@@ -2,7 +2,6 @@
  * An invented two-span bridge on a 900 ft curve, far from the coordinate origin (state-plane-sized
  * eastings) so the scene's origin shift matters. Straight precast chords, five girder lines.
  */
-import type { BridgeDescription } from '@/lib/geometry';
 import type { ConstantEdgeBridge } from '@/lib/demo/bridges';
 
 export function fixtureBridge(layout: 'chord' | 'curved' = 'chord'): ConstantEdgeBridge {
