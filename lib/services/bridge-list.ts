@@ -113,8 +113,11 @@ export async function listBridgePage(query: BridgeListQuery): Promise<{ rows: Br
   const sequelize = await db();
   const and: WhereOptions[] = [];
   if (query.q) {
-    // search_text is name, structure number and route in lower case (models/Bridge.ts keeps it).
-    and.push(sequelize.literal(`search_text LIKE ${sequelize.escape(containsPattern(query.q))} ESCAPE '\\'`));
+    // search_text is name, structure number and route in lower case (models/Bridge.ts keeps it). The
+    // match runs in a subquery over the narrow bridges_search index (it holds search_text and the id),
+    // so the page's ordered scan never reads whole rows just to test them.
+    const pattern = sequelize.escape(containsPattern(query.q));
+    and.push(sequelize.literal(`id IN (SELECT id FROM bridges WHERE search_text LIKE ${pattern} ESCAPE '\\')`));
   }
   if (query.stage) and.push({ stage: query.stage });
   if (query.district) and.push({ district: query.district });
