@@ -7,7 +7,7 @@ export default function LandXmlProblems({ groups, tone }: { groups: { name: stri
       {groups.map((g, i) => (
         <div key={`${g.name}-${i}`}>
           <p className="font-semibold">
-            {tone === 'caution' ? 'Not importable: ' : ''}alignment “{g.name}” ({g.problems.length} {g.problems.length === 1 ? 'problem' : 'problems'})
+            {tone === 'caution' ? 'Not importable: alignment' : 'Alignment'} “{g.name}” ({g.problems.length} {g.problems.length === 1 ? 'problem' : 'problems'})
           </p>
           <ul className="mt-0.5 list-disc pl-5">
             {g.problems.map((p, j) => (

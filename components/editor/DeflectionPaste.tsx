@@ -3,28 +3,27 @@
 import { useId, useState } from 'react';
 import EditorSelect from '@/components/editor/EditorSelect';
 import { DEFLECTION_UNIT_WORDS, readDeflectionPaste, type DeflectionUnit, type PastedDeflection } from '@/lib/editor/deflection-paste';
-import type { Units } from '@/lib/units';
 
 /**
  * Paste from a spreadsheet or upload a CSV of deflection rows: the unit of the pasted values is said
  * and chosen on screen and converted to the bridge's unit; rows of numbers only go to the chosen
  * girder, span after span; rows may also start with the girder name and span number.
  */
-export default function EditorDeflectionPaste({ units, girders, spans, onRows }: { units: Units; girders: string[]; spans: number; onRows: (rows: PastedDeflection[]) => void }) {
+export default function EditorDeflectionPaste({ into, girders, spans, onRows }: { into: DeflectionUnit; girders: string[]; spans: number; onRows: (rows: PastedDeflection[]) => void }) {
   const id = useId();
   const [text, setText] = useState('');
-  const [unit, setUnit] = useState<DeflectionUnit>(units === 'm' ? 'mm' : 'in');
+  const [unit, setUnit] = useState<DeflectionUnit>(into);
   const [girder, setGirder] = useState(girders[0] ?? '');
   const [firstSpan, setFirstSpan] = useState(1);
   const [report, setReport] = useState<{ ok: string | null; problems: string[] } | null>(null);
   const target = girders.includes(girder) ? girder : (girders[0] ?? '');
 
   function read(source: string, from: string) {
-    const result = readDeflectionPaste(source, { unit, units, girders, spans, girder: target, firstSpan });
+    const result = readDeflectionPaste(source, { unit, into, girders, spans, girder: target, firstSpan });
     if (result.rows.length > 0) onRows(result.rows);
     const list = result.rows.map((r) => `${r.girder} span ${r.span}`).join(', ');
     setReport({
-      ok: result.rows.length > 0 ? `Read ${result.rows.length} ${result.rows.length === 1 ? 'row' : 'rows'} from ${from} (${DEFLECTION_UNIT_WORDS[unit]}, stored in ${units === 'm' ? 'metres' : 'feet'}): ${list}.${result.header ? ' The first row was taken as a header.' : ''}` : null,
+      ok: result.rows.length > 0 ? `Read ${result.rows.length} ${result.rows.length === 1 ? 'row' : 'rows'} from ${from} (${DEFLECTION_UNIT_WORDS[unit]}${unit === into ? '' : `, shown in ${DEFLECTION_UNIT_WORDS[into]}`}): ${list}.${result.header ? ' The first row was taken as a header.' : ''}` : null,
       problems: result.problems.length > 0 || result.rows.length > 0 ? result.problems : ['Nothing to read: paste rows of numbers, one row per girder and span.'],
     });
   }

@@ -6,7 +6,8 @@ import EditorRow from '@/components/editor/EditorRow';
 import EditorSection from '@/components/editor/EditorSection';
 import EditorSelect from '@/components/editor/EditorSelect';
 import { messagesAt, messagesUnder } from '@/lib/editor/check-draft';
-import { mergeDeflections, newDeflectionRow, type DeflectionDraft } from '@/lib/editor/deflection-draft';
+import { convertDeflectionRows, mergeDeflections, newDeflectionRow, type DeflectionDraft } from '@/lib/editor/deflection-draft';
+import { DEFLECTION_UNIT_WORDS, type DeflectionUnit } from '@/lib/editor/deflection-paste';
 import { moveItem } from '@/lib/editor/draft';
 import type { SectionProps } from '@/lib/editor/section-props';
 
@@ -28,12 +29,21 @@ export default function EditorDeflectionSection({ draft, update, check }: Sectio
     <EditorSection
       id="deflections"
       title="Dead-load deflections"
-      intro={`How far each girder will still sag under the wet deck, from the plans' deflection table: positive downward, in ${u === 'm' ? 'metres' : 'feet'}, at equal fractions of each span (11 values for tenth points). Form targets, buildups and the screed grade are raised by them. Leave the table empty when the plans give none.`}
+      intro={`How far each girder will still sag under the wet deck, from the plans' deflection table: positive downward, in ${DEFLECTION_UNIT_WORDS[draft.deflection_unit]} (stored in ${u === 'm' ? 'metres' : 'feet'}), at equal fractions of each span (11 values for tenth points). Form targets, buildups and the screed grade are raised by them. Leave the table empty when the plans give none.`}
       messages={messagesAt(check, 'deflections')}
       addLabel="Add girder and span"
       onAdd={() => set([...rows, newDeflectionRow(rows, girders, spans)])}
     >
-      <EditorDeflectionPaste units={u} girders={girders} spans={spans} onRows={(pasted) => set(mergeDeflections(rows, pasted))} />
+      <div className="mb-3">
+        <EditorSelect
+          label="Table values in"
+          value={draft.deflection_unit}
+          onChange={(unit) => update((d) => ({ ...d, deflections: convertDeflectionRows(d.deflections, d.deflection_unit, unit), deflection_unit: unit }))}
+          options={(Object.keys(DEFLECTION_UNIT_WORDS) as DeflectionUnit[]).map((x) => ({ value: x, label: DEFLECTION_UNIT_WORDS[x] }))}
+          width="w-40"
+        />
+      </div>
+      <EditorDeflectionPaste into={draft.deflection_unit} girders={girders} spans={spans} onRows={(pasted) => set(mergeDeflections(rows, pasted))} />
       {rows.length === 0 ? <p className="mt-3 text-sm text-concrete-600">No deflections: the targets are the design elevations plus the form settlement allowance.</p> : null}
       <ol className="mt-3 space-y-2" data-testid="deflection-rows">
         {rows.map((r, i) => {
@@ -62,7 +72,7 @@ export default function EditorDeflectionSection({ draft, update, check }: Sectio
               />
               <div className="grid basis-full grid-cols-4 gap-x-2 gap-y-2 sm:grid-cols-6 lg:grid-cols-11">
                 {r.values.map((v, k) => (
-                  <EditorField key={k} label={fraction(k, n)} value={v} onChange={(x) => setRow(i, { values: r.values.map((y, j) => (j === k ? x : y)) })} width="w-full min-w-0" messages={messagesAt(check, `${p}.values.${k}`)} />
+                  <EditorField key={k} label={`${fraction(k, n)} (${draft.deflection_unit})`} value={v} onChange={(x) => setRow(i, { values: r.values.map((y, j) => (j === k ? x : y)) })} width="w-full min-w-0" messages={messagesAt(check, `${p}.values.${k}`)} />
                 ))}
               </div>
             </EditorRow>

@@ -52,13 +52,7 @@ export default function EditorEdgeEditor({
       ) : (
         <>
           <table className="mt-2 text-sm">
-            <thead>
-              <tr className="text-left text-xs text-concrete-600">
-                <th className="pr-2 font-semibold">Station</th>
-                <th className="pr-2 font-semibold">Offset</th>
-                <th className="sr-only">Remove</th>
-              </tr>
-            </thead>
+            <caption className="sr-only">{label}: station and offset of each listed point of the edge</caption>
             <tbody>
               {edge.rows.map((r, j) => (
                 <tr key={r.key} className="align-top">

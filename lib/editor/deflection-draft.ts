@@ -1,8 +1,11 @@
 /**
  * The deflection table in the geometry editor: one row per girder and span, values at equal fractions
- * of the span (tenth points: 11 values), positive downward, typed in the bridge's length unit.
+ * of the span (tenth points: 11 values), positive downward, typed in the table's unit (inches or
+ * millimetres by default, feet or metres on request) and stored in the bridge's unit.
  */
-import { numberInputText } from '@/lib/units';
+import Decimal from 'decimal.js';
+import { numberInputText, type Units } from '@/lib/units';
+import { convertText, unitFactor, type DeflectionUnit } from './deflection-paste';
 
 export interface DeflectionDraft {
   key: string;
@@ -17,9 +20,24 @@ export const deflectionKey = () => `defl-${Date.now().toString(36)}-${(counter++
 
 type DeflectionInput = { girder: string; span: number; values: readonly number[] } & Record<string, unknown>;
 
-/** Draft rows of a description's `deflections` (none when it has none). */
-export function deflectionsToDraft(list: readonly DeflectionInput[] | undefined): DeflectionDraft[] {
-  return (list ?? []).map(({ girder, span, values, ...rest }) => ({ key: deflectionKey(), girder, span: String(span), values: values.map((v) => numberInputText(v)), rest }));
+/** The unit the deflection table is shown in by default: inches on a feet bridge, millimetres on a metric one. */
+export const defaultDeflectionUnit = (units: Units): DeflectionUnit => (units === 'm' ? 'mm' : 'in');
+
+/** Draft rows of a description's `deflections` (none when it has none), values shown in `unit`. */
+export function deflectionsToDraft(list: readonly DeflectionInput[] | undefined, units: Units, unit: DeflectionUnit): DeflectionDraft[] {
+  return (list ?? []).map(({ girder, span, values, ...rest }) => ({ key: deflectionKey(), girder, span: String(span), values: values.map((v) => convertText(numberInputText(v), units, unit)), rest }));
+}
+
+/** Every row's values re-written from one unit to another (text that is not a number stays as typed). */
+export function convertDeflectionRows(rows: readonly DeflectionDraft[], from: DeflectionUnit, to: DeflectionUnit): DeflectionDraft[] {
+  const one = (t: string) => {
+    try {
+      return t.trim() === '' ? t : convertText(t.trim(), from, to);
+    } catch {
+      return t;
+    }
+  };
+  return rows.map((r) => ({ ...r, values: r.values.map(one) }));
 }
 
 /** A new row: the first girder and span without a row yet, eleven zero values (tenth points). */
@@ -36,14 +54,21 @@ export function newDeflectionRow(rows: readonly DeflectionDraft[], girders: read
  * The described `deflections` list from the draft rows; each field read through `num` (which records
  * problems at its dotted path: deflections.2.values.5, deflections.2.span).
  */
-export function deflectionsFromDraft(rows: readonly DeflectionDraft[], num: (path: string, text: string, what: string) => number | undefined): Record<string, unknown>[] {
+export function deflectionsFromDraft(
+  rows: readonly DeflectionDraft[],
+  unit: DeflectionUnit,
+  units: Units,
+  num: (path: string, text: string, what: string) => number | undefined,
+): Record<string, unknown>[] {
+  const factor = unitFactor(unit, units);
+  const toBridge = (v: number | undefined) => (v === undefined ? undefined : unit === units ? v : new Decimal(v).times(factor).toNumber());
   return rows.map((r, i) => {
     const p = `deflections.${i}`;
     return {
       ...r.rest,
       girder: r.girder,
       span: num(`${p}.span`, r.span, 'a span number'),
-      values: r.values.map((v, k) => num(`${p}.values.${k}`, v, 'a deflection')),
+      values: r.values.map((v, k) => toBridge(num(`${p}.values.${k}`, v, 'a deflection'))),
     };
   });
 }

@@ -1,29 +1,37 @@
 /**
  * Reads deflection rows pasted from a spreadsheet or uploaded as CSV (papaparse): tab-, comma- or
  * semicolon-separated rows of values at equal fractions of a span (tenth points: 11 values), in the
- * unit the user chose on screen (feet, inches, metres or millimetres), converted to the bridge's unit.
+ * unit the user chose on screen (feet, inches, metres or millimetres), converted to the table's unit.
  * A row may start with the girder name and span number ("G1, 2, 0, 0.35, ..."); rows of numbers only
  * go to the chosen girder, span after span from the chosen one. A first row of words is a header.
  */
 import Decimal from 'decimal.js';
 import Papa from 'papaparse';
-import { numberInputText, type Units } from '@/lib/units';
 
 export type DeflectionUnit = 'ft' | 'in' | 'm' | 'mm';
 
 /** Words for each unit, as the screen says them. */
 export const DEFLECTION_UNIT_WORDS: Record<DeflectionUnit, string> = { ft: 'feet', in: 'inches', m: 'metres', mm: 'millimetres' };
 
-/** How many of the bridge's unit one pasted unit is (exact: 1 in = 1/12 ft, 1 ft = 0.3048 m). */
-export function unitFactor(from: DeflectionUnit, to: Units): Decimal {
+/** How many of unit `to` one `from` is (exact: 1 in = 1/12 ft, 1 ft = 0.3048 m, 1 in = 25.4 mm). */
+export function unitFactor(from: DeflectionUnit, to: DeflectionUnit): Decimal {
   const inMetres: Record<DeflectionUnit, Decimal> = { ft: new Decimal('0.3048'), in: new Decimal('0.0254'), m: new Decimal(1), mm: new Decimal('0.001') };
-  return to === 'm' ? inMetres[from] : inMetres[from].dividedBy('0.3048');
+  return inMetres[from].dividedBy(inMetres[to]);
+}
+
+/**
+ * A value typed in one unit as editor text in another: the same text when the units agree, else
+ * converted exactly and written to 12 significant digits (0.31 in → "0.0258333333333" ft).
+ */
+export function convertText(text: string, from: DeflectionUnit, to: DeflectionUnit): string {
+  if (from === to) return text;
+  return new Decimal(text).times(unitFactor(from, to)).toSignificantDigits(12).toFixed();
 }
 
 export interface PastedDeflection {
   girder: string;
   span: number;
-  /** Values in the bridge's unit, as editor text. */
+  /** Values in the table's unit (`into`), as editor text. */
   values: string[];
 }
 
@@ -44,11 +52,10 @@ const NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i;
  */
 export function readDeflectionPaste(
   text: string,
-  options: { unit: DeflectionUnit; units: Units; girders: readonly string[]; spans: number; girder: string; firstSpan: number; maxValues?: number },
+  options: { unit: DeflectionUnit; into: DeflectionUnit; girders: readonly string[]; spans: number; girder: string; firstSpan: number; maxValues?: number },
 ): PasteResult {
   const parsed = Papa.parse<string[]>(text.trim(), { delimiter: '', delimitersToGuess: ['\t', ',', ';'], skipEmptyLines: 'greedy' });
   const decimalComma = parsed.meta.delimiter === ';';
-  const factor = unitFactor(options.unit, options.units);
   const byName = new Map(options.girders.map((g) => [g.trim().toLowerCase(), g]));
   const rows: PastedDeflection[] = [];
   const problems: string[] = [];
@@ -92,7 +99,7 @@ export function readDeflectionPaste(
       problems.push(`${line}: ${values.length} ${values.length === 1 ? 'value' : 'values'}; a span needs from 2 to ${options.maxValues ?? 201} (11 for tenth points).`);
       return;
     }
-    rows.push({ girder, span, values: values.map((v) => numberInputText(new Decimal(v).times(factor).toNumber())) });
+    rows.push({ girder, span, values: values.map((v) => convertText(v, options.unit, options.into)) });
   });
   for (const e of parsed.errors) if (e.type === 'Quotes') problems.push(`Row ${(e.row ?? 0) + 1}: a quote is not closed.`);
   return { rows, problems, header };

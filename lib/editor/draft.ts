@@ -7,7 +7,8 @@
  */
 import { numberInputText, type Parsed, parseNumber, parsePercent, parseStation, percentInputText, stationInputText, type Units } from '@/lib/units';
 import type { AlignmentInput, BridgeDescription, PviInput } from '@/lib/geometry';
-import { deflectionsFromDraft, deflectionsToDraft, type DeflectionDraft } from './deflection-draft';
+import { defaultDeflectionUnit, deflectionsFromDraft, deflectionsToDraft, type DeflectionDraft } from './deflection-draft';
+import type { DeflectionUnit } from './deflection-paste';
 import type { OffsetDraft } from './draft-types';
 import { edgeFromDraft, edgeToDraft, offsetDraft, type EdgeDraft } from './edge-draft';
 
@@ -77,8 +78,9 @@ export interface Draft {
   girders: GirderDraft[];
   points_per_span: string;
   chord_spaces: string;
-  /** Dead-load deflections per girder and span (none when the bridge has none). */
+  /** Dead-load deflections per girder and span (none when the bridge has none), values in `deflection_unit`. */
   deflections: DeflectionDraft[];
+  deflection_unit: DeflectionUnit;
   /** Fields the editor does not show (top_of_girder, future optional fields), carried through unchanged. */
   rest: Rest;
 }
@@ -157,7 +159,8 @@ export function toDraft(d: BridgeDescription): Draft {
     girders: d.girders.map((g) => ({ key: newKey('girder'), name: g.name, layout: g.layout, offsets: g.offsets.map(offsetDraft), rest: omit(g, ['name', 'layout', 'offsets']) })),
     points_per_span: numberInputText(d.points_per_span),
     chord_spaces: numberInputText(d.chord_spaces),
-    deflections: deflectionsToDraft(d.deflections),
+    deflections: deflectionsToDraft(d.deflections, u, defaultDeflectionUnit(u)),
+    deflection_unit: defaultDeflectionUnit(u),
     rest: omit(d, ['name', 'units', 'alignment', 'profile', 'cross_slopes', 'deck', 'bents', 'girders', 'points_per_span', 'chord_spaces', 'deflections']),
   };
 }
@@ -260,7 +263,7 @@ export function toDescription(draft: Draft): { description: Record<string, unkno
   if (n !== undefined) description.points_per_span = n;
   const m = whole('chord_spaces', draft.chord_spaces, 'Chord spaces');
   if (m !== undefined) description.chord_spaces = m;
-  if (draft.deflections.length > 0) description.deflections = deflectionsFromDraft(draft.deflections, (path, text, what) => num(path, text, what));
+  if (draft.deflections.length > 0) description.deflections = deflectionsFromDraft(draft.deflections, draft.deflection_unit, u, (path, text, what) => num(path, text, what));
   return { description, errors };
 }
 

@@ -6,7 +6,7 @@
 import { describe, expect, it } from 'vitest';
 import { demoBridges } from '@/lib/demo/bridges';
 import { bridgeDescriptionSchema, type BridgeDescription } from '@/lib/geometry';
-import { mergeDeflections } from '@/lib/editor/deflection-draft';
+import { convertDeflectionRows, mergeDeflections } from '@/lib/editor/deflection-draft';
 import { readDeflectionPaste, unitFactor } from '@/lib/editor/deflection-paste';
 import { toDescription, toDraft } from '@/lib/editor/draft';
 import { switchEdgeMode } from '@/lib/editor/edge-draft';
@@ -46,6 +46,18 @@ describe('editor draft: spirals, flared edges, deflections', () => {
     expect(description.deflections).toEqual(withEverything.deflections);
   });
 
+  it('shows the table in inches by default and stores feet: typed 1.5 in is 0.125 ft', () => {
+    const draft = toDraft(withEverything);
+    expect(draft.deflection_unit).toBe('in');
+    // 0.0625 ft = 0.75 in (1 in = 1/12 ft).
+    expect(draft.deflections[0].values[1]).toBe('0.75');
+    draft.deflections[0].values[2] = '1.5';
+    const d = toDescription(draft).description as { deflections: { values: number[] }[] };
+    expect(d.deflections[0].values[2]).toBe(0.125);
+    const inFeet = convertDeflectionRows(draft.deflections, 'in', 'ft');
+    expect(inFeet[0].values[2]).toBe('0.125');
+  });
+
   it('leaves a bridge without deflections without the field', () => {
     const { description } = toDescription(toDraft(bridgeDescriptionSchema.parse(base)));
     expect('deflections' in description).toBe(false);
@@ -71,7 +83,7 @@ describe('editor draft: spirals, flared edges, deflections', () => {
 });
 
 describe('deflection rows pasted or uploaded', () => {
-  const opts = { units: 'ft' as const, girders: ['G1', 'G2', 'G5'], spans: 3, girder: 'G2', firstSpan: 2 };
+  const opts = { into: 'ft' as const, girders: ['G1', 'G2', 'G5'], spans: 3, girder: 'G2', firstSpan: 2 };
 
   it('converts by the exact definitions: 1 in = 1/12 ft, 1 ft = 0.3048 m, 1 in = 25.4 mm', () => {
     // Source: the international yard and pound agreement (1959) as published by NIST: 1 ft = 0.3048 m exactly.
@@ -80,10 +92,13 @@ describe('deflection rows pasted or uploaded', () => {
     expect(unitFactor('ft', 'm').toNumber()).toBe(0.3048);
     expect(unitFactor('in', 'm').toNumber()).toBe(0.0254);
     expect(unitFactor('mm', 'ft').times(304.8).toNumber()).toBe(1);
+    expect(unitFactor('in', 'mm').toNumber()).toBe(25.4);
   });
 
   it('reads tab-separated rows with girder and span, in inches, into feet', () => {
     const got = readDeflectionPaste('Girder\tSpan\t0.0\t0.5\t1.0\nG1\t1\t0\t0.75\t0\ng5\t3\t0\t1.5\t0\n', { ...opts, unit: 'in' });
+    // Into a table shown in inches the pasted text stays as it was.
+    expect(readDeflectionPaste('G1\t1\t0\t0.31\t0', { ...opts, unit: 'in', into: 'in' }).rows[0].values).toEqual(['0', '0.31', '0']);
     expect(got.header).toBe(true);
     expect(got.problems).toEqual([]);
     // 0.75 in = 0.0625 ft and 1.5 in = 0.125 ft (1 in = 1/12 ft).
@@ -102,7 +117,7 @@ describe('deflection rows pasted or uploaded', () => {
   });
 
   it('reads millimetres into metres and semicolon rows with decimal commas', () => {
-    const got = readDeflectionPaste('G1;1;0;12,5;25;12,5;0', { ...opts, units: 'm', unit: 'mm' });
+    const got = readDeflectionPaste('G1;1;0;12,5;25;12,5;0', { ...opts, into: 'm', unit: 'mm' });
     expect(got.rows[0].values).toEqual(['0', '0.0125', '0.025', '0.0125', '0']);
   });
 
