@@ -123,10 +123,10 @@ export default function BridgeScene(props: BridgeSceneProps) {
         ))}
         <OrbitControls makeDefault enableDamping={false} maxPolarAngle={Math.PI * 0.98} />
         <CameraRig pose={pose} version={poseVersion} />
-        <LabelLayout labels={labels} elements={labelEls} avoid={avoid} measureKey={large ? 'large' : 'normal'} />
+        <LabelLayout labels={labels} elementsRef={labelEls} avoid={avoid} measureKey={large ? 'large' : 'normal'} />
         <KinkProbe candidates={parts.kinks} />
-        {props.pictureRef ? <PictureTaker target={props.pictureRef} /> : null}
-        <RenderStats target={statsRef} shadows={shadows} />
+        {props.pictureRef ? <PictureTaker targetRef={props.pictureRef} /> : null}
+        <RenderStats targetRef={statsRef} shadows={shadows} />
       </Canvas>
       <div className="pointer-events-none absolute inset-0 overflow-hidden" data-testid="scene-labels" aria-hidden="true">
         {labels.map((l, i) => (

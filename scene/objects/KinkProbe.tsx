@@ -1,7 +1,7 @@
 'use client';
 
 import { useFrame } from '@react-three/fiber';
-import { useMemo } from 'react';
+import { useRef } from 'react';
 import * as THREE from 'three';
 import { screenTurnDeg } from '../builders/kink';
 import { sceneStats, type KinkReport } from '../stats';
@@ -14,13 +14,19 @@ export interface KinkCandidate {
   formEdge: Float32Array;
 }
 
+/** Reused objects of the frame loop (nothing is allocated per frame), kept in a ref. */
+type Scratch = { v: THREE.Vector3; cam: THREE.Matrix4; proj: THREE.Matrix4; px: Float64Array; report: KinkReport | null };
+
+const newScratch = (): Scratch => ({ v: new THREE.Vector3(), cam: new THREE.Matrix4(), proj: new THREE.Matrix4(), px: new Float64Array(8), report: null });
+
 /**
  * Measures, whenever the camera moves, how sharply the handrail and the form edge turn at the
  * nearest interior bent in view, as drawn on the screen, and reports it in `window.__chordlineStats.kink`.
  */
 export default function KinkProbe({ candidates }: { candidates: readonly KinkCandidate[] }) {
-  const state = useMemo(() => ({ v: new THREE.Vector3(), cam: new THREE.Matrix4(), proj: new THREE.Matrix4(), px: new Float64Array(8), report: null as KinkReport | null }), []);
+  const scratchRef = useRef<Scratch | null>(null);
   useFrame(({ camera, size }) => {
+    const state = (scratchRef.current ??= newScratch());
     if (state.cam.equals(camera.matrixWorld) && state.proj.equals(camera.projectionMatrix)) return;
     state.cam.copy(camera.matrixWorld);
     state.proj.copy(camera.projectionMatrix);

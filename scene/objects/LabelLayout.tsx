@@ -1,7 +1,7 @@
 'use client';
 
 import { useFrame } from '@react-three/fiber';
-import { useEffect, useMemo, useRef, type RefObject } from 'react';
+import { useEffect, useRef, type RefObject } from 'react';
 import * as THREE from 'three';
 import { labelBuffers, placeLabels, type ScreenBox } from '../builders/labels';
 import { sceneStats, type LabelReport } from '../stats';
@@ -17,7 +17,7 @@ export interface SceneLabel {
 type Props = {
   labels: readonly SceneLabel[];
   /** The label elements, in the order of `labels` (rendered outside the canvas). */
-  elements: RefObject<Array<HTMLElement | null>>;
+  elementsRef: RefObject<Array<HTMLElement | null>>;
   /** Scene position of the picked point, kept clear of labels; null for none. */
   avoid: [number, number, number] | null;
   /** Changes whenever the labels' type size changes, so their boxes are measured again. */
@@ -27,28 +27,37 @@ type Props = {
 /** Half the side of the square kept clear around the picked point (px). */
 const AVOID_HALF = 18;
 
+/** What the frame loop keeps between frames (nothing is allocated per frame). */
+type LayoutState = { v: THREE.Vector3; cam: THREE.Matrix4; proj: THREE.Matrix4; w: number; h: number; dirty: boolean; measured: boolean; avoidBox: ScreenBox };
+
+const newLayoutState = (): LayoutState => ({ v: new THREE.Vector3(), cam: new THREE.Matrix4(), proj: new THREE.Matrix4(), w: 0, h: 0, dirty: true, measured: false, avoidBox: { x: 0, y: 0, w: 0, h: 0 } });
+
 /**
  * Lays the labels out on the screen whenever the camera, the picture size or the labels change:
  * nearer labels win, bents before stations, and none covers the picked point (builders/labels.ts).
  * Positions are written straight to the label elements; nothing is allocated per frame.
  */
-export default function LabelLayout({ labels, elements, avoid, measureKey }: Props) {
-  const buf = useMemo(() => labelBuffers(labels.length), [labels]);
-  const state = useMemo(
-    () => ({ v: new THREE.Vector3(), cam: new THREE.Matrix4(), proj: new THREE.Matrix4(), w: 0, h: 0, dirty: true, measured: false, avoidBox: { x: 0, y: 0, w: 0, h: 0 } as ScreenBox }),
-    [],
-  );
+export default function LabelLayout({ labels, elementsRef, avoid, measureKey }: Props) {
+  // The buffers (one set per list of labels) and the loop's state live in refs: the frame loop and the
+  // effects write them, render never reads them.
+  const bufRef = useRef<{ labels: readonly SceneLabel[]; buf: ReturnType<typeof labelBuffers> } | null>(null);
+  const stateRef = useRef<LayoutState | null>(null);
   const avoidRef = useRef(avoid);
   useEffect(() => {
     avoidRef.current = avoid;
-    state.dirty = true;
-  }, [avoid, state]);
+    (stateRef.current ??= newLayoutState()).dirty = true;
+  }, [avoid]);
   useEffect(() => {
+    const state = (stateRef.current ??= newLayoutState());
     state.measured = false;
     state.dirty = true;
+    if (bufRef.current?.labels !== labels) bufRef.current = { labels, buf: labelBuffers(labels.length) };
+    const buf = bufRef.current.buf;
     labels.forEach((l, i) => (buf.ranks[i] = l.kind === 'bent' ? 0 : 1));
-  }, [labels, buf, measureKey, state]);
+  }, [labels, measureKey]);
   useEffect(() => {
+    if (bufRef.current?.labels !== labels) bufRef.current = { labels, buf: labelBuffers(labels.length) };
+    const buf = bufRef.current.buf;
     const stats = sceneStats();
     stats.labelSource = (): LabelReport[] => {
       const out: LabelReport[] = [];
@@ -62,11 +71,14 @@ export default function LabelLayout({ labels, elements, avoid, measureKey }: Pro
     return () => {
       if (stats.labelSource) stats.labelSource = null;
     };
-  }, [buf, labels]);
+  }, [labels]);
 
   useFrame(({ camera, size, invalidate }) => {
-    const els = elements.current;
-    if (!els) return;
+    const els = elementsRef.current;
+    const held = bufRef.current;
+    if (!els || !held || held.labels !== labels) return;
+    const buf = held.buf;
+    const state = (stateRef.current ??= newLayoutState());
     if (!state.measured) {
       for (let i = 0; i < buf.count; i++) {
         const el = els[i];

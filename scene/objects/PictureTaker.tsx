@@ -10,14 +10,14 @@ export type PictureFn = (scale: number) => HTMLCanvasElement;
  * Lends the page a way to draw the scene larger than the screen: the drawing buffer is resized
  * for one render (the page's layout does not change), copied out, and put back.
  */
-export default function PictureTaker({ target }: { target: RefObject<PictureFn | null> }) {
+export default function PictureTaker({ targetRef }: { targetRef: RefObject<PictureFn | null> }) {
   const gl = useThree((s) => s.gl);
   const scene = useThree((s) => s.scene);
   const camera = useThree((s) => s.camera);
   const size = useThree((s) => s.size);
   const invalidate = useThree((s) => s.invalidate);
   useEffect(() => {
-    target.current = (scale: number) => {
+    targetRef.current = (scale: number) => {
       const ratio = gl.getPixelRatio();
       const w = Math.round(size.width * scale);
       const h = Math.round(size.height * scale);
@@ -34,8 +34,8 @@ export default function PictureTaker({ target }: { target: RefObject<PictureFn |
       return out;
     };
     return () => {
-      target.current = null;
+      targetRef.current = null;
     };
-  }, [gl, scene, camera, size, invalidate, target]);
+  }, [gl, scene, camera, size, invalidate, targetRef]);
   return null;
 }

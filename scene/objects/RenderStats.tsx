@@ -9,7 +9,7 @@ import { sceneStats } from '../stats';
  * counters: draw calls and triangles of the last frame (shadow passes included), and frames rendered
  * so far. Writes attributes only when a number changed.
  */
-export default function RenderStats({ target, shadows }: { target?: RefObject<HTMLElement | null>; shadows: boolean }) {
+export default function RenderStats({ targetRef, shadows }: { targetRef?: RefObject<HTMLElement | null>; shadows: boolean }) {
   const last = useRef({ calls: -1, triangles: -1, frames: 0 });
   useFrame(({ gl, size }, delta) => {
     const s = last.current;
@@ -27,7 +27,7 @@ export default function RenderStats({ target, shadows }: { target?: RefObject<HT
     stats.shadows = shadows;
     stats.width = size.width;
     stats.height = size.height;
-    const el = target?.current;
+    const el = targetRef?.current;
     if (!el) return;
     if (calls !== s.calls) {
       s.calls = calls;
@@ -39,7 +39,7 @@ export default function RenderStats({ target, shadows }: { target?: RefObject<HT
     }
     el.setAttribute('data-frames', String(s.frames));
     // The visible text is refreshed now and then; the attributes above are the exact figures.
-    if (s.frames % 10 === 3) el.textContent = `${calls} draw calls · ${triangles} triangles · ${s.frames} frames${shadows ? ' · shadows' : ''}`;
+    if (s.frames % 10 === 3) el.replaceChildren(`${calls} draw calls · ${triangles} triangles · ${s.frames} frames${shadows ? ' · shadows' : ''}`);
   });
   return null;
 }
