@@ -153,9 +153,25 @@ function elementCurvature(e: Element, d: number): number {
   return e.kind === 'arc' ? e.turn / e.radius : 0;
 }
 
+// The last spiral foot found by the element search, reused when that spiral turns out nearest (the
+// search and the answer ask the same question of the same element).
+const lastFoot = { element: null as Element | null, x: NaN, y: NaN, t: 0, offset: 0, bearing: 0 };
+
+function footOnSpiral(e: Element, x: number, y: number): { t: number; offset: number; bearing: number } {
+  if (lastFoot.element === e && lastFoot.x === x && lastFoot.y === y) return lastFoot;
+  const f = spiralFoot(e.spiral as SpiralShape, x, y);
+  lastFoot.element = e;
+  lastFoot.x = x;
+  lastFoot.y = y;
+  lastFoot.t = f.t;
+  lastFoot.offset = f.offset;
+  lastFoot.bearing = f.bearing;
+  return f;
+}
+
 function elementStationOffset(e: Element, x: number, y: number): StationOffset {
   if (e.spiral) {
-    const f = spiralFoot(e.spiral, x, y);
+    const f = footOnSpiral(e, x, y);
     return { station: e.startStation + f.t, offset: f.offset, bearing: f.bearing, curvature: elementCurvature(e, f.t) };
   }
   if (e.kind === 'line') {
@@ -174,7 +190,7 @@ function elementStationOffset(e: Element, x: number, y: number): StationOffset {
 
 function distanceToElement(e: Element, x: number, y: number): number {
   if (e.spiral) {
-    const f = spiralFoot(e.spiral, x, y);
+    const f = footOnSpiral(e, x, y);
     if (f.t >= 0 && f.t <= e.length) return Math.abs(f.offset);
     const b = elementPoint(e, e.length);
     return Math.sqrt(Math.min((x - e.x0) ** 2 + (y - e.y0) ** 2, (x - b.x) ** 2 + (y - b.y) ** 2));
@@ -497,20 +513,22 @@ export function distanceAlongRayToOffset(
   // Coordinates carry rounding in proportion to their size (state-plane eastings run to millions), so
   // the step that counts as converged grows with them; Newton's last step is then far below 1e-6.
   const scale = Math.max(1, Math.abs(origin.x), Math.abs(origin.y));
-  const residual = (t: number) => {
-    const q = alignment.stationOffset(origin.x + t * direction.x, origin.y + t * direction.y);
-    return { q, f: q.offset - (flat ?? edgeSpecOffsetAt(target, q.station)) };
-  };
   let t = firstGuess;
-  let best = { t, f: Infinity };
-  const bracket = { lo: NaN, hi: NaN };
+  let bestT = t;
+  let bestF = Infinity;
+  let lo = NaN;
+  let hi = NaN;
   for (let iter = 0; iter < 60; iter++) {
-    const { q, f } = residual(t);
-    if (Math.abs(f) < Math.abs(best.f)) best = { t, f };
-    if (f < 0) bracket.lo = t;
-    else bracket.hi = t;
+    const q = alignment.stationOffset(origin.x + t * direction.x, origin.y + t * direction.y);
+    const f = q.offset - (flat ?? edgeSpecOffsetAt(target, q.station));
+    if (Math.abs(f) < Math.abs(bestF)) {
+      bestT = t;
+      bestF = f;
+    }
     let slope = direction.x * Math.cos(q.bearing) - direction.y * Math.sin(q.bearing);
     if (flat === null) {
+      if (f < 0) lo = t;
+      else hi = t;
       const along = direction.x * Math.sin(q.bearing) + direction.y * Math.cos(q.bearing);
       slope -= (edgeSpecSlopeAt(target, q.station) * along) / (1 - q.curvature * q.offset);
     }
@@ -519,17 +537,23 @@ export function distanceAlongRayToOffset(
     t -= step;
     if (stepConverged(step, Math.max(scale, Math.abs(t)))) return t;
   }
-  if (flat === null && Number.isFinite(bracket.lo) && Number.isFinite(bracket.hi)) return bisect(residual, bracket.lo, bracket.hi, scale);
+  if (flat === null && Number.isFinite(lo) && Number.isFinite(hi)) {
+    const residual = (u: number) => {
+      const q = alignment.stationOffset(origin.x + u * direction.x, origin.y + u * direction.y);
+      return q.offset - edgeSpecOffsetAt(target, q.station);
+    };
+    return bisect(residual, lo, hi, scale);
+  }
   // Stalled at the floor of rounding noise: accept the best point when it is on the line to 1e-9 of scale.
-  if (residualAccepted(best.f, scale)) return best.t;
+  if (residualAccepted(bestF, scale)) return bestT;
   throw new SolveError('the solve for the offset did not converge');
 }
 
 /** Bisection between a negative and a positive residual, to the solver's step tolerance. */
-function bisect(residual: (t: number) => { f: number }, lo: number, hi: number, scale: number): number {
+function bisect(residual: (t: number) => number, lo: number, hi: number, scale: number): number {
   for (let i = 0; i < 200; i++) {
     const mid = (lo + hi) / 2;
-    if (residual(mid).f < 0) lo = mid;
+    if (residual(mid) < 0) lo = mid;
     else hi = mid;
     if (stepConverged(hi - lo, Math.max(scale, Math.abs(mid)))) break;
   }

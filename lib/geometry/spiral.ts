@@ -2,8 +2,8 @@
  * Clothoid spirals (data contract, "Spirals"): curvature linear in length from k1 = 1/R1 to
  * k2 = 1/R2 (0 for an infinite radius). Bearings in radians clockwise from north; x east, y north;
  * lengths in the bridge's unit. Positions are the integrals x = ∫ sin β, y = ∫ cos β evaluated by
- * six-point Gauss–Legendre quadrature on pieces short enough that the bearing turns at most 0.1 rad
- * across each: the quadrature error is then far below 1e-12 of the length.
+ * four-point Gauss–Legendre quadrature on pieces short enough that the bearing turns at most 0.1 rad
+ * across each: the quadrature error is then about (0.1)⁸/8! of a piece, far below 1e-12 of the length.
  */
 import { stepConverged } from './tolerance';
 
@@ -24,9 +24,9 @@ export interface SpiralShape {
   nodeY: Float64Array;
 }
 
-// Six-point Gauss–Legendre abscissae and weights on [−1, 1] (Abramowitz & Stegun, table 25.4).
-const GL_X = [-0.932469514203152, -0.6612093864662645, -0.2386191860831969, 0.2386191860831969, 0.6612093864662645, 0.932469514203152];
-const GL_W = [0.1713244923791704, 0.3607615730481386, 0.467913934572691, 0.467913934572691, 0.3607615730481386, 0.1713244923791704];
+// Four-point Gauss–Legendre abscissae and weights on [−1, 1] (Abramowitz & Stegun, table 25.4).
+const GL_X = [-0.8611363115940526, -0.3399810435848563, 0.3399810435848563, 0.8611363115940526];
+const GL_W = [0.3478548451374538, 0.6521451548625461, 0.6521451548625461, 0.3478548451374538];
 /** Largest bearing change (radians) across one quadrature piece. */
 const PIECE_TURN = 0.1;
 
@@ -48,7 +48,7 @@ function integrate(s: SpiralShape, a: number, b: number): { dx: number; dy: numb
   let dy = 0;
   for (let p = 0; p < pieces; p++) {
     const mid = a + (p + 0.5) * w;
-    for (let i = 0; i < 6; i++) {
+    for (let i = 0; i < 4; i++) {
       const beta = spiralBearing(s, mid + (GL_X[i] * w) / 2);
       dx += GL_W[i] * Math.sin(beta);
       dy += GL_W[i] * Math.cos(beta);
@@ -103,8 +103,8 @@ export function spiralBox(s: SpiralShape): { minX: number; minY: number; maxX: n
 /**
  * Foot of the perpendicular from (x, y) to the spiral: Newton's method on (P − C(t))·T(t) = 0,
  * whose derivative is −(1 − σκ(t)·offset), started from the nearest piece end.
- * @returns t (length along the spiral, possibly outside [0, L]) and the signed offset there
- * (positive right of travel), with the bearing at t.
+ * @returns t (length along the spiral, possibly outside [0, L] but within one length of its ends)
+ * and the signed offset there (positive right of travel), with the bearing at t.
  */
 export function spiralFoot(s: SpiralShape, x: number, y: number): { t: number; offset: number; bearing: number } {
   let best = 0;
@@ -131,14 +131,20 @@ export function spiralFoot(s: SpiralShape, x: number, y: number): { t: number; o
     offset = dx * cb - dy * sb;
     // Near or past the centre of curvature the true slope flattens; a damped step still descends.
     const slope = Math.max(0.2, 1 - s.turn * spiralCurvature(s, t) * offset);
-    const step = along / slope;
-    t += step;
-    if (stepConverged(step, scale)) {
+    // Feet far beyond the ends belong to the neighbouring elements (or the extended tangents): the
+    // search only needs to know the foot is off this spiral, so t stays within one length of its ends.
+    const next = Math.min(2 * s.length, Math.max(-s.length, t + along / slope));
+    const step = next - t;
+    t = next;
+    // At convergence the last step is far below rounding of the coordinates: the offset found at the
+    // previous t differs from the one at t by less than step²·κ, so no further evaluation is needed.
+    if (stepConverged(step, scale)) break;
+    if ((t === -s.length || t === 2 * s.length) && iter > 0) {
       const q = spiralPoint(s, t);
       bearing = q.bearing;
       offset = (x - q.x) * Math.cos(bearing) - (y - q.y) * Math.sin(bearing);
       break;
     }
   }
-  return { t, offset, bearing };
+  return { t, offset, bearing: spiralBearing(s, t) };
 }

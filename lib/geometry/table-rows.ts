@@ -31,11 +31,6 @@ export function girderPointKey(girder: string, span: number, point: number): str
   return `${girder}\u0000${span}\u0000${point}`;
 }
 
-/** The leading fields of a row, in the contract's order. */
-function baseRow(girder: string, span: number, side: OffsetPoint['side'], pk: GirderPoint) {
-  return { span, girder, side, point: pk.point, fraction: pk.fraction, station: pk.station, offset: pk.offset, x: pk.x, y: pk.y };
-}
-
 /** Elevation step for an interior girder: top of deck, bottom of slab, buildup, deflection, screed grade. */
 export function interiorRows(ctx: RowContext, gi: number, span: number, gps: GirderPoint[], values: readonly number[] | undefined): OffsetPoint[] {
   const { bridge, model } = ctx;
@@ -47,7 +42,15 @@ export function interiorRows(ctx: RowContext, gi: number, span: number, gps: Gir
     const topOfDeck = model.surface.topOfDeckAtStationOffset(pk.station, pk.offset);
     const bottomOfSlab = topOfDeck - bridge.deck.slab_thickness;
     return {
-      ...baseRow(g.name, span, 'interior', pk),
+      span,
+      girder: g.name,
+      side: 'interior',
+      point: pk.point,
+      fraction: pk.fraction,
+      station: pk.station,
+      offset: pk.offset,
+      x: pk.x,
+      y: pk.y,
       edge_x: null,
       edge_y: null,
       edge_station: null,
@@ -127,7 +130,15 @@ export function overhangRows(
     const deflection = deflectionAt(values, pk.point, model.pointsPerSpan);
     const elev = overhangElevations(model.surface, pk, ek, deck.slab_thickness, deck.edge_thickness, model.formSettlement, tog, deflection);
     rows.push({
-      ...baseRow(g.name, span, side, pk),
+      span,
+      girder: g.name,
+      side,
+      point: pk.point,
+      fraction: pk.fraction,
+      station: pk.station,
+      offset: pk.offset,
+      x: pk.x,
+      y: pk.y,
       edge_x: ek.x,
       edge_y: ek.y,
       edge_station: ek.station,
