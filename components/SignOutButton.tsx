@@ -11,12 +11,15 @@ import { outboxCount } from '@/components/offline/outbox';
  * the phone.
  */
 export default function SignOutButton({ userId }: { userId: number }) {
-  const [state, setState] = useState<{ kind: 'idle' | 'asking' | 'busy'; waiting: number }>({ kind: 'idle', waiting: 0 });
+  const [state, setState] = useState<{ kind: 'idle' | 'asking' | 'busy'; waiting: number; note?: string }>({ kind: 'idle', waiting: 0 });
 
   async function leave() {
     setState((s) => ({ ...s, kind: 'busy' }));
     await clearPhoneForSignOut(userId);
-    void signOut({ callbackUrl: '/signin' });
+    // Without a connection the server cannot end the session; the phone's data is already gone.
+    await signOut({ callbackUrl: '/signin' }).catch(() =>
+      setState({ kind: 'idle', waiting: 0, note: 'No connection: the bridge data is cleared from this phone; sign out again when the connection returns.' }),
+    );
   }
 
   async function start() {
@@ -44,13 +47,20 @@ export default function SignOutButton({ userId }: { userId: number }) {
     );
   }
   return (
-    <button
-      type="button"
-      disabled={state.kind === 'busy'}
-      onClick={() => void start()}
-      className="rounded-md border border-brand-300/60 px-3 py-1.5 text-sm font-semibold text-white hover:bg-brand-700 disabled:opacity-60"
-    >
-      {state.kind === 'busy' ? 'Signing out…' : 'Sign out'}
-    </button>
+    <>
+      <button
+        type="button"
+        disabled={state.kind === 'busy'}
+        onClick={() => void start()}
+        className="rounded-md border border-brand-300/60 px-3 py-1.5 text-sm font-semibold text-white hover:bg-brand-700 disabled:opacity-60"
+      >
+        {state.kind === 'busy' ? 'Signing out…' : 'Sign out'}
+      </button>
+      {state.note ? (
+        <p role="status" className="mt-1 text-xs text-brand-100">
+          {state.note}
+        </p>
+      ) : null}
+    </>
   );
 }
