@@ -112,6 +112,7 @@ async function main() {
     }
   }
 
+  if (process.env.BENCH_PLANS) await printPlans(sequelize, cases);
   console.log('\n| measure | 100 bridges: fastest (median) ms | 10,000 bridges: fastest (median) ms | ratio of fastest |');
   console.log('| --- | ---: | ---: | ---: |');
   let worst = 0;
@@ -124,6 +125,23 @@ async function main() {
   console.log(`\nworst ratio ${worst.toFixed(2)} (target under 2): ${worst < 2 ? 'met' : 'NOT met'}`);
   await closeDb();
   fs.rmSync(dir, { recursive: true, force: true });
+}
+
+/** With BENCH_PLANS=1: SQLite's plan for every SELECT each measure runs (on the large database). */
+async function printPlans(sequelize: import('sequelize').Sequelize, cases: [string, () => Promise<unknown>][]) {
+  const seen: string[] = [];
+  const logging = sequelize.options.logging;
+  sequelize.options.logging = (sql: string) => seen.push(sql.replace(/^Executing \([^)]*\): /, ''));
+  for (const [name, work] of cases) {
+    seen.length = 0;
+    await work();
+    console.log(`\n${name}`);
+    for (const sql of seen.filter((q) => /^SELECT/i.test(q))) {
+      const [plan] = await sequelize.query(`EXPLAIN QUERY PLAN ${sql}`);
+      console.log(`  ${sql.slice(0, 160)}\n    ${(plan as { detail: string }[]).map((p) => p.detail).join(' | ')}`);
+    }
+  }
+  sequelize.options.logging = logging;
 }
 
 main().catch((err) => {
