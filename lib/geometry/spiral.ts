@@ -5,7 +5,7 @@
  * four-point Gauss–Legendre quadrature on pieces short enough that the bearing turns at most 0.1 rad
  * across each: the quadrature error is then about (0.1)⁸/8! of a piece, far below 1e-12 of the length.
  */
-import { stepConverged } from './tolerance';
+import { RELATIVE_ROUNDING, stepConverged } from './tolerance';
 
 /** A spiral laid out from its start point and bearing; build with {@link layOutSpiral}. */
 export interface SpiralShape {
@@ -42,7 +42,7 @@ export function spiralCurvature(s: SpiralShape, t: number): number {
 
 /** ∫ from a to b of (sin β, cos β) du by Gauss–Legendre, split so each piece is at most h long. */
 function integrate(s: SpiralShape, a: number, b: number): { dx: number; dy: number } {
-  const pieces = Math.max(1, Math.ceil(Math.abs(b - a) / s.h - 1e-9));
+  const pieces = Math.max(1, Math.ceil(Math.abs(b - a) / s.h - RELATIVE_ROUNDING));
   const w = (b - a) / pieces;
   let dx = 0;
   let dy = 0;
@@ -86,7 +86,7 @@ export function spiralPoint(s: SpiralShape, t: number): { x: number; y: number; 
 
 /** Bounding box of the spiral: its piece ends widened by the largest sagitta of a piece. */
 export function spiralBox(s: SpiralShape): { minX: number; minY: number; maxX: number; maxY: number } {
-  const margin = (Math.max(s.k1, s.k2) * s.h * s.h) / 8 + 1e-9 * s.length;
+  const margin = (Math.max(s.k1, s.k2) * s.h * s.h) / 8 + RELATIVE_ROUNDING * s.length;
   let minX = Infinity;
   let minY = Infinity;
   let maxX = -Infinity;

@@ -16,6 +16,12 @@ export const SOLVE_RELATIVE_STEP = 1e-11;
  */
 export const SOLVE_RESIDUAL = 1e-9;
 
+/**
+ * Relative allowance for rounding in a length computed from others (a piece count that is a whole
+ * number in exact arithmetic, a bounding box that must not clip its own curve).
+ */
+export const RELATIVE_ROUNDING = 1e-9;
+
 /** Smallest |cos| between a ray and the offset lines it must cross before it counts as parallel. */
 export const PARALLEL_SLOPE = 1e-9;
 
