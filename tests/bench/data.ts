@@ -130,8 +130,10 @@ async function main() {
 /** With BENCH_PLANS=1: SQLite's plan for every SELECT each measure runs (on the large database). */
 async function printPlans(sequelize: import('sequelize').Sequelize, cases: [string, () => Promise<unknown>][]) {
   const seen: string[] = [];
-  const logging = sequelize.options.logging;
-  sequelize.options.logging = (sql: string) => seen.push(sql.replace(/^Executing \([^)]*\): /, ''));
+  // Sequelize keeps its options on the instance at run time; its types do not declare them.
+  const options = (sequelize as unknown as { options: { logging: unknown } }).options;
+  const logging = options.logging;
+  options.logging = (sql: string) => seen.push(sql.replace(/^Executing \([^)]*\): /, ''));
   for (const [name, work] of cases) {
     seen.length = 0;
     await work();
@@ -141,7 +143,7 @@ async function printPlans(sequelize: import('sequelize').Sequelize, cases: [stri
       console.log(`  ${sql.slice(0, 160)}\n    ${(plan as { detail: string }[]).map((p) => p.detail).join(' | ')}`);
     }
   }
-  sequelize.options.logging = logging;
+  options.logging = logging;
 }
 
 main().catch((err) => {
