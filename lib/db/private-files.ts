@@ -12,21 +12,21 @@ export const PRIVATE_FILE_MODE = 0o600;
  * Existing files from before are tightened too. Errors on filesystems without modes are ignored.
  */
 export function preparePrivateStore(dir: string, sqliteFile: string): void {
-  fs.mkdirSync(dir, { recursive: true, mode: PRIVATE_DIR_MODE });
+  fs.mkdirSync(/*turbopackIgnore: true*/ dir, { recursive: true, mode: PRIVATE_DIR_MODE });
   tighten(dir, PRIVATE_DIR_MODE);
-  fs.closeSync(fs.openSync(sqliteFile, 'a', PRIVATE_FILE_MODE));
+  fs.closeSync(fs.openSync(/*turbopackIgnore: true*/ sqliteFile, 'a', PRIVATE_FILE_MODE));
   for (const suffix of ['', '-wal', '-shm']) {
-    if (fs.existsSync(sqliteFile + suffix)) tighten(sqliteFile + suffix, PRIVATE_FILE_MODE);
+    if (fs.existsSync(/*turbopackIgnore: true*/ sqliteFile + suffix)) tighten(sqliteFile + suffix, PRIVATE_FILE_MODE);
   }
   for (const sub of ['uploads', 'cache', path.join('cache', 'thumbs'), 'outbox']) {
-    const p = path.join(dir, sub);
-    if (fs.existsSync(p)) tighten(p, PRIVATE_DIR_MODE);
+    const p = path.join(/*turbopackIgnore: true*/ dir, sub);
+    if (fs.existsSync(/*turbopackIgnore: true*/ p)) tighten(p, PRIVATE_DIR_MODE);
   }
 }
 
 function tighten(p: string, mode: number): void {
   try {
-    fs.chmodSync(p, mode);
+    fs.chmodSync(/*turbopackIgnore: true*/ p, mode);
   } catch {
     // A filesystem without Unix modes: nothing to tighten.
   }

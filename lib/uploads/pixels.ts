@@ -39,13 +39,15 @@ export const MAX_PHOTO_MEGAPIXELS = 50;
 
 /**
  * Why a JPEG or PNG photo is refused by its header's pixel count, or null when it is within
- * {@link MAX_PHOTO_MEGAPIXELS} (or is another kind of file). Read from the header alone, before
+ * {@link MAX_PHOTO_MEGAPIXELS}, its header cannot be read, or it is another kind of file. Read from the header alone, before
  * anything decodes the image: a small file can claim gigabytes of pixels.
  */
 export function photoPixelProblem(bytes: Uint8Array, contentType: string): string | null {
   if (contentType !== 'image/jpeg' && contentType !== 'image/png') return null;
   const size = photoPixels(bytes);
-  if (!size) return 'The photo header cannot be read; the file is damaged or not a photo.';
+  // A header that cannot be read is never decoded either (the thumbnail maker refuses it too); the
+  // file is kept and served as itself, as a damaged photo from the field still shows what it can.
+  if (!size) return null;
   const megapixels = (size.width * size.height) / 1e6;
   if (megapixels <= MAX_PHOTO_MEGAPIXELS) return null;
   return `The photo is ${size.width} × ${size.height} pixels (${megapixels.toFixed(1)} megapixels); the limit is ${MAX_PHOTO_MEGAPIXELS} megapixels. Send a smaller photo.`;

@@ -188,19 +188,18 @@ describe('GET /api/attachments/:id?size=thumb', () => {
     expect(fs.readdirSync(thumbsDir())).toEqual(fs.readdirSync(thumbsDir()).filter((f) => f.endsWith('.jpg')));
   });
 
-  it('does not decode a photo whose header claims more pixels than any camera: it serves itself', async () => {
+  it('never decodes a photo whose header claims more pixels than any camera: the upload is refused (422)', async () => {
     // A PNG whose IHDR (PNG spec §11.2.2) claims 40000 × 40000 pixels: 6.4 GB once decoded.
     const bomb = Buffer.from(PNG_1X1);
     bomb.writeUInt32BE(40000, 16);
     bomb.writeUInt32BE(40000, 20);
     bomb.writeUInt32BE(zlib.crc32(bomb.subarray(12, 29)), 29); // the chunk's CRC over type and data (§5.3)
     await expect(makeThumbnail(bomb)).rejects.toThrow(/too large to decode/);
+    const before = { rows: await Attachment.count(), files: storedFiles().length };
     const res = await upload('inspector', { bytes: bomb, name: 'huge.png', type: 'image/png' });
-    expect(res.status).toBe(201);
-    const thumb = await get(res.json.id, '?size=thumb');
-    expect(thumb.status).toBe(200);
-    expect(thumb.body.equals(bomb)).toBe(true);
-    expect(thumb.headers.get('content-type')).toBe('image/png');
+    expect(res.status).toBe(422);
+    expect(res.json.error).toMatch(/40000 × 40000 pixels/);
+    expect({ rows: await Attachment.count(), files: storedFiles().length }).toEqual(before);
   });
 
   it('serves a photo it cannot decode as itself; a PDF has no thumbnail (400); an unknown size is a 400', async () => {

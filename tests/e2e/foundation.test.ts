@@ -26,7 +26,7 @@ describe('served pages', () => {
     const signIn = await fetch(`${baseUrl}/api/auth/callback/credentials`, {
       method: 'POST',
       redirect: 'manual',
-      headers: { 'content-type': 'application/x-www-form-urlencoded', cookie: jar },
+      headers: { 'content-type': 'application/x-www-form-urlencoded', cookie: jar, origin: baseUrl },
       body: new URLSearchParams({ csrfToken, email: 'crew@example.com', password: 'chordline-demo' }),
     });
     const session = signIn.headers.getSetCookie().find((c) => c.includes('session-token'));
@@ -34,7 +34,7 @@ describe('served pages', () => {
     expect(session).toMatch(/SameSite=Lax/i);
     const big = await fetch(`${baseUrl}/api/compute`, {
       method: 'POST',
-      headers: { 'content-type': 'application/json', cookie: (session as string).split(';')[0] },
+      headers: { 'content-type': 'application/json', cookie: (session as string).split(';')[0], origin: baseUrl },
       body: JSON.stringify({ name: 'x'.repeat(3 * 1024 * 1024) }),
     });
     expect(big.status).toBe(413);
