@@ -1,9 +1,10 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import type { Units } from '@/lib/units';
 
 export class Bridge extends Model<InferAttributes<Bridge>, InferCreationAttributes<Bridge>> {
   declare id: CreationOptional<number>;
   declare name: string;
-  declare units: 'ft' | 'm';
+  declare units: Units;
   declare currentRevision: number;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;

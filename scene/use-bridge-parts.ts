@@ -5,7 +5,7 @@
  */
 import { useMemo } from 'react';
 import { createBridgeModel, edgeOffsetAt, type BridgeDescription, type OffsetPoint, type OffsetTable } from '@/lib/geometry';
-import { stationText, type Units } from '@/lib/units';
+import { atMost, stationText, type Units } from '@/lib/units';
 import type { SceneFrame } from './builders/frame';
 import { formEdgeY, girderRuns, overhangRuns, type PourState } from './builders/runs';
 import { buildGirderMesh, defaultGirderShape } from './builders/girders';
@@ -116,7 +116,7 @@ export function useBridgeParts(input: BridgePartsInput) {
     if (!(every > 0)) return out;
     const s0 = desc.bents[0].station;
     const s1 = desc.bents[desc.bents.length - 1].station;
-    for (let s = Math.ceil(s0 / every) * every, n = 0; s <= s1 + 1e-9 && n < 40; s += every, n++) {
+    for (let s = Math.ceil(s0 / every) * every, n = 0; atMost(s, s1) && n < 40; s += every, n++) {
       const edge = edgeOffsetAt(desc.deck, 'right', s);
       const p = model.alignment.pointAt(s, edge + 6 * u);
       const z = model.surface.topOfDeckAtStationOffset(s, edge);

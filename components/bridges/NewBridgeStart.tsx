@@ -7,8 +7,8 @@ import PasteDescription from '@/components/bridges/PasteDescription';
 import type { RecordDraft } from '@/components/bridges/BridgeRecordFields';
 import { landXmlDraft, starterDraft } from '@/lib/editor/new-bridge-drafts';
 import type { Draft } from '@/lib/editor/draft';
+import type { Units } from '@/lib/units';
 
-type Units = 'ft' | 'm';
 
 /** Where a new bridge starts: a draft for the form editor, a line saying where it came from, record fields to carry over. */
 export type Start = { draft: Draft; note: string; key: number; record?: Partial<RecordDraft> };

@@ -1,12 +1,13 @@
 import PlanSketchMarks, { PlanSketchMarksLegend } from '@/components/editor/PlanSketchMarks';
 import type { SketchData } from '@/lib/editor/plan-sketch-data';
+import type { Units } from '@/lib/units';
 
 /**
  * The plan sketch drawing (SVG) from laid-out sketch data: alignment (dashed), deck outline, bent lines
  * and girders (exterior girders darker), north arrow and scale bar, with its legend. No hooks, so a
  * server page can render it as plain markup; the editor's live preview wraps it in PlanSketch.
  */
-export default function PlanSketchSvg({ s, name, units, compact = false }: { s: SketchData; name: string; units: 'ft' | 'm'; compact?: boolean }) {
+export default function PlanSketchSvg({ s, name, units, compact = false }: { s: SketchData; name: string; units: Units; compact?: boolean }) {
   const u = units;
   return (
     <figure>

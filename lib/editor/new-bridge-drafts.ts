@@ -6,8 +6,8 @@ import { starterBridge } from '@/lib/demo/starter-bridge';
 import type { BridgeDescription } from '@/lib/geometry';
 import type { ImportedAlignment } from '@/lib/import/landxml';
 import { alignmentToDraft, pvisToDraft, toDraft, type Draft, type OffsetDraft } from './draft';
+import type { Units } from '@/lib/units';
 
-type Units = 'ft' | 'm';
 
 /** The draft of the built-in starter bridge in the given units. */
 export function starterDraft(units: Units, name?: string): Draft {

@@ -5,6 +5,7 @@
  */
 import { bentLinePoint, createAlignment, edgeOffsetAt, type BridgeDescription, type OffsetTable, type PlanPoint } from '@/lib/geometry';
 import { sketchMarks } from './plan-sketch-marks';
+import { safeDivisor } from '@/lib/units';
 
 export interface SketchPolyline {
   points: string;
@@ -103,7 +104,7 @@ export function planSketchData(bridge: BridgeDescription, table: OffsetTable | n
     const maxU = Math.max(...all.map((p) => p.u));
     const minV = Math.min(...all.map((p) => p.v));
     const maxV = Math.max(...all.map((p) => p.v));
-    const scale = (WIDTH - 2 * MARGIN) / Math.max(maxU - minU, 1e-9);
+    const scale = (WIDTH - 2 * MARGIN) / safeDivisor(maxU - minU);
     const height = Math.min(420, Math.max(170, (maxV - minV) * scale + 2 * MARGIN + 24));
     const offsetY = (height - (maxV - minV) * scale) / 2;
     const X = (p: { u: number }) => MARGIN + (p.u - minU) * scale;

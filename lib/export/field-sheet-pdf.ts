@@ -3,7 +3,7 @@
  * row per bracket with the numbers the crew sets and blank columns for what the inspector measures.
  * Numbers are rounded as the field sheet page shows them (lib/units).
  */
-import { dateTimeText, lengthText, stationText } from '@/lib/units';
+import { dateTimeText, lengthText, stationText, type Units } from '@/lib/units';
 import { cautionBox, finishSheet, paragraph, startSheet, type Paper, type SheetMeta } from './pdf-document';
 import { drawTable, type PdfColumn, type PdfTable } from './pdf-table';
 
@@ -39,7 +39,7 @@ export interface SpanSignOffState {
 
 export interface FieldSheetPdfInput {
   meta: Omit<SheetMeta, 'kind' | 'unitsText'>;
-  units: 'ft' | 'm';
+  units: Units;
   baseRodLength: number;
   groups: SheetPdfGroup[];
   spans: SpanSignOffState[];
@@ -62,7 +62,7 @@ export function signOffText(s: SpanSignOffState, currentRevision: number): strin
   return `Not signed off: ${now}`;
 }
 
-function groupTable(g: SheetPdfGroup, units: 'ft' | 'm'): PdfTable {
+function groupTable(g: SheetPdfGroup, units: Units): PdfTable {
   const num = (v: number | null) => (v === null ? '—' : lengthText(v, units, false));
   const columns: PdfColumn[] = [
     { label: 'Pt', share: 0.45, bold: true },

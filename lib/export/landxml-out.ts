@@ -7,11 +7,12 @@
  * radius is "INF".
  */
 import { createAlignment, directionOf, rightNormalOf, type BridgeDescription, type PlanPoint } from '@/lib/geometry';
+import { atLeast, type Units } from '@/lib/units';
 
 export interface LandXmlOutInput {
   /** Name for the Project, Alignment and ProfAlign. */
   name: string;
-  units: 'ft' | 'm';
+  units: Units;
   alignment: BridgeDescription['alignment'];
   profile: BridgeDescription['profile'];
   revision: number;
@@ -40,7 +41,7 @@ function tangentsMeet(a: PlanPoint, ba: number, b: PlanPoint, bb: number): PlanP
   return { x: a.x + t * d0.x, y: a.y + t * d0.y };
 }
 
-function unitsXml(units: 'ft' | 'm'): string {
+function unitsXml(units: Units): string {
   return units === 'm'
     ? '<Metric areaUnit="squareMeter" linearUnit="meter" volumeUnit="cubicMeter" temperatureUnit="celsius" pressureUnit="milliBars" angularUnit="decimal degrees" directionUnit="decimal degrees"/>'
     : '<Imperial areaUnit="squareFoot" linearUnit="foot" volumeUnit="cubicYard" temperatureUnit="fahrenheit" pressureUnit="inHG" angularUnit="decimal degrees" directionUnit="decimal degrees"/>';
@@ -67,7 +68,7 @@ function coordGeom(alignment: BridgeDescription['alignment']): string[] {
       const side = el.direction === 'left' ? -1 : 1;
       const center = { x: start.x + side * r * n.x, y: start.y + side * r * n.y };
       // The PI of a curve of 180 degrees or more lies behind the start: left out (it is optional).
-      const piXml = pi && el.length / r < Math.PI - 1e-9 ? `<PI>${ne(pi)}</PI>` : '';
+      const piXml = pi && !atLeast(el.length / r, Math.PI) ? `<PI>${ne(pi)}</PI>` : '';
       out.push(
         `<Curve rot="${rot}" crvType="arc" radius="${num(r)}" length="${num(el.length)}" staStart="${num(station)}"><Start>${ne(start)}</Start><Center>${ne(center)}</Center><End>${ne(end)}</End>${piXml}</Curve>`,
       );

@@ -4,7 +4,7 @@
  * them (lib/units table cells over the engine's format helpers).
  */
 import type { OffsetPoint, OffsetTable, SpanSummary } from '@/lib/geometry';
-import { effectiveStyle, elevationCell, lengthCell, lengthUnit, lengthWithUnit, offsetCell, stationText, type DisplayStyle } from '@/lib/units';
+import { type DisplayStyle, effectiveStyle, elevationCell, lengthCell, lengthUnit, lengthWithUnit, offsetCell, stationText, type Units } from '@/lib/units';
 import { cautionBox, finishSheet, paragraph, startSheet, type Paper, type SheetMeta } from './pdf-document';
 import { drawTable, type PdfColumn, type PdfTable } from './pdf-table';
 
@@ -17,7 +17,7 @@ export interface OffsetsPdfInput {
 }
 
 /** Units line of the title block: what the lengths are in and how they are rounded. */
-export function offsetsUnitsText(units: 'ft' | 'm', style: DisplayStyle): string {
+export function offsetsUnitsText(units: Units, style: DisplayStyle): string {
   const s = effectiveStyle(units, style);
   if (s === 'metric') return 'metres, to 0.001 m';
   if (s === 'feet-inches') return 'feet; lengths ft-in to 1/8 in, elevations 0.01 ft';
@@ -29,7 +29,7 @@ export function hasDeflections(table: OffsetTable): boolean {
   return table.points.some((p) => typeof p.deflection === 'number' && p.deflection !== 0);
 }
 
-function girderTable(span: number, side: 'left' | 'right', rows: OffsetPoint[], units: 'ft' | 'm', style: DisplayStyle, summary: SpanSummary | undefined, deflections: boolean): PdfTable {
+function girderTable(span: number, side: 'left' | 'right', rows: OffsetPoint[], units: Units, style: DisplayStyle, summary: SpanSummary | undefined, deflections: boolean): PdfTable {
   const lu = lengthUnit(units, style);
   const base: PdfColumn[] = [
     { label: 'Point', share: 0.6, bold: true },

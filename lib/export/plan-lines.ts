@@ -17,6 +17,7 @@ import {
   type OffsetTable,
   type PlanPoint,
 } from '@/lib/geometry';
+import { atMost, nearlyZero, type Units } from '@/lib/units';
 
 export interface PlanTick {
   station: number;
@@ -29,7 +30,7 @@ export interface PlanTick {
 }
 
 export interface PlanLines {
-  units: 'ft' | 'm';
+  units: Units;
   alignment: PlanPoint[];
   ticks: PlanTick[];
   edges: { side: 'left' | 'right'; points: PlanPoint[] }[];
@@ -94,12 +95,12 @@ function edgeLine(bridge: BridgeDescription, al: Alignment, spec: Edge, shift: n
   });
 }
 
-function ticks(al: Alignment, units: 'ft' | 'm', width: number): PlanTick[] {
+function ticks(al: Alignment, units: Units, width: number): PlanTick[] {
   const { major, minor } = TICKS[units];
   const out: PlanTick[] = [];
-  for (let k = Math.ceil(al.startStation / minor); k * minor <= al.endStation + 1e-9; k++) {
+  for (let k = Math.ceil(al.startStation / minor); atMost(k * minor, al.endStation); k++) {
     const station = k * minor;
-    const isMajor = Math.abs(station / major - Math.round(station / major)) < 1e-9;
+    const isMajor = nearlyZero(station / major - Math.round(station / major));
     const p = al.pointAt(station);
     const n = rightNormalOf(p.bearing);
     const half = (isMajor ? 0.06 : 0.03) * width;
