@@ -53,7 +53,11 @@ export function cameraPose(
   opts: { side?: 'left' | 'right'; span?: number; bent?: number } = {},
 ): CameraPose {
   const u = units === 'm' ? 0.3048 : 1;
-  const eye = 5.5 * u;
+  // With heights exaggerated the slab edge stands taller: stand higher and further out so the eye
+  // stays above the deck and the rail is seen against the sky.
+  const raise = Math.max(0, frame.exaggeration - 1);
+  const eye = 5.5 * u + 0.9 * u * raise;
+  const out = 0.6 * u * raise;
   let minX = Infinity, maxX = -Infinity, minZ = Infinity, maxZ = -Infinity, minY = Infinity, maxY = -Infinity;
   for (const p of table.points) {
     const [x, y, z] = scenePt(frame, p.x, p.y, p.top_of_deck);
@@ -114,8 +118,8 @@ export function cameraPose(
       const a = r.rows[0];
       const b = r.rows[Math.min(r.rows.length - 1, Math.round(r.rows.length / 4))];
       // Stand a few paces back from the bent, just outside the walkway, at eye level.
-      const pa = walkwayPoint(a, 3.5 * u, eye);
-      const pb = walkwayPoint(b, 3.5 * u, eye);
+      const pa = walkwayPoint(a, 3.5 * u + out, eye);
+      const pb = walkwayPoint(b, 3.5 * u + out, eye);
       const dx = pa[0] - pb[0];
       const dz = pa[2] - pb[2];
       const l = Math.hypot(dx, dz) || 1;
@@ -129,7 +133,7 @@ export function cameraPose(
       const r = runOf(bent);
       const at = r.rows[0];
       const to = r.rows[Math.min(r.rows.length - 1, Math.max(1, Math.round(r.rows.length * 0.3)))];
-      const pos = walkwayPoint(at, 1.2 * u, eye);
+      const pos = walkwayPoint(at, 1.2 * u + out, eye);
       const tgt = walkwayPoint(to, -0.5 * u, -1 * u);
       // Step back across the bent so the previous span's brackets are in the corner of the eye.
       const dx = pos[0] - tgt[0];
