@@ -69,10 +69,11 @@ describe('attacks against the served app', () => {
     for (const path of ['/bridges/1', '/bridges/1/edit']) {
       const res = await fetch(`${baseUrl}${path}`, { redirect: 'manual' });
       const text = await res.text();
-      expect(res.status, path).toBeGreaterThanOrEqual(300);
-      expect(res.status, path).toBeLessThan(400);
-      expect(res.headers.get('location'), path).toMatch(/\/signin\?callbackUrl=/);
+      // The page streams, so the redirect may come as a 307 or inside a 200 (Next.js's streamed redirect).
+      const target = res.headers.get('location') ?? /signin\?callbackUrl=[^"';]*/.exec(text)?.[0] ?? '';
+      expect(target, path).toMatch(/signin\?callbackUrl=/);
       expect(text, path).not.toMatch(/Marlow Creek/);
+      expect(/<title>[^<]*<\/title>/.exec(text)?.[0] ?? '', path).not.toMatch(/Marlow/);
     }
   });
 
