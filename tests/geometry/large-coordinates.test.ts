@@ -37,7 +37,8 @@ describe('state-plane sized coordinates', () => {
       ),
       { numRuns: 20 },
     );
-  });
+    // Three demo bridges (one with spirals) × 20 runs × two tables: room for a busy machine.
+  }, 60000);
 
   it('let the lower-level model solve bent points on absolute coordinates too', () => {
     const base = demoBridges[0];
