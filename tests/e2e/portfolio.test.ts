@@ -54,7 +54,7 @@ describe('portfolio page', () => {
   it('narrows the list on the server by search and by the attention filter', async () => {
     const page = await engineerPage();
     await page.goto(`${baseUrl}/bridges`);
-    await page.getByLabel('Search').fill('dm-0522');
+    await page.getByLabel('Search', { exact: true }).fill('dm-0522');
     await page.getByRole('button', { name: 'Show' }).click();
     await page.waitForURL(/q=dm-0522/);
     const names = () => page.locator('[data-testid=portfolio-table] tbody tr a').allInnerTexts();
