@@ -23,8 +23,8 @@ export const migrations: Migration[] = [
   { name: '0002-field-work', ...m0002 },
   { name: '0003-girder-survey', ...m0003 },
   { name: '0004-check-client-key', ...m0004 },
-  { name: '0006-session-security', ...m0006 },
   { name: '0005-bridge-record', ...m0005 },
+  { name: '0006-session-security', ...m0006 },
   { name: '0007-attachment-client-key', ...m0007 },
   { name: '0008-bridge-search', ...m0008 },
 ];
