@@ -92,7 +92,7 @@ async function main() {
     const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
     await signIn(page, server.url, 'engineer@example.com');
     const bridge = twelveSpanBridge();
-    const res = await page.request.post(`${server.url}/api/bridges`, { data: { name: `${bridge.name} ${Date.now()}`, description: bridge } });
+    const res = await page.request.post(`${server.url}/api/bridges`, { headers: { Origin: server.url }, data: { name: `${bridge.name} ${Date.now()}`, description: bridge } });
     if (!res.ok()) throw new Error(`Storing the benchmark bridge failed: ${res.status()} ${await res.text()}`);
     const { id } = await res.json();
     const view = `${server.url}/bridges/${id}/view?stats=1`;
