@@ -29,6 +29,7 @@ export { parseBridge, parseBridgeSchema, validateGeometry, MAX_GIRDER_POINTS, MA
 export { GeometryError, type GeometryIssue } from './errors';
 export {
   formatFeet,
+  formatFeetFine,
   formatFeetInches,
   formatLength,
   formatMetres,
@@ -44,7 +45,7 @@ export {
   STEEL_EXPANSION_PER_C,
   CONCRETE_EXPANSION_PER_C,
 } from './thermal';
-export { offsetTableToCsv, type CsvOptions } from './csv';
+export { offsetTableToCsv, csvCell, type CsvOptions } from './csv';
 export {
   Alignment,
   createAlignment,

@@ -7,8 +7,7 @@ import type { OffsetTable } from '@/lib/geometry';
 import { ValidationError } from '@/lib/errors';
 import { offsetsForBridge } from './offsets';
 import { fieldSettingsOf } from './tolerances';
-// eslint-disable-next-line no-restricted-imports -- csvCell (formula-safe CSV cell) is not in the engine index yet
-import { csvCell } from '@/lib/geometry/csv';
+import { csvCell } from '@/lib/geometry';
 import { lengthText, stationText, tapeLength, type Units } from '@/lib/units';
 
 /** The caution printed on every field sheet (domain.md, "Cautions the product must carry"). */

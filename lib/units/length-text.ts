@@ -2,9 +2,7 @@
  * Display text of lengths in a bridge's units, through the engine's format helpers (exact half-up
  * rounding, the same text as the CSV export): 0.01 ft or 0.001 m; readings 0.001 ft; tapes feet-inches.
  */
-import { formatFeet, formatFeetInches, formatMetres } from '@/lib/geometry';
-// eslint-disable-next-line no-restricted-imports -- formatFeetFine is not exported by the engine index yet
-import { formatFeetFine } from '@/lib/geometry/format';
+import { formatFeet, formatFeetFine, formatFeetInches, formatMetres } from '@/lib/geometry';
 import { decimalsFor, type Units } from './units';
 
 const missing = (v: number | null | undefined): v is null | undefined => v === null || v === undefined || !Number.isFinite(v);

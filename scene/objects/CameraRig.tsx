@@ -47,7 +47,7 @@ export default function CameraRig({ pose, version, instant = false }: { pose: Ca
       } else camera.lookAt(a.toTarget);
     }
     invalidate();
-    // eslint-disable-next-line react-hooks/exhaustive-deps
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- runs once per preset change (version); the pose is read from the ref at that moment
   }, [version, controls]);
 
   useFrame((_, delta) => {
