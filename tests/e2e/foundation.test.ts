@@ -49,8 +49,11 @@ describe('foundation in a real browser', () => {
     await page.getByRole('link', { name: /new bridge/i }).first().click();
     await page.waitForURL(/\/bridges\/new/);
     const name = `Browser test bridge ${Date.now()}`;
-    await page.getByLabel('Bridge name').fill(name);
-    await page.getByRole('button', { name: /create bridge/i }).click();
+    // A new bridge starts in the form editor from the starter bridge (JSON is only for integrators).
+    await page.getByRole('button', { name: 'Use the starter bridge' }).click();
+    await page.getByLabel(/^Bridge name/).fill(name);
+    await page.waitForFunction(() => [...document.querySelectorAll('button')].some((b) => b.textContent === 'Create bridge' && !b.disabled), undefined, { timeout: 60000 });
+    await page.getByRole('button', { name: 'Create bridge' }).click();
     await page.waitForURL(/\/bridges\/\d+$/);
     await page.getByRole('heading', { name }).waitFor();
     await page.goto(`${baseUrl}/bridges`);
