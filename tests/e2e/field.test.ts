@@ -150,7 +150,8 @@ describe('field mode on a phone', () => {
     await page.goto(`${baseUrl}/bridges`);
     await page.getByRole('link', { name: 'Marlow Creek Overpass' }).first().click();
     await page.waitForURL(/\/bridges\/\d+$/);
-    await page.getByRole('link', { name: 'Field sheet' }).click();
+    // The overview offers the sheet in its setting-out group and again as a PDF download: the page link is first.
+    await page.getByRole('link', { name: 'Field sheet', exact: true }).first().click();
     await page.waitForURL(/\/sheet$/);
     await page.getByRole('link', { name: 'Span 1' }).click();
     await page.waitForURL(/span=1/);

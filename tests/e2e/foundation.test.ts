@@ -70,6 +70,7 @@ describe('foundation in a real browser', () => {
       await signIn(page, baseUrl, `${role}@example.com`);
       const session = await page.evaluate(async () => (await fetch('/api/auth/session')).json());
       expect(session.user.role).toBe(role);
+      await page.getByRole('heading', { level: 1, name: 'Bridges' }).waitFor();
       // What a role may not do is not offered on the page.
       const offersNew = await page.getByRole('link', { name: /new bridge/i }).count();
       expect(offersNew > 0).toBe(role === 'engineer' || role === 'admin');
