@@ -17,9 +17,7 @@ export default function NavLinks({ items }: { items: NavItem[] }) {
             <Link
               href={item.href}
               aria-current={current ? 'page' : undefined}
-              className={`block rounded-md px-3 py-2 text-sm font-semibold transition-colors ${
-                current ? 'bg-brand-700 text-white' : 'text-brand-100 hover:bg-brand-700/60 hover:text-white'
-              }`}
+              className={`block rounded-md px-3 py-2 text-sm font-semibold transition-colors ${current ? 'bg-brand-700 text-white' : 'text-brand-100 hover:bg-brand-700/60 hover:text-white'}`}
             >
               {item.label}
             </Link>

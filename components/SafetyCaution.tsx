@@ -9,10 +9,9 @@ export default function SafetyCaution({ className = '' }: { className?: string }
         Caution: geometry only
       </h2>
       <p className="mt-1 text-sm text-concrete-900">
-        These numbers are geometry only. Overhang brackets carry wet concrete, the finishing machine rail and workers at the deck
-        edge: bracket capacity, spacing, tie-back and fall protection follow the contractor&apos;s engineered falsework design, the
-        bracket maker&apos;s limits, the agency&apos;s specifications and local codes. The engineer of record and the agency decide.
-        Check every number against the plans before use.
+        These numbers are geometry only. Overhang brackets carry wet concrete, the finishing machine rail and workers at the deck edge: bracket capacity, spacing, tie-back and fall protection follow
+        the contractor&apos;s engineered falsework design, the bracket maker&apos;s limits, the agency&apos;s specifications and local codes. The engineer of record and the agency decide. Check every
+        number against the plans before use.
       </p>
     </aside>
   );

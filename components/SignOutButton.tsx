@@ -34,7 +34,9 @@ export default function SignOutButton({ userId }: { userId: number }) {
         <p id="signout-ask" className="font-semibold">
           {state.waiting} {state.waiting === 1 ? 'measurement or photo has' : 'measurements or photos have'} not reached the server yet.
         </p>
-        <p className="mt-1">Signing out deletes {state.waiting === 1 ? 'it' : 'them'} from this phone. Stay signed in and let {state.waiting === 1 ? 'it' : 'them'} send when there is a connection.</p>
+        <p className="mt-1">
+          Signing out deletes {state.waiting === 1 ? 'it' : 'them'} from this phone. Stay signed in and let {state.waiting === 1 ? 'it' : 'them'} send when there is a connection.
+        </p>
         <div className="mt-2 flex flex-wrap gap-2">
           <button type="button" className="btn-primary" onClick={() => setState({ kind: 'idle', waiting: 0 })}>
             Stay signed in

@@ -57,8 +57,20 @@ export async function down({ context: qi }: Ctx): Promise<void> {
     await qi.removeIndex(table, name);
   }
   for (const column of [
-    'activity_at', 'last_field_at', 'spans_awaiting_signoff', 'spans_signed_off', 'spans_total', 'open_failures',
-    'brackets_passing', 'brackets_total', 'stage', 'contractor', 'district', 'feature_crossed', 'route', 'structure_number',
+    'activity_at',
+    'last_field_at',
+    'spans_awaiting_signoff',
+    'spans_signed_off',
+    'spans_total',
+    'open_failures',
+    'brackets_passing',
+    'brackets_total',
+    'stage',
+    'contractor',
+    'district',
+    'feature_crossed',
+    'route',
+    'structure_number',
   ]) {
     await qi.removeColumn('bridges', column);
   }

@@ -52,13 +52,27 @@ async function addChecks(bridge: Bridge, rows: OffsetPoint[], ctx: Ctx, startHou
     const readingPass = reading === null ? null : Math.abs(reading - row.drop_from_girder_top!) <= tol.reading;
     const created = await FieldCheck.create(
       {
-        bridgeId: bridge.id, revision: bridge.currentRevision, span: row.span, girder: row.girder, point: row.point, side: row.side, station: row.station,
-        measuredEdgeWidth: width, computedEdgeWidth: row.edge_width, widthDeviation: width - row.edge_width!, widthTolerance: tol.width, widthPass,
-        measuredReading: reading, computedReading: reading === null ? null : row.drop_from_girder_top,
-        readingDeviation: reading === null ? null : reading - row.drop_from_girder_top!, readingTolerance: tol.reading, readingPass,
+        bridgeId: bridge.id,
+        revision: bridge.currentRevision,
+        span: row.span,
+        girder: row.girder,
+        point: row.point,
+        side: row.side,
+        station: row.station,
+        measuredEdgeWidth: width,
+        computedEdgeWidth: row.edge_width,
+        widthDeviation: width - row.edge_width!,
+        widthTolerance: tol.width,
+        widthPass,
+        measuredReading: reading,
+        computedReading: reading === null ? null : row.drop_from_girder_top,
+        readingDeviation: reading === null ? null : reading - row.drop_from_girder_top!,
+        readingTolerance: tol.reading,
+        readingPass,
         pass: widthPass && readingPass !== false,
         note: failing ? 'Form edge out past the mark; crew to pull it in before the pour.' : '',
-        supersedesId: null, userId: ctx.inspectorId,
+        supersedesId: null,
+        userId: ctx.inspectorId,
         createdAt: new Date(ctx.now - (startHoursAgo - i * 0.1) * HOUR),
       },
       { transaction: ctx.transaction },
@@ -67,7 +81,10 @@ async function addChecks(bridge: Bridge, rows: OffsetPoint[], ctx: Ctx, startHou
   }
   await AuditEvent.bulkCreate(
     made.map((c) => ({
-      userId: ctx.inspectorId, action: 'check.create', entityType: 'bridge', entityId: String(bridge.id),
+      userId: ctx.inspectorId,
+      action: 'check.create',
+      entityType: 'bridge',
+      entityId: String(bridge.id),
       detail: JSON.stringify({ check: c.id, span: c.span, girder: c.girder, point: c.point, revision: c.revision, pass: c.pass, supersedes: null, demo: true }),
       createdAt: c.createdAt,
     })),
@@ -95,8 +112,21 @@ export async function seedDemoHistory(bridges: { bridge: Bridge; description: Br
     const span1 = brackets.filter((p) => p.span === 1);
     await addChecks(first.bridge, span1, ctx, 52);
     const signedAt = new Date(ctx.now - 44 * HOUR);
-    const signoff = await SignOff.create({ bridgeId: first.bridge.id, span: 1, revision: first.bridge.currentRevision, userId: inspectorId, note: 'Span 1 overhang forms checked at every bracket.', createdAt: signedAt }, { transaction });
-    await AuditEvent.create({ userId: inspectorId, action: 'signoff.create', entityType: 'bridge', entityId: String(first.bridge.id), detail: JSON.stringify({ signoff: signoff.id, span: 1, revision: signoff.revision, demo: true }), createdAt: signedAt }, { transaction });
+    const signoff = await SignOff.create(
+      { bridgeId: first.bridge.id, span: 1, revision: first.bridge.currentRevision, userId: inspectorId, note: 'Span 1 overhang forms checked at every bracket.', createdAt: signedAt },
+      { transaction },
+    );
+    await AuditEvent.create(
+      {
+        userId: inspectorId,
+        action: 'signoff.create',
+        entityType: 'bridge',
+        entityId: String(first.bridge.id),
+        detail: JSON.stringify({ signoff: signoff.id, span: 1, revision: signoff.revision, demo: true }),
+        createdAt: signedAt,
+      },
+      { transaction },
+    );
     const span2 = brackets.filter((p) => p.span === 2).slice(0, 6);
     const failAt = span2[span2.length - 1];
     const checks = await addChecks(first.bridge, span2, ctx, 6, failAt);
@@ -104,10 +134,30 @@ export async function seedDemoHistory(bridges: { bridge: Bridge; description: Br
     const bytes = await demoPhoto();
     const storedName = await saveUpload(bytes, 'jpg');
     const photo = await Attachment.create(
-      { bridgeId: first.bridge.id, checkId: failed.id, userId: inspectorId, storedName, originalName: 'form-edge-span2.jpg', contentType: 'image/jpeg', size: bytes.byteLength, caption: 'Form edge past the chalk mark', createdAt: new Date(failed.createdAt.getTime() + 60_000) },
+      {
+        bridgeId: first.bridge.id,
+        checkId: failed.id,
+        userId: inspectorId,
+        storedName,
+        originalName: 'form-edge-span2.jpg',
+        contentType: 'image/jpeg',
+        size: bytes.byteLength,
+        caption: 'Form edge past the chalk mark',
+        createdAt: new Date(failed.createdAt.getTime() + 60_000),
+      },
       { transaction },
     );
-    await AuditEvent.create({ userId: inspectorId, action: 'attachment.create', entityType: 'bridge', entityId: String(first.bridge.id), detail: JSON.stringify({ attachment: photo.id, check: failed.id, name: photo.originalName, content_type: photo.contentType, size: photo.size, demo: true }), createdAt: photo.createdAt }, { transaction });
+    await AuditEvent.create(
+      {
+        userId: inspectorId,
+        action: 'attachment.create',
+        entityType: 'bridge',
+        entityId: String(first.bridge.id),
+        detail: JSON.stringify({ attachment: photo.id, check: failed.id, name: photo.originalName, content_type: photo.contentType, size: photo.size, demo: true }),
+        createdAt: photo.createdAt,
+      },
+      { transaction },
+    );
     await writeStatus(first.bridge, table, transaction);
     await Bridge.update({ lastFieldAt: photo.createdAt, activityAt: photo.createdAt }, { where: { id: first.bridge.id }, transaction });
   }

@@ -25,18 +25,13 @@ export async function seedDemo(sequelize: Sequelize): Promise<boolean> {
   if ((await User.count()) > 0) return false;
   const hash = await hashPassword(DEMO_PASSWORD);
   await sequelize.transaction(async (transaction) => {
-    const users = await Promise.all(
-      DEMO_ACCOUNTS.map((a) => User.create({ ...a, passwordHash: hash }, { transaction })),
-    );
+    const users = await Promise.all(DEMO_ACCOUNTS.map((a) => User.create({ ...a, passwordHash: hash }, { transaction })));
     const engineer = users.find((u) => u.role === 'engineer')!;
     const inspector = users.find((u) => u.role === 'inspector')!;
     const made: { bridge: Bridge; description: (typeof demoBridges)[number] }[] = [];
     for (const description of demoBridges) {
       const bridge = await Bridge.create({ name: description.name, units: description.units, currentRevision: 1 }, { transaction });
-      await GeometryRevision.create(
-        { bridgeId: bridge.id, revision: 1, description: JSON.stringify(description), authorId: engineer.id, note: 'Demo bridge' },
-        { transaction },
-      );
+      await GeometryRevision.create({ bridgeId: bridge.id, revision: 1, description: JSON.stringify(description), authorId: engineer.id, note: 'Demo bridge' }, { transaction });
       await audit(engineer.id, 'bridge.create', 'bridge', bridge.id, { name: bridge.name, demo: true }, transaction);
       made.push({ bridge, description });
     }

@@ -76,10 +76,16 @@ export default function BridgeScene(props: BridgeSceneProps) {
   }, [selected, pickPositions]);
   const centre = useMemo((): { target: [number, number, number]; reach: number } => {
     const p = parts.deckTop.positions;
-    let minX = Infinity, maxX = -Infinity, minZ = Infinity, maxZ = -Infinity, y = 0;
+    let minX = Infinity,
+      maxX = -Infinity,
+      minZ = Infinity,
+      maxZ = -Infinity,
+      y = 0;
     for (let i = 0; i < p.length; i += 3) {
-      minX = Math.min(minX, p[i]); maxX = Math.max(maxX, p[i]);
-      minZ = Math.min(minZ, p[i + 2]); maxZ = Math.max(maxZ, p[i + 2]);
+      minX = Math.min(minX, p[i]);
+      maxX = Math.max(maxX, p[i]);
+      minZ = Math.min(minZ, p[i + 2]);
+      maxZ = Math.max(maxZ, p[i + 2]);
       y += p[i + 1];
     }
     if (!Number.isFinite(minX)) return { target: [0, 0, 0], reach: 100 };

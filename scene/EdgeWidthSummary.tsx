@@ -14,12 +14,24 @@ export default function EdgeWidthSummary({ table, caption = 'Edge width per span
         <caption className="px-4 pt-3 text-left font-semibold text-concrete-800">{caption}</caption>
         <thead>
           <tr className="border-b border-concrete-200 text-left text-concrete-600">
-            <th scope="col" className="px-4 py-2 font-semibold">Span</th>
-            <th scope="col" className="px-4 py-2 font-semibold">Side</th>
-            <th scope="col" className="px-4 py-2 font-semibold">Girder</th>
-            <th scope="col" className="px-4 py-2 text-right font-semibold">Narrowest ({u})</th>
-            <th scope="col" className="px-4 py-2 text-right font-semibold">Widest ({u})</th>
-            <th scope="col" className="px-4 py-2 text-right font-semibold">Edge middle ordinate ({u})</th>
+            <th scope="col" className="px-4 py-2 font-semibold">
+              Span
+            </th>
+            <th scope="col" className="px-4 py-2 font-semibold">
+              Side
+            </th>
+            <th scope="col" className="px-4 py-2 font-semibold">
+              Girder
+            </th>
+            <th scope="col" className="px-4 py-2 text-right font-semibold">
+              Narrowest ({u})
+            </th>
+            <th scope="col" className="px-4 py-2 text-right font-semibold">
+              Widest ({u})
+            </th>
+            <th scope="col" className="px-4 py-2 text-right font-semibold">
+              Edge middle ordinate ({u})
+            </th>
           </tr>
         </thead>
         <tbody>

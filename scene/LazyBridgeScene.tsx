@@ -9,7 +9,11 @@ import SceneErrorBoundary from './SceneErrorBoundary';
 // three.js loads only where a scene is drawn, and only in the browser.
 const BridgeScene = dynamic(() => import('./BridgeScene'), {
   ssr: false,
-  loading: () => <div className="flex h-full items-center justify-center text-concrete-600" role="status">Loading the 3D view…</div>,
+  loading: () => (
+    <div className="flex h-full items-center justify-center text-concrete-600" role="status">
+      Loading the 3D view…
+    </div>
+  ),
 });
 
 /** The scene, or `fallback` when the browser has no WebGL or the scene fails to start. */

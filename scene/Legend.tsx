@@ -13,7 +13,8 @@ type Props = {
 function Swatch({ color, line = false, label }: { color: string; line?: boolean; label: string }) {
   return (
     <li className="flex items-center gap-2">
-      <span className={line ? 'inline-block h-0.5 w-6 ring-1 ring-concrete-400' : 'inline-block h-3 w-4 rounded-sm ring-1 ring-concrete-400'} style={{ background: color }} aria-hidden="true" /> {label}
+      <span className={line ? 'inline-block h-0.5 w-6 ring-1 ring-concrete-400' : 'inline-block h-3 w-4 rounded-sm ring-1 ring-concrete-400'} style={{ background: color }} aria-hidden="true" />{' '}
+      {label}
     </li>
   );
 }
@@ -39,8 +40,8 @@ export default function Legend({ range, units, points = true, deflection = 0 }: 
       </div>
       {deflection > 0 ? (
         <p className="rounded border border-brand-100 bg-brand-50 p-2 text-concrete-800" data-testid="deflection-note">
-          Form targets and screed grades include the girders&apos; dead-load deflection (up to <span className="tabular">{lengthText(deflection, units)}</span>): the
-          forms are set above grade and come down with the girders as the deck is poured.
+          Form targets and screed grades include the girders&apos; dead-load deflection (up to <span className="tabular">{lengthText(deflection, units)}</span>): the forms are set above grade and come
+          down with the girders as the deck is poured.
         </p>
       ) : null}
       <ul className="flex flex-wrap gap-x-4 gap-y-1 text-concrete-700">

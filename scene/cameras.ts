@@ -45,25 +45,27 @@ function scenePt(f: SceneFrame, x: number, y: number, z: number): [number, numbe
  * string line. section: off the start of `span`, looking along it at the overhang in section.
  * span: above the outside overhang of `span`, looking down on it.
  */
-export function cameraPose(
-  view: ViewName,
-  table: Pick<OffsetTable, 'points'>,
-  frame: SceneFrame,
-  units: Units,
-  opts: { side?: 'left' | 'right'; span?: number; bent?: number } = {},
-): CameraPose {
+export function cameraPose(view: ViewName, table: Pick<OffsetTable, 'points'>, frame: SceneFrame, units: Units, opts: { side?: 'left' | 'right'; span?: number; bent?: number } = {}): CameraPose {
   const u = units === 'm' ? 0.3048 : 1;
   // With heights exaggerated the slab edge stands taller: stand higher and further out so the eye
   // stays above the deck and the rail is seen against the sky.
   const raise = Math.max(0, frame.exaggeration - 1);
   const eye = 5.5 * u + 0.9 * u * raise;
   const out = 0.6 * u * raise;
-  let minX = Infinity, maxX = -Infinity, minZ = Infinity, maxZ = -Infinity, minY = Infinity, maxY = -Infinity;
+  let minX = Infinity,
+    maxX = -Infinity,
+    minZ = Infinity,
+    maxZ = -Infinity,
+    minY = Infinity,
+    maxY = -Infinity;
   for (const p of table.points) {
     const [x, y, z] = scenePt(frame, p.x, p.y, p.top_of_deck);
-    minX = Math.min(minX, x); maxX = Math.max(maxX, x);
-    minY = Math.min(minY, y); maxY = Math.max(maxY, y);
-    minZ = Math.min(minZ, z); maxZ = Math.max(maxZ, z);
+    minX = Math.min(minX, x);
+    maxX = Math.max(maxX, x);
+    minY = Math.min(minY, y);
+    maxY = Math.max(maxY, y);
+    minZ = Math.min(minZ, z);
+    maxZ = Math.max(maxZ, z);
   }
   if (!Number.isFinite(minX)) return { position: [100, 100, 100], target: [0, 0, 0] };
   const cx = (minX + maxX) / 2;

@@ -27,7 +27,11 @@ export function captionText(c: PictureCaption): string {
 
 /** A file name from the caption's parts: letters, digits and dashes only. */
 export function pictureFileName(c: PictureCaption): string {
-  const slug = (s: string) => s.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '');
+  const slug = (s: string) =>
+    s
+      .toLowerCase()
+      .replace(/[^a-z0-9]+/g, '-')
+      .replace(/^-|-$/g, '');
   return `${slug(c.bridge) || 'bridge'}${c.revision !== null ? `-r${c.revision}` : ''}-${slug(c.view)}.png`;
 }
 

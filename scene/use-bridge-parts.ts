@@ -43,7 +43,15 @@ function joinMeshes(a: { positions: Float32Array; indices: Uint32Array }, b: { p
 }
 
 /** Rail and form-edge probe points at every interior bent on `side` (see objects/KinkProbe). */
-export function kinkCandidates(desc: BridgeDescription, table: Pick<OffsetTable, 'points'>, frame: SceneFrame, placements: readonly BracketPlacement[], postTops: Float32Array, side: 'left' | 'right', pour: PourState): KinkCandidate[] {
+export function kinkCandidates(
+  desc: BridgeDescription,
+  table: Pick<OffsetTable, 'points'>,
+  frame: SceneFrame,
+  placements: readonly BracketPlacement[],
+  postTops: Float32Array,
+  side: 'left' | 'right',
+  pour: PourState,
+): KinkCandidate[] {
   const mine: number[] = [];
   placements.forEach((p, i) => p.side === side && mine.push(i));
   const spans = mine.map((i) => placements[i].span);
@@ -91,10 +99,7 @@ export function useBridgeParts(input: BridgePartsInput) {
   const strings = useMemo(() => buildStringLineSegments(table, frame, stringLineLift(units), pour), [table, frame, units, pour]);
   const alignment = useMemo(() => buildAlignmentSegments(desc, model, frame, 60 * u, 2 * u), [desc, model, frame, u]);
   const placements = useMemo(() => placeBrackets(table, bracketSpacing), [table, bracketSpacing]);
-  const brackets = useMemo(
-    () => buildBracketInstances(placements, frame, { ...defaultBracketDims(units, shape.depth), verticalBow, pour }),
-    [placements, frame, units, shape, verticalBow, pour],
-  );
+  const brackets = useMemo(() => buildBracketInstances(placements, frame, { ...defaultBracketDims(units, shape.depth), verticalBow, pour }), [placements, frame, units, shape, verticalBow, pour]);
   const bents = useMemo(() => buildBents(desc, model, table, frame, shape.depth, units), [desc, model, table, frame, shape, units]);
   const pickPositions = useMemo(() => {
     const out = new Float32Array(pickable.length * 3);
@@ -124,9 +129,6 @@ export function useBridgeParts(input: BridgePartsInput) {
     }
     return out;
   }, [desc, model, frame, units, u, bents, input.stationEvery]);
-  const kinks = useMemo(
-    () => kinkCandidates(desc, table, frame, placements, brackets.postTops, outsideSide(table), pour),
-    [desc, table, frame, placements, brackets, pour],
-  );
+  const kinks = useMemo(() => kinkCandidates(desc, table, frame, placements, brackets.postTops, outsideSide(table), pour), [desc, table, frame, placements, brackets, pour]);
   return { units, u, girders, deckTop, underside, band, formEdge, strings, alignment, brackets, bents, pickPositions, labels, kinks };
 }

@@ -28,8 +28,8 @@ export default async function SignInPage({ searchParams }: { searchParams: Searc
           <div className="my-8 max-w-md md:my-0">
             <h1 className="text-3xl font-bold leading-tight md:text-4xl">Set the overhang to the girder, not to a guess.</h1>
             <p className="mt-4 text-brand-100">
-              Chordline works out edge widths, edge drops, form targets and chord offsets at every girder point of a curved bridge,
-              for the engineers who set the geometry and the crews and inspectors who set and check the forms.
+              Chordline works out edge widths, edge drops, form targets and chord offsets at every girder point of a curved bridge, for the engineers who set the geometry and the crews and inspectors
+              who set and check the forms.
             </p>
           </div>
           <ChordlineMark className="pointer-events-none absolute -bottom-16 -right-16 hidden h-80 w-80 text-brand-700 md:block" />

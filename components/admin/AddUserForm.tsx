@@ -64,8 +64,7 @@ export default function AddUserForm() {
       </div>
     );
   };
-  const aria = (key: keyof typeof EMPTY) =>
-    fields[key] ? { 'aria-invalid': true as const, 'aria-describedby': `${id}-${key}-error` } : {};
+  const aria = (key: keyof typeof EMPTY) => (fields[key] ? { 'aria-invalid': true as const, 'aria-describedby': `${id}-${key}-error` } : {});
 
   return (
     <form onSubmit={onSubmit} noValidate className="card space-y-4 p-6">

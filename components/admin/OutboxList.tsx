@@ -43,12 +43,17 @@ export default function OutboxList({ messages }: { messages: Message[] }) {
                 <a href={`data:${a.content_type.split(';')[0]};base64,${a.content}`} download={a.filename} className="font-semibold text-brand-700 underline">
                   {a.filename}
                 </a>{' '}
-                <span className="text-concrete-600">({a.content_type.split(';')[0]}, {(a.size / 1024).toFixed(1)} KB)</span>
+                <span className="text-concrete-600">
+                  ({a.content_type.split(';')[0]}, {(a.size / 1024).toFixed(1)} KB)
+                </span>
               </p>
             ) : (
               <details key={a.filename} className="mt-2">
                 <summary className="cursor-pointer text-sm font-semibold text-brand-700">
-                  {a.filename} <span className="font-normal text-concrete-600">({a.content_type.split(';')[0]}, {(a.size / 1024).toFixed(1)} KB)</span>
+                  {a.filename}{' '}
+                  <span className="font-normal text-concrete-600">
+                    ({a.content_type.split(';')[0]}, {(a.size / 1024).toFixed(1)} KB)
+                  </span>
                 </summary>
                 <pre className="tabular mt-1 max-h-72 overflow-auto rounded bg-concrete-50 p-3 text-xs text-concrete-900">{a.content}</pre>
               </details>

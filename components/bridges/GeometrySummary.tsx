@@ -12,7 +12,10 @@ export default function GeometrySummary({ description }: { description: BridgeDe
   const edgeText = (e: BridgeDescription['deck']['left_edge_offset']) =>
     typeof e === 'number' ? offsetText(e, units, true) : `flared: ${e.map((r) => `${sta(r.station)} ${offsetText(r.offset, units, true)}`).join(' · ')}`;
 
-  const ends = stationsAlong(description.alignment.start_station, description.alignment.elements.map((el) => el.length));
+  const ends = stationsAlong(
+    description.alignment.start_station,
+    description.alignment.elements.map((el) => el.length),
+  );
   const elements = description.alignment.elements.map((el, i) => {
     const kind = el.type === 'arc' ? `Curve ${el.direction}` : 'Tangent';
     return [String(i + 1), kind, sta(ends[i]), sta(ends[i + 1]), len(el.length), el.type === 'arc' ? len(el.radius) : '—'];
@@ -23,11 +26,7 @@ export default function GeometrySummary({ description }: { description: BridgeDe
     const next = description.bents[j + 1];
     return [`Span ${j + 1}`, `${b.name} to ${next.name}`, sta(b.station), sta(next.station), len(next.station - b.station)];
   });
-  const girders = description.girders.map((g) => [
-    g.name,
-    g.layout === 'chord' ? 'Straight (chord)' : 'Curved',
-    g.offsets.map((o) => offsetText(o, units)).join(' · '),
-  ]);
+  const girders = description.girders.map((g) => [g.name, g.layout === 'chord' ? 'Straight (chord)' : 'Curved', g.offsets.map((o) => offsetText(o, units)).join(' · ')]);
   const deck = description.deck;
   const settlement = deck.form_settlement ?? (units === 'm' ? 0.005 : 0.02);
   const section: React.ReactNode[][] = [

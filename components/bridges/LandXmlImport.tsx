@@ -98,7 +98,8 @@ export default function LandXmlImport({ units, onApply }: { units: Units; onAppl
         </button>
       </div>
       <p className="mt-0.5 text-sm text-concrete-600">
-        Reads Line, Curve and clothoid Spiral elements and the design profile (PVI, ParaCurve; CircCurve as the matching parabola) of a LandXML 1.2 file in {units === 'm' ? 'metres' : 'feet'}. Nothing is saved until you save a revision.
+        Reads Line, Curve and clothoid Spiral elements and the design profile (PVI, ParaCurve; CircCurve as the matching parabola) of a LandXML 1.2 file in {units === 'm' ? 'metres' : 'feet'}. Nothing
+        is saved until you save a revision.
       </p>
       <div className="mt-3 flex flex-wrap items-end gap-3">
         <div>

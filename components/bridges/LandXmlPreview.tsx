@@ -18,15 +18,18 @@ export default function LandXmlPreview({ item, units }: { item: ImportedAlignmen
   const al = item.alignment;
   // The "no profile" note is said in the box above; the others are listed at the end.
   const notes = item.notes.filter((n) => !(item.profile === null && n.startsWith('No profile came')));
-  const ends = stationsAlong(al.start_station, al.elements.map((e) => e.length));
+  const ends = stationsAlong(
+    al.start_station,
+    al.elements.map((e) => e.length),
+  );
   const rows = al.elements.map((e, i) => ({ i, e, from: ends[i], to: ends[i + 1] }));
   const station = ends[ends.length - 1];
   return (
     <div className="space-y-3" data-testid="landxml-preview">
       <p className="text-sm text-concrete-700">
-        Starts at station <span className="tabular font-semibold">{stationText(al.start_station, units)}</span>, easting{' '}
-        <span className="tabular">{lengthText(al.start_x, units)}</span>, northing <span className="tabular">{lengthText(al.start_y, units)}</span>, bearing{' '}
-        <span className="tabular">{al.start_bearing_deg.toFixed(6)}°</span>; ends at <span className="tabular font-semibold">{stationText(station, units)}</span>.
+        Starts at station <span className="tabular font-semibold">{stationText(al.start_station, units)}</span>, easting <span className="tabular">{lengthText(al.start_x, units)}</span>, northing{' '}
+        <span className="tabular">{lengthText(al.start_y, units)}</span>, bearing <span className="tabular">{al.start_bearing_deg.toFixed(6)}°</span>; ends at{' '}
+        <span className="tabular font-semibold">{stationText(station, units)}</span>.
       </p>
       <div className="overflow-x-auto">
         <table className="w-full text-sm">

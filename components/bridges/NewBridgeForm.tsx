@@ -45,11 +45,7 @@ export default function NewBridgeForm() {
       </section>
       <div>
         <h2 className="mb-2 text-lg font-bold text-concrete-900">Geometry</h2>
-        <EditorForm
-          key={start.key}
-          initialDraft={start.draft}
-          footer={(check) => <NewBridgeCreateBar check={check} record={record} onFields={setFields} />}
-        />
+        <EditorForm key={start.key} initialDraft={start.draft} footer={(check) => <NewBridgeCreateBar check={check} record={record} onFields={setFields} />} />
       </div>
     </div>
   );

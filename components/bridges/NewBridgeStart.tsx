@@ -9,7 +9,6 @@ import { landXmlDraft, starterDraft } from '@/lib/editor/new-bridge-drafts';
 import type { Draft } from '@/lib/editor/draft';
 import type { Units } from '@/lib/units';
 
-
 /** Where a new bridge starts: a draft for the form editor, a line saying where it came from, record fields to carry over. */
 export type Start = { draft: Draft; note: string; key: number; record?: Partial<RecordDraft> };
 
@@ -43,8 +42,8 @@ export default function NewBridgeStart({ onStart }: { onStart: (s: Start) => voi
             Start from the starter bridge
           </h2>
           <p className="mt-1 flex-1 text-sm text-concrete-700">
-            {units === 'm' ? 'Two 30 m spans on a 300 m radius curve' : 'Two 100 ft spans on a 1000 ft radius curve'}, four girder lines, a crest curve and a superelevation
-            transition. Change any of it in the form editor.
+            {units === 'm' ? 'Two 30 m spans on a 300 m radius curve' : 'Two 100 ft spans on a 1000 ft radius curve'}, four girder lines, a crest curve and a superelevation transition. Change any of
+            it in the form editor.
           </p>
           <button type="button" className="btn-primary mt-3 self-start" onClick={() => begin(starterDraft(units), `Started from the starter bridge in ${unitWords}.`)}>
             Use the starter bridge
@@ -64,12 +63,12 @@ export default function NewBridgeStart({ onStart }: { onStart: (s: Start) => voi
         <h2 id="start-landxml" className="text-lg font-bold text-concrete-900">
           Start from a LandXML file
         </h2>
-        <p className="text-sm text-concrete-700">
-          The alignment and profile come from the file; the editor then asks for the cross slopes, deck, bent stations and girder offsets.
-        </p>
+        <p className="text-sm text-concrete-700">The alignment and profile come from the file; the editor then asks for the cross slopes, deck, bent stations and girder offsets.</p>
         <LandXmlImport
           units={units}
-          onApply={(item, fileName) => begin(landXmlDraft(item, units, item.name || 'New bridge'), `Alignment${item.profile ? ' and profile' : ''} “${item.name}” read from ${fileName}; fill in the rest below.`)}
+          onApply={(item, fileName) =>
+            begin(landXmlDraft(item, units, item.name || 'New bridge'), `Alignment${item.profile ? ' and profile' : ''} “${item.name}” read from ${fileName}; fill in the rest below.`)
+          }
         />
       </section>
 

@@ -95,7 +95,15 @@ export default function PasteDescription({ onOpen }: { onOpen: (draft: Draft) =>
       <label htmlFor={`${ids}-json`} className="field-label mt-3">
         Description JSON
       </label>
-      <textarea id={`${ids}-json`} value={text} onChange={(e) => setText(e.target.value)} spellCheck={false} rows={12} className="field-input font-mono text-xs leading-5" aria-invalid={error ? true : undefined} />
+      <textarea
+        id={`${ids}-json`}
+        value={text}
+        onChange={(e) => setText(e.target.value)}
+        spellCheck={false}
+        rows={12}
+        className="field-input font-mono text-xs leading-5"
+        aria-invalid={error ? true : undefined}
+      />
       <div className="mt-3 flex flex-wrap items-center gap-2">
         <button type="button" className="btn-secondary" onClick={open} disabled={busy || !text.trim()}>
           Open in the form editor

@@ -11,7 +11,13 @@ const SORT_LABELS = { activity: 'Latest activity', name: 'Name A–Z', structure
 export default function PortfolioFilters({ query, districts }: { query: Partial<BridgeListQuery>; districts: string[] }) {
   const select = 'field-input mt-1 py-1.5';
   return (
-    <form method="get" action="/bridges" role="search" aria-label="Search and filter bridges" className="card mb-4 grid grid-cols-2 gap-3 p-4 lg:grid-cols-[minmax(0,2fr)_repeat(4,minmax(0,1fr))_auto]">
+    <form
+      method="get"
+      action="/bridges"
+      role="search"
+      aria-label="Search and filter bridges"
+      className="card mb-4 grid grid-cols-2 gap-3 p-4 lg:grid-cols-[minmax(0,2fr)_repeat(4,minmax(0,1fr))_auto]"
+    >
       <div className="col-span-2 lg:col-span-1">
         <label htmlFor="portfolio-q" className="field-label">
           Search

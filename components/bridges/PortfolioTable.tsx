@@ -56,22 +56,44 @@ export default function PortfolioTable({ rows }: { rows: BridgeRow[] }) {
           <caption className="sr-only">Bridges with their check progress</caption>
           <thead className="border-b border-concrete-200 bg-concrete-100 text-concrete-700">
             <tr>
-              <th scope="col" className="px-4 py-3 font-semibold">Bridge</th>
-              <th scope="col" className="px-4 py-3 font-semibold">Stage</th>
-              <th scope="col" className="px-4 py-3 font-semibold">Check progress</th>
-              <th scope="col" className="px-4 py-3 font-semibold">Spans</th>
-              <th scope="col" className="px-4 py-3 font-semibold">Open failures</th>
-              <th scope="col" className="px-4 py-3 font-semibold">Last field activity</th>
+              <th scope="col" className="px-4 py-3 font-semibold">
+                Bridge
+              </th>
+              <th scope="col" className="px-4 py-3 font-semibold">
+                Stage
+              </th>
+              <th scope="col" className="px-4 py-3 font-semibold">
+                Check progress
+              </th>
+              <th scope="col" className="px-4 py-3 font-semibold">
+                Spans
+              </th>
+              <th scope="col" className="px-4 py-3 font-semibold">
+                Open failures
+              </th>
+              <th scope="col" className="px-4 py-3 font-semibold">
+                Last field activity
+              </th>
             </tr>
           </thead>
           <tbody>
             {rows.map((row) => (
               <tr key={row.id} className="border-b border-concrete-100 align-top last:border-0 hover:bg-brand-50" data-bridge-id={row.id}>
-                <td className="max-w-72 px-4 py-3"><Identity row={row} /></td>
-                <td className="px-4 py-3"><StageBadge stage={row.stage} /></td>
-                <td className="px-4 py-3"><PortfolioProgress passing={row.bracketsPassing} total={row.bracketsTotal} /></td>
-                <td className="px-4 py-3"><Spans row={row} /></td>
-                <td className="px-4 py-3"><Failures count={row.openFailures} /></td>
+                <td className="max-w-72 px-4 py-3">
+                  <Identity row={row} />
+                </td>
+                <td className="px-4 py-3">
+                  <StageBadge stage={row.stage} />
+                </td>
+                <td className="px-4 py-3">
+                  <PortfolioProgress passing={row.bracketsPassing} total={row.bracketsTotal} />
+                </td>
+                <td className="px-4 py-3">
+                  <Spans row={row} />
+                </td>
+                <td className="px-4 py-3">
+                  <Failures count={row.openFailures} />
+                </td>
                 <td className="px-4 py-3 text-concrete-700">{lastField(row)}</td>
               </tr>
             ))}
@@ -85,15 +107,21 @@ export default function PortfolioTable({ rows }: { rows: BridgeRow[] }) {
               <Identity row={row} />
               <StageBadge stage={row.stage} />
             </div>
-            <div className="mt-3"><PortfolioProgress passing={row.bracketsPassing} total={row.bracketsTotal} /></div>
+            <div className="mt-3">
+              <PortfolioProgress passing={row.bracketsPassing} total={row.bracketsTotal} />
+            </div>
             <dl className="mt-3 grid grid-cols-2 gap-x-3 gap-y-2 text-sm">
               <div>
                 <dt className="text-xs text-concrete-600">Spans</dt>
-                <dd><Spans row={row} /></dd>
+                <dd>
+                  <Spans row={row} />
+                </dd>
               </div>
               <div>
                 <dt className="text-xs text-concrete-600">Open failures</dt>
-                <dd><Failures count={row.openFailures} /></dd>
+                <dd>
+                  <Failures count={row.openFailures} />
+                </dd>
               </div>
               <div className="col-span-2">
                 <dt className="text-xs text-concrete-600">Last field activity</dt>

@@ -16,13 +16,27 @@ export default function CheckHistoryTable({ checks, units, currentRevision }: { 
       <table className="w-full text-sm">
         <thead className="bg-concrete-100 text-left text-xs font-semibold uppercase tracking-wide text-concrete-700">
           <tr>
-            <th scope="col" className="px-3 py-2">#</th>
-            <th scope="col" className="px-3 py-2">When / who</th>
-            <th scope="col" className="px-3 py-2">Bracket</th>
-            <th scope="col" className="px-3 py-2 text-right">Edge width: measured / computed</th>
-            <th scope="col" className="px-3 py-2 text-right">Reading: measured / computed</th>
-            <th scope="col" className="px-3 py-2">Result</th>
-            <th scope="col" className="px-3 py-2">Photos</th>
+            <th scope="col" className="px-3 py-2">
+              #
+            </th>
+            <th scope="col" className="px-3 py-2">
+              When / who
+            </th>
+            <th scope="col" className="px-3 py-2">
+              Bracket
+            </th>
+            <th scope="col" className="px-3 py-2 text-right">
+              Edge width: measured / computed
+            </th>
+            <th scope="col" className="px-3 py-2 text-right">
+              Reading: measured / computed
+            </th>
+            <th scope="col" className="px-3 py-2">
+              Result
+            </th>
+            <th scope="col" className="px-3 py-2">
+              Photos
+            </th>
           </tr>
         </thead>
         <tbody className="tabular divide-y divide-concrete-200">

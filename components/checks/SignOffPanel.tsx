@@ -79,9 +79,7 @@ export default function SignOffPanel({ bridgeId, units, spans, canSign }: { brid
                 {busy === s.span ? 'Signing off…' : `Sign off span ${s.span}`}
               </button>
             ) : null}
-            {canSign && !current && !s.ready ? (
-              <p className="mt-3 text-sm text-concrete-600">Sign-off opens when every bracket of the span has a passing latest check.</p>
-            ) : null}
+            {canSign && !current && !s.ready ? <p className="mt-3 text-sm text-concrete-600">Sign-off opens when every bracket of the span has a passing latest check.</p> : null}
             {errors[s.span] ? (
               <p role="alert" className="field-error">
                 {errors[s.span]}

@@ -23,13 +23,32 @@ export default function EditorAlignmentSection({ draft, update, check }: Section
       intro="Tangents, clothoid spirals and circular arcs laid end to end from the start point, each tangent to the one before. Bearings are azimuths, clockwise from north."
       messages={messagesAt(check, 'alignment').concat(messagesAt(check, 'alignment.elements'))}
       addLabel="Add element"
-      onAdd={() => setA({ elements: [...a.elements, { key: newKey('el'), type: 'line', length: '100', radius: '', direction: 'right', start: 'tangent', radius_start: '', end: 'radius', radius_end: '', rest: {} }] })}
+      onAdd={() =>
+        setA({
+          elements: [...a.elements, { key: newKey('el'), type: 'line', length: '100', radius: '', direction: 'right', start: 'tangent', radius_start: '', end: 'radius', radius_end: '', rest: {} }],
+        })
+      }
     >
       <div className="mb-3 flex flex-wrap gap-x-3 gap-y-2">
-        <EditorField label="Start station" value={a.start_station} onChange={(v) => setA({ start_station: v })} placeholder={stationHint} unit={u} width="w-36 sm:w-40" messages={messagesAt(check, 'alignment.start_station')} />
+        <EditorField
+          label="Start station"
+          value={a.start_station}
+          onChange={(v) => setA({ start_station: v })}
+          placeholder={stationHint}
+          unit={u}
+          width="w-36 sm:w-40"
+          messages={messagesAt(check, 'alignment.start_station')}
+        />
         <EditorField label="Start easting (x)" value={a.start_x} onChange={(v) => setA({ start_x: v })} unit={u} width="w-40" messages={messagesAt(check, 'alignment.start_x')} />
         <EditorField label="Start northing (y)" value={a.start_y} onChange={(v) => setA({ start_y: v })} unit={u} width="w-40" messages={messagesAt(check, 'alignment.start_y')} />
-        <EditorField label="Start bearing" value={a.start_bearing_deg} onChange={(v) => setA({ start_bearing_deg: v })} unit="°" width="w-32" messages={messagesAt(check, 'alignment.start_bearing_deg')} />
+        <EditorField
+          label="Start bearing"
+          value={a.start_bearing_deg}
+          onChange={(v) => setA({ start_bearing_deg: v })}
+          unit="°"
+          width="w-32"
+          messages={messagesAt(check, 'alignment.start_bearing_deg')}
+        />
       </div>
       <ol className="space-y-2">
         {a.elements.map((e, i) => {

@@ -39,16 +39,20 @@ export default function EditorBentSection({ draft, update, check }: SectionProps
               index={i}
               count={draft.bents.length}
               minRows={2}
-              onMove={(to) =>
-                update((d) => ({ ...d, bents: moveItem(d.bents, i, to), girders: d.girders.map((g) => ({ ...g, offsets: moveItem(g.offsets, i, to) })) }))
-              }
-              onRemove={() =>
-                update((d) => ({ ...d, bents: d.bents.filter((_, j) => j !== i), girders: d.girders.map((g) => ({ ...g, offsets: g.offsets.filter((_, j) => j !== i) })) }))
-              }
+              onMove={(to) => update((d) => ({ ...d, bents: moveItem(d.bents, i, to), girders: d.girders.map((g) => ({ ...g, offsets: moveItem(g.offsets, i, to) })) }))}
+              onRemove={() => update((d) => ({ ...d, bents: d.bents.filter((_, j) => j !== i), girders: d.girders.map((g) => ({ ...g, offsets: g.offsets.filter((_, j) => j !== i) })) }))}
               messages={messagesUnder(check, p, [`${p}.name`, `${p}.station`, `${p}.skew_deg`])}
             >
               <EditorField label="Name" value={b.name} onChange={(x) => setRow(i, { name: x })} inputMode="text" width="w-32 sm:w-40" messages={messagesAt(check, `${p}.name`)} />
-              <EditorField label="Station" value={b.station} onChange={(x) => setRow(i, { station: x })} placeholder={stationHint} unit={draft.units} width="w-36 sm:w-40" messages={messagesAt(check, `${p}.station`)} />
+              <EditorField
+                label="Station"
+                value={b.station}
+                onChange={(x) => setRow(i, { station: x })}
+                placeholder={stationHint}
+                unit={draft.units}
+                width="w-36 sm:w-40"
+                messages={messagesAt(check, `${p}.station`)}
+              />
               <EditorField label="Skew" value={b.skew_deg} onChange={(x) => setRow(i, { skew_deg: x })} unit="°" width="w-28" messages={messagesAt(check, `${p}.skew_deg`)} />
             </EditorRow>
           );

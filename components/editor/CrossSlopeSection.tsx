@@ -38,7 +38,15 @@ export default function EditorCrossSlopeSection({ draft, update, check }: Sectio
               onRemove={() => set(draft.cross_slopes.filter((_, j) => j !== i))}
               messages={messagesUnder(check, p, [`${p}.station`, `${p}.left`, `${p}.right`])}
             >
-              <EditorField label="Station" value={c.station} onChange={(x) => setRow(i, { station: x })} placeholder={stationHint} unit={draft.units} width="w-36 sm:w-40" messages={messagesAt(check, `${p}.station`)} />
+              <EditorField
+                label="Station"
+                value={c.station}
+                onChange={(x) => setRow(i, { station: x })}
+                placeholder={stationHint}
+                unit={draft.units}
+                width="w-36 sm:w-40"
+                messages={messagesAt(check, `${p}.station`)}
+              />
               <EditorField label="Left slope" value={c.left} onChange={(x) => setRow(i, { left: x })} unit="%" width="w-28" messages={messagesAt(check, `${p}.left`)} />
               <EditorField label="Right slope" value={c.right} onChange={(x) => setRow(i, { right: x })} unit="%" width="w-28" messages={messagesAt(check, `${p}.right`)} />
             </EditorRow>

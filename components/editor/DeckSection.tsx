@@ -16,7 +16,12 @@ export default function EditorDeckSection({ draft, update, check }: SectionProps
   const set = (patch: Partial<DeckDraft>) => update((x) => ({ ...x, deck: { ...x.deck, ...patch } }));
   const at = (f: string) => messagesAt(check, `deck.${f}`);
   return (
-    <EditorSection id="deck" title="Deck section" intro="Each deck edge runs at a constant offset from the alignment or, where the deck flares (a ramp gore, a widening), follows a station/offset table. The top of deck is level from the gutter line (barrier width inside the edge) to the edge." messages={messagesUnder(check, 'deck', FIELDS).filter((m) => !messagesUnder(check, 'deck.left_edge_offset').concat(messagesUnder(check, 'deck.right_edge_offset')).includes(m))}>
+    <EditorSection
+      id="deck"
+      title="Deck section"
+      intro="Each deck edge runs at a constant offset from the alignment or, where the deck flares (a ramp gore, a widening), follows a station/offset table. The top of deck is level from the gutter line (barrier width inside the edge) to the edge."
+      messages={messagesUnder(check, 'deck', FIELDS).filter((m) => !messagesUnder(check, 'deck.left_edge_offset').concat(messagesUnder(check, 'deck.right_edge_offset')).includes(m))}
+    >
       <div className="flex flex-wrap gap-x-3 gap-y-3">
         <div className="grid basis-full gap-3 md:grid-cols-2">
           {(['left', 'right'] as const).map((side) => (

@@ -61,8 +61,20 @@ export default function EditorDeflectionSection({ draft, update, check }: Sectio
               onRemove={() => set(rows.filter((_, j) => j !== i))}
               messages={messagesUnder(check, p, shown)}
             >
-              <EditorSelect label="Girder" value={r.girder} onChange={(v) => setRow(i, { girder: v })} options={(girders.includes(r.girder) ? girders : [r.girder, ...girders]).map((g) => ({ value: g, label: g || '—' }))} width="w-24" />
-              <EditorSelect label="Span" value={r.span} onChange={(v) => setRow(i, { span: v })} options={Array.from({ length: spans }, (_, s) => ({ value: String(s + 1), label: String(s + 1) }))} width="w-20" />
+              <EditorSelect
+                label="Girder"
+                value={r.girder}
+                onChange={(v) => setRow(i, { girder: v })}
+                options={(girders.includes(r.girder) ? girders : [r.girder, ...girders]).map((g) => ({ value: g, label: g || '—' }))}
+                width="w-24"
+              />
+              <EditorSelect
+                label="Span"
+                value={r.span}
+                onChange={(v) => setRow(i, { span: v })}
+                options={Array.from({ length: spans }, (_, s) => ({ value: String(s + 1), label: String(s + 1) }))}
+                width="w-20"
+              />
               <EditorSelect
                 label="Values"
                 value={String(n)}
@@ -72,7 +84,14 @@ export default function EditorDeflectionSection({ draft, update, check }: Sectio
               />
               <div className="grid basis-full grid-cols-4 gap-x-2 gap-y-2 sm:grid-cols-6 lg:grid-cols-11">
                 {r.values.map((v, k) => (
-                  <EditorField key={k} label={`${fraction(k, n)} (${draft.deflection_unit})`} value={v} onChange={(x) => setRow(i, { values: r.values.map((y, j) => (j === k ? x : y)) })} width="w-full min-w-0" messages={messagesAt(check, `${p}.values.${k}`)} />
+                  <EditorField
+                    key={k}
+                    label={`${fraction(k, n)} (${draft.deflection_unit})`}
+                    value={v}
+                    onChange={(x) => setRow(i, { values: r.values.map((y, j) => (j === k ? x : y)) })}
+                    width="w-full min-w-0"
+                    messages={messagesAt(check, `${p}.values.${k}`)}
+                  />
                 ))}
               </div>
             </EditorRow>

@@ -57,7 +57,15 @@ export default function EditorEdgeEditor({
               {edge.rows.map((r, j) => (
                 <tr key={r.key} className="align-top">
                   <td className="py-1 pr-2">
-                    <EditorField label={`Station ${j + 1}`} value={r.station} onChange={(v) => setRow(j, { station: v })} placeholder={stationHint} unit={units} width="w-36" messages={messagesAt(check, `${path}.${j}.station`)} />
+                    <EditorField
+                      label={`Station ${j + 1}`}
+                      value={r.station}
+                      onChange={(v) => setRow(j, { station: v })}
+                      placeholder={stationHint}
+                      unit={units}
+                      width="w-36"
+                      messages={messagesAt(check, `${path}.${j}.station`)}
+                    />
                   </td>
                   <td className="py-1 pr-2">
                     <EditorOffsetField label={`Offset ${j + 1}`} value={r.offset} onChange={(v) => setRow(j, { offset: v })} unit={units} messages={messagesAt(check, `${path}.${j}.offset`)} />

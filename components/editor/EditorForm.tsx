@@ -74,7 +74,9 @@ export default function EditorForm({ bridgeId, revision, description, initialDra
     setImported(
       `The alignment${item.profile ? ' and profile' : ''} of “${item.name}” from ${fileName} replaced the ones in the editor. ${item.profile ? '' : 'The file gave no usable profile: enter it in the Profile section. '}Check the bents and cross slopes against the new stations, then save a revision.`,
     );
-    setProfileRequest(item.profile ? null : [`“${item.name}” from ${fileName} came without a profile; the PVIs below are the ones the editor had. Enter the profile from the plans.`, ...(item.profile_left_out ?? [])]);
+    setProfileRequest(
+      item.profile ? null : [`“${item.name}” from ${fileName} came without a profile; the PVIs below are the ones the editor had. Enter the profile from the plans.`, ...(item.profile_left_out ?? [])],
+    );
   }
 
   async function onSave() {
@@ -109,7 +111,11 @@ export default function EditorForm({ bridgeId, revision, description, initialDra
               .filter(([path]) => s.prefixes.some((p) => under(path, p)))
               .reduce((sum, [, l]) => sum + l.length, 0);
             return (
-              <a key={s.id} href={`#${s.id}`} className={`rounded-full border px-3 py-1 ${n > 0 ? 'border-fail-600 bg-fail-100 text-fail-600' : 'border-concrete-300 bg-white text-concrete-700 hover:bg-concrete-100'}`}>
+              <a
+                key={s.id}
+                href={`#${s.id}`}
+                className={`rounded-full border px-3 py-1 ${n > 0 ? 'border-fail-600 bg-fail-100 text-fail-600' : 'border-concrete-300 bg-white text-concrete-700 hover:bg-concrete-100'}`}
+              >
                 {s.title}
                 {n > 0 ? <span className="ml-1 font-semibold">({n})</span> : null}
               </a>
@@ -138,11 +144,7 @@ export default function EditorForm({ bridgeId, revision, description, initialDra
         <EditorGirderSection {...props} />
         <EditorDeflectionSection {...props} />
         <EditorPointsSection {...props} />
-        {footer ? (
-          footer(current)
-        ) : (
-          <EditorSaveBar bridgeId={bridgeId} base={base} note={note} onNote={setNote} onSave={onSave} state={save} problemCount={current.problemCount} dirty={dirty} />
-        )}
+        {footer ? footer(current) : <EditorSaveBar bridgeId={bridgeId} base={base} note={note} onNote={setNote} onSave={onSave} state={save} problemCount={current.problemCount} dirty={dirty} />}
       </div>
       <aside id="preview" className="min-w-0 scroll-mt-4 lg:sticky lg:top-4 lg:self-start" aria-label="Live preview">
         <EditorPreview check={check} stale={deferred !== draft} />

@@ -31,13 +31,34 @@ export default function EditorRow({
       <div className="flex items-start justify-between gap-2">
         <h3 className="text-sm font-bold text-concrete-800">{title}</h3>
         <div className="flex shrink-0 gap-1">
-          <button type="button" className="rounded border border-concrete-300 bg-white px-2 py-0.5 text-sm text-concrete-700 hover:bg-concrete-100 disabled:opacity-40" onClick={() => onMove(index - 1)} disabled={index === 0} aria-label={`Move ${title} up`} title="Move up">
+          <button
+            type="button"
+            className="rounded border border-concrete-300 bg-white px-2 py-0.5 text-sm text-concrete-700 hover:bg-concrete-100 disabled:opacity-40"
+            onClick={() => onMove(index - 1)}
+            disabled={index === 0}
+            aria-label={`Move ${title} up`}
+            title="Move up"
+          >
             ↑
           </button>
-          <button type="button" className="rounded border border-concrete-300 bg-white px-2 py-0.5 text-sm text-concrete-700 hover:bg-concrete-100 disabled:opacity-40" onClick={() => onMove(index + 1)} disabled={index === count - 1} aria-label={`Move ${title} down`} title="Move down">
+          <button
+            type="button"
+            className="rounded border border-concrete-300 bg-white px-2 py-0.5 text-sm text-concrete-700 hover:bg-concrete-100 disabled:opacity-40"
+            onClick={() => onMove(index + 1)}
+            disabled={index === count - 1}
+            aria-label={`Move ${title} down`}
+            title="Move down"
+          >
             ↓
           </button>
-          <button type="button" className="rounded border border-concrete-300 bg-white px-2 py-0.5 text-sm text-fail-600 hover:bg-fail-100 disabled:opacity-40" onClick={onRemove} disabled={count <= minRows} aria-label={`Remove ${title}`} title={count <= minRows ? `At least ${minRows} needed` : 'Remove'}>
+          <button
+            type="button"
+            className="rounded border border-concrete-300 bg-white px-2 py-0.5 text-sm text-fail-600 hover:bg-fail-100 disabled:opacity-40"
+            onClick={onRemove}
+            disabled={count <= minRows}
+            aria-label={`Remove ${title}`}
+            title={count <= minRows ? `At least ${minRows} needed` : 'Remove'}
+          >
             ✕
           </button>
         </div>

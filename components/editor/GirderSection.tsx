@@ -22,7 +22,18 @@ export default function EditorGirderSection({ draft, update, check }: SectionPro
       intro="Offsets are measured square to the alignment where the girder crosses each bent line. Chord girders run straight from bent to bent; curved girders stay concentric with the alignment."
       messages={messagesAt(check, 'girders')}
       addLabel="Add girder"
-      onAdd={() => set([...draft.girders, { key: newKey('girder'), name: `G${draft.girders.length + 1}`, layout: draft.girders[0]?.layout ?? 'chord', offsets: draft.bents.map(() => ({ magnitude: '0', side: 'RT' as const })), rest: {} }])}
+      onAdd={() =>
+        set([
+          ...draft.girders,
+          {
+            key: newKey('girder'),
+            name: `G${draft.girders.length + 1}`,
+            layout: draft.girders[0]?.layout ?? 'chord',
+            offsets: draft.bents.map(() => ({ magnitude: '0', side: 'RT' as const })),
+            rest: {},
+          },
+        ])
+      }
     >
       <ol className="space-y-2">
         {draft.girders.map((g, i) => {

@@ -11,7 +11,13 @@ export default function PlanSketchSvg({ s, name, units, compact = false }: { s: 
   const u = units;
   return (
     <figure>
-      <svg viewBox={`0 0 ${s.width} ${s.height}`} className="h-auto w-full rounded-md border border-concrete-200 bg-white" role="img" aria-label={`Plan sketch of ${name}: alignment, deck edges, ${s.bents.length} bents and ${s.girders.length} girders`} data-testid="plan-sketch">
+      <svg
+        viewBox={`0 0 ${s.width} ${s.height}`}
+        className="h-auto w-full rounded-md border border-concrete-200 bg-white"
+        role="img"
+        aria-label={`Plan sketch of ${name}: alignment, deck edges, ${s.bents.length} bents and ${s.girders.length} girders`}
+        data-testid="plan-sketch"
+      >
         {s.deck ? <polygon points={s.deck} fill="#efede8" stroke="#6b665b" strokeWidth={1.5} /> : null}
         <polyline points={s.alignment} fill="none" stroke="#1f7f70" strokeWidth={1.5} strokeDasharray="10 4 2 4" />
         <PlanSketchMarks s={s} />

@@ -48,9 +48,25 @@ export default function EditorProfileSection({ draft, update, check, request = n
               onRemove={() => set(draft.pvis.filter((_, j) => j !== i))}
               messages={messagesUnder(check, p, [`${p}.station`, `${p}.elevation`, `${p}.curve_length`])}
             >
-              <EditorField label="Station" value={v.station} onChange={(x) => setRow(i, { station: x })} placeholder={stationHint} unit={draft.units} width="w-36 sm:w-40" messages={messagesAt(check, `${p}.station`)} />
+              <EditorField
+                label="Station"
+                value={v.station}
+                onChange={(x) => setRow(i, { station: x })}
+                placeholder={stationHint}
+                unit={draft.units}
+                width="w-36 sm:w-40"
+                messages={messagesAt(check, `${p}.station`)}
+              />
               <EditorField label="Elevation" value={v.elevation} onChange={(x) => setRow(i, { elevation: x })} unit={u} width="w-32" messages={messagesAt(check, `${p}.elevation`)} />
-              <EditorField label="Vertical curve length" value={v.curve_length} onChange={(x) => setRow(i, { curve_length: x })} unit={u} width="w-40" placeholder="none" messages={messagesAt(check, `${p}.curve_length`)} />
+              <EditorField
+                label="Vertical curve length"
+                value={v.curve_length}
+                onChange={(x) => setRow(i, { curve_length: x })}
+                unit={u}
+                width="w-40"
+                placeholder="none"
+                messages={messagesAt(check, `${p}.curve_length`)}
+              />
             </EditorRow>
           );
         })}

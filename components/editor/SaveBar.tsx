@@ -5,11 +5,7 @@ import { useId } from 'react';
 import FieldErrorList from '@/components/FieldErrorList';
 
 export type SaveState =
-  | { kind: 'idle' }
-  | { kind: 'saving' }
-  | { kind: 'saved'; revision: number }
-  | { kind: 'stale'; message: string }
-  | { kind: 'error'; message: string; fields: Record<string, string[]> };
+  { kind: 'idle' } | { kind: 'saving' } | { kind: 'saved'; revision: number } | { kind: 'stale'; message: string } | { kind: 'error'; message: string; fields: Record<string, string[]> };
 
 /**
  * The save step: a note for the revision history and the save button, and what came of the last
@@ -48,7 +44,14 @@ export default function EditorSaveBar({
       <label htmlFor={`${id}-note`} className="field-label mt-3">
         Note for the history (what changed and why; needed to save)
       </label>
-      <textarea id={`${id}-note`} className="field-input min-h-16" maxLength={500} value={note} onChange={(e) => onNote(e.target.value)} placeholder="e.g. G1 moved 0.25 ft inboard at Pier 2 per shop drawings" />
+      <textarea
+        id={`${id}-note`}
+        className="field-input min-h-16"
+        maxLength={500}
+        value={note}
+        onChange={(e) => onNote(e.target.value)}
+        placeholder="e.g. G1 moved 0.25 ft inboard at Pier 2 per shop drawings"
+      />
       <div className="mt-3 flex flex-wrap items-center gap-3">
         <button type="button" className="btn-primary" onClick={onSave} disabled={blocked}>
           {state.kind === 'saving' ? 'Saving…' : 'Save revision'}

@@ -38,7 +38,13 @@ export default function EditorSpiralFields({
           width="w-28"
         />
         {mode === 'radius' ? (
-          <EditorField label={which === 'start' ? 'Start radius' : 'End radius'} value={e[key]} onChange={(v) => onChange({ [key]: v } as Partial<ElementDraft>)} unit={units} messages={messagesAt(check, `${path}.${key}`)} />
+          <EditorField
+            label={which === 'start' ? 'Start radius' : 'End radius'}
+            value={e[key]}
+            onChange={(v) => onChange({ [key]: v } as Partial<ElementDraft>)}
+            unit={units}
+            messages={messagesAt(check, `${path}.${key}`)}
+          />
         ) : null}
       </div>
     );

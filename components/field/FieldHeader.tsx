@@ -43,9 +43,7 @@ export default function FieldHeader({ bridge, online, kept, fromPhone, waiting, 
         data-testid="field-waiting"
         className={`shrink-0 rounded-full px-3 py-1 text-xs font-bold ${waiting ? 'bg-caution-100 text-caution-700' : 'bg-brand-700 text-brand-50'}`}
         title={
-          waiting
-            ? 'Measurements and photos kept on this phone; they go to the server by themselves when the connection allows.'
-            : 'Every measurement recorded on this phone has reached the server.'
+          waiting ? 'Measurements and photos kept on this phone; they go to the server by themselves when the connection allows.' : 'Every measurement recorded on this phone has reached the server.'
         }
       >
         {badge}

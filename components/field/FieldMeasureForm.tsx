@@ -18,8 +18,7 @@ type Errors = { width?: string; reading?: string };
 
 function check(width: number | null, reading: number | null, units: Units, readingAsked: boolean): Errors {
   const errs: Errors = {};
-  if (width !== null && (!Number.isFinite(width) || width <= 0))
-    errs.width = units === 'm' ? 'Type the width in metres, e.g. 1.382.' : `Type decimal feet (4.53) or feet-inches (4'-6 3/8").`;
+  if (width !== null && (!Number.isFinite(width) || width <= 0)) errs.width = units === 'm' ? 'Type the width in metres, e.g. 1.382.' : `Type decimal feet (4.53) or feet-inches (4'-6 3/8").`;
   if (reading !== null && !Number.isFinite(reading)) errs.reading = units === 'm' ? 'Type the reading in metres, e.g. 0.084.' : 'Type the reading in decimal feet, e.g. 0.32.';
   if (width === null && reading === null) errs.width = 'Type the measured edge width' + (readingAsked ? ' or the level-bar reading.' : '.');
   return errs;

@@ -39,7 +39,11 @@ export default function FieldMode({ canRecord, user, renderedAt, ...server }: Pr
   const row = group.rows[Math.min(index, group.rows.length - 1)];
   const resultRef = useRef<HTMLDivElement>(null);
 
-  const { data: checks, error, mutate } = useSWR<CheckRow[], ApiError>(`/api/bridges/${bridge.id}/checks`, fetcher, {
+  const {
+    data: checks,
+    error,
+    mutate,
+  } = useSWR<CheckRow[], ApiError>(`/api/bridges/${bridge.id}/checks`, fetcher, {
     revalidateOnFocus: true,
     errorRetryInterval: 10000,
     fallbackData: fromPhone ? kept?.checks : undefined,

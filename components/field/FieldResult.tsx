@@ -23,9 +23,7 @@ function Line({ kind, measured, deviation, pass, tolerance, units }: { kind: 'wi
   return (
     <div className="border-t border-black/10 py-1 first:border-t-0">
       <div className="flex items-baseline justify-between gap-2">
-        <span className="text-sm font-semibold">
-          {kind === 'width' ? `Width ${tapeLength(measured, units)}` : `Reading ${readingLength(measured, units)}`}
-        </span>
+        <span className="text-sm font-semibold">{kind === 'width' ? `Width ${tapeLength(measured, units)}` : `Reading ${readingLength(measured, units)}`}</span>
         <span className="tabular text-2xl font-bold">
           {deviationText(deviation, units, kind)} <span className="text-sm font-semibold">{verdictWord(pass, tolerance, units, kind)}</span>
         </span>
@@ -63,11 +61,7 @@ export default function FieldResult({
   const old = verdict.revision !== null && verdict.revision !== currentRevision;
   const tone = verdict.pass ? 'border-pass-600 bg-pass-100 text-pass-700' : 'border-fail-600 bg-fail-100 text-fail-600';
   const status =
-    verdict.state === 'saved'
-      ? `Saved as check #${verdict.checkId} · ${dateTimeText(verdict.when)}`
-      : verdict.state === 'sending'
-        ? 'Sending…'
-        : (verdict.note ?? 'Kept on this phone; will resend.');
+    verdict.state === 'saved' ? `Saved as check #${verdict.checkId} · ${dateTimeText(verdict.when)}` : verdict.state === 'sending' ? 'Sending…' : (verdict.note ?? 'Kept on this phone; will resend.');
   return (
     <div role="status" aria-live="polite" className={`mt-4 rounded-lg border-2 p-3 ${tone}`} data-testid="field-result">
       <p className="text-3xl font-black tracking-wide" data-testid="field-verdict">
@@ -80,7 +74,11 @@ export default function FieldResult({
         <Line kind="reading" measured={verdict.measuredReading} deviation={verdict.readingDeviation} pass={verdict.readingPass} tolerance={readingTolerance} units={units} />
       ) : null}
       <p className={`mt-1 text-xs font-semibold ${verdict.state === 'saved' ? 'text-concrete-700' : 'text-caution-700'}`}>{status}</p>
-      {old ? <p className="mt-1 text-xs font-semibold text-caution-700">Checked against revision {verdict.revision}; the geometry is now at revision {currentRevision}. Check again.</p> : null}
+      {old ? (
+        <p className="mt-1 text-xs font-semibold text-caution-700">
+          Checked against revision {verdict.revision}; the geometry is now at revision {currentRevision}. Check again.
+        </p>
+      ) : null}
     </div>
   );
 }

@@ -28,12 +28,7 @@ export default function KeepOnPhoneBar({ kept, online, busy, error, onKeep }: Pr
             : 'Not kept on this phone: showing the page as last loaded.'}
       </p>
       {online ? (
-        <button
-          type="button"
-          onClick={onKeep}
-          disabled={busy}
-          className="shrink-0 rounded-md border border-brand-300/60 px-2.5 py-1 font-semibold text-white hover:bg-brand-700 disabled:opacity-60"
-        >
+        <button type="button" onClick={onKeep} disabled={busy} className="shrink-0 rounded-md border border-brand-300/60 px-2.5 py-1 font-semibold text-white hover:bg-brand-700 disabled:opacity-60">
           {busy ? 'Saving…' : kept ? 'Update' : 'Keep on this phone'}
         </button>
       ) : null}

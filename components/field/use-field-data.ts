@@ -38,7 +38,11 @@ export function useFieldData(server: FieldData, userId: number, renderedAt: stri
         setKept(copy);
         const fresh = Date.now() - Date.parse(renderedAt) < FRESH_PAGE_MS;
         // Quietly bring the kept copy up to date when this page came from the server.
-        if (copy && navigator.onLine && fresh) keepForField(server, userId).then((c) => !gone && setKept(c), () => undefined);
+        if (copy && navigator.onLine && fresh)
+          keepForField(server, userId).then(
+            (c) => !gone && setKept(c),
+            () => undefined,
+          );
       })
       .catch(() => undefined);
     return () => {

@@ -25,8 +25,12 @@ export default function HistoryEdgeWidthChanges({ diff, from, to }: { diff: Revi
             <tr className="border-b border-concrete-200 text-left text-xs text-concrete-600">
               <th className="px-4 py-2 font-semibold">Span</th>
               <th className="px-2 py-2 font-semibold">Side</th>
-              <th className="px-2 py-2 text-right font-semibold">Revision {from} ({u})</th>
-              <th className="px-2 py-2 text-right font-semibold">Revision {to} ({u})</th>
+              <th className="px-2 py-2 text-right font-semibold">
+                Revision {from} ({u})
+              </th>
+              <th className="px-2 py-2 text-right font-semibold">
+                Revision {to} ({u})
+              </th>
               <th className="px-4 py-2 text-right font-semibold">Largest change at a point ({u})</th>
             </tr>
           </thead>
@@ -44,7 +48,9 @@ export default function HistoryEdgeWidthChanges({ diff, from, to }: { diff: Revi
         </table>
       </div>
       {diff.edge_widths.length === 0 ? (
-        <p className="card p-4 text-concrete-700">No girder point&apos;s edge width changed between revision {from} and revision {to}.</p>
+        <p className="card p-4 text-concrete-700">
+          No girder point&apos;s edge width changed between revision {from} and revision {to}.
+        </p>
       ) : (
         <div className="card overflow-x-auto">
           <table className="w-full text-sm" data-testid="point-width-changes">
@@ -57,8 +63,12 @@ export default function HistoryEdgeWidthChanges({ diff, from, to }: { diff: Revi
                 <th className="px-2 py-2 font-semibold">Side</th>
                 <th className="px-2 py-2 font-semibold">Girder</th>
                 <th className="px-2 py-2 text-right font-semibold">Point</th>
-                <th className="px-2 py-2 text-right font-semibold">Revision {from} ({u})</th>
-                <th className="px-2 py-2 text-right font-semibold">Revision {to} ({u})</th>
+                <th className="px-2 py-2 text-right font-semibold">
+                  Revision {from} ({u})
+                </th>
+                <th className="px-2 py-2 text-right font-semibold">
+                  Revision {to} ({u})
+                </th>
                 <th className="px-4 py-2 text-right font-semibold">Difference ({u})</th>
               </tr>
             </thead>

@@ -25,7 +25,12 @@ function valueText(path: string, value: Scalar | undefined, units: Units): strin
 /** The description's changed fields between two revisions, labelled with the trade's words. */
 export default function HistoryFieldChanges({ changes, before, after, from, to }: { changes: FieldChange[]; before: BridgeDescription; after: BridgeDescription; from: number; to: number }) {
   const units = after.units;
-  if (changes.length === 0) return <p className="card p-4 text-concrete-700">No field of the description differs between revision {from} and revision {to}.</p>;
+  if (changes.length === 0)
+    return (
+      <p className="card p-4 text-concrete-700">
+        No field of the description differs between revision {from} and revision {to}.
+      </p>
+    );
   return (
     <div className="card overflow-x-auto">
       <table className="w-full text-sm" data-testid="field-changes">

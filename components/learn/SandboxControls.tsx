@@ -22,13 +22,7 @@ export default function SandboxControls({ settings, set, exaggeration, setExagge
       <Slider label="Curve radius" value={settings.radius} text={ft(settings.radius)} {...SANDBOX_LIMITS.radius} onChange={(v) => set({ radius: v })} />
       <Slider label="Span length" value={settings.spanLength} text={ft(settings.spanLength)} {...SANDBOX_LIMITS.spanLength} onChange={(v) => set({ spanLength: v })} />
       <Slider label="Overhang at the bents" value={settings.overhang} text={ft(settings.overhang)} {...SANDBOX_LIMITS.overhang} onChange={(v) => set({ overhang: v })} />
-      <Slider
-        label="Cross slope"
-        value={settings.crossSlope}
-        text={`${(settings.crossSlope * 100).toFixed(1)} %`}
-        {...SANDBOX_LIMITS.crossSlope}
-        onChange={(v) => set({ crossSlope: v })}
-      />
+      <Slider label="Cross slope" value={settings.crossSlope} text={`${(settings.crossSlope * 100).toFixed(1)} %`} {...SANDBOX_LIMITS.crossSlope} onChange={(v) => set({ crossSlope: v })} />
       <fieldset>
         <legend className="field-label">Section</legend>
         <div className="mt-1 flex flex-wrap gap-4 text-sm">
@@ -56,9 +50,8 @@ export default function SandboxControls({ settings, set, exaggeration, setExagge
         <div role="alert" className="space-y-1 rounded border border-caution-500 bg-caution-100 p-2 text-sm text-caution-700">
           {settings.layout === 'chord' && askedOrdinate >= settings.overhang ? (
             <p>
-              The straight inside girder would cross the deck edge at midspan: a {ft(settings.spanLength)} chord on a {ft(settings.radius)} radius bows {ft(askedOrdinate)}{' '}
-              away from the curve (span² ÷ (8 × radius)), more than the {ft(settings.overhang)} overhang. Designers shorten the spans, widen the overhang or curve the
-              girders.
+              The straight inside girder would cross the deck edge at midspan: a {ft(settings.spanLength)} chord on a {ft(settings.radius)} radius bows {ft(askedOrdinate)} away from the curve (span² ÷
+              (8 × radius)), more than the {ft(settings.overhang)} overhang. Designers shorten the spans, widen the overhang or curve the girders.
             </p>
           ) : null}
           <p>The engine cannot build this deck, so the picture shows the last one that worked. {error}</p>

@@ -107,8 +107,8 @@ export default function Walkthrough() {
           stale={
             error ? (
               <p className="rounded border border-caution-500 bg-caution-100 p-2 text-sm text-caution-700" data-testid="walkthrough-stale">
-                The sliders ask for a deck the engine cannot build, so the picture and these numbers are for the last one that worked: radius {ft(built.radius)}, span{' '}
-                {ft(built.spanLength)}, overhang {ft(built.overhang)}.
+                The sliders ask for a deck the engine cannot build, so the picture and these numbers are for the last one that worked: radius {ft(built.radius)}, span {ft(built.spanLength)}, overhang{' '}
+                {ft(built.overhang)}.
               </p>
             ) : null
           }

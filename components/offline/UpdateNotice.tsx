@@ -56,7 +56,10 @@ export default function UpdateNotice() {
 
   if (!note) return null;
   return (
-    <div role="status" className="fixed inset-x-3 bottom-3 z-50 flex items-start gap-3 rounded-lg border border-brand-300 bg-white p-3 text-sm text-concrete-900 shadow-lg md:left-auto md:right-4 md:max-w-sm">
+    <div
+      role="status"
+      className="fixed inset-x-3 bottom-3 z-50 flex items-start gap-3 rounded-lg border border-brand-300 bg-white p-3 text-sm text-concrete-900 shadow-lg md:left-auto md:right-4 md:max-w-sm"
+    >
       <p className="flex-1">
         {note === 'updated'
           ? 'Chordline has been updated to a new version since your last visit.'

@@ -18,11 +18,7 @@ export async function queueCheck(user: OutboxUser, bridgeId: number, revision: n
 }
 
 /** Puts a photo at the end of the queue, for a saved check (its id) or a waiting one (its key). */
-export async function queuePhoto(
-  user: OutboxUser,
-  bridgeId: number,
-  photo: Pick<OutboxPhoto, 'blob' | 'name' | 'checkId' | 'checkKey' | 'span' | 'girder' | 'point'>,
-): Promise<OutboxPhoto> {
+export async function queuePhoto(user: OutboxUser, bridgeId: number, photo: Pick<OutboxPhoto, 'blob' | 'name' | 'checkId' | 'checkKey' | 'span' | 'girder' | 'point'>): Promise<OutboxPhoto> {
   const item: OutboxPhoto = {
     kind: 'photo',
     key: newClientKey(),

@@ -15,8 +15,8 @@ export default function CadDownloads({ bridgeId, revision }: { bridgeId: number;
         Alignment and profile (LandXML 1.2)
       </a>
       <p className="basis-full text-xs text-concrete-600">
-        The DXF holds the alignment with station ticks, deck edges, gutter lines, girders, bent lines and every exterior girder point with its edge
-        point, on layers ALIGNMENT, DECK-EDGE, GUTTER, GIRDER, BENT, GIRDER-POINT and TEXT, in the bridge&apos;s own coordinates.
+        The DXF holds the alignment with station ticks, deck edges, gutter lines, girders, bent lines and every exterior girder point with its edge point, on layers ALIGNMENT, DECK-EDGE, GUTTER,
+        GIRDER, BENT, GIRDER-POINT and TEXT, in the bridge&apos;s own coordinates.
       </p>
     </section>
   );

@@ -12,12 +12,7 @@ const SIDE_STYLE = {
   right: { color: '#D55E00', marker: 'square' as const, dash: '6 3', name: 'Right overhang' },
 };
 
-function seriesOf(
-  points: OffsetPointRow[],
-  summaries: SpanSummary[],
-  value: (p: OffsetPointRow) => number | null,
-  label: (p: OffsetPointRow, v: number) => string,
-): ChartSeries[] {
+function seriesOf(points: OffsetPointRow[], summaries: SpanSummary[], value: (p: OffsetPointRow) => number | null, label: (p: OffsetPointRow, v: number) => string): ChartSeries[] {
   const out: ChartSeries[] = [];
   for (const side of ['left', 'right'] as const) {
     const rows = points.filter((p) => p.side === side);
@@ -45,19 +40,7 @@ function seriesOf(
  * form edge's drop below the bottom of slab at the girder, whose kinks at the bents are why the
  * finished forms look peaked.
  */
-export default function ChartOverhangStrips({
-  points,
-  summaries,
-  bents,
-  units,
-  style,
-}: {
-  points: OffsetPointRow[];
-  summaries: SpanSummary[];
-  bents: ChartBent[];
-  units: Units;
-  style: DisplayStyle;
-}) {
+export default function ChartOverhangStrips({ points, summaries, bents, units, style }: { points: OffsetPointRow[]; summaries: SpanSummary[]; bents: ChartBent[]; units: Units; style: DisplayStyle }) {
   const axisUnit = units;
   const fmt = (v: number) => lengthWithUnit(v, units, style);
   const tick = (v: number) => (units === 'm' ? v.toFixed(2) : v.toFixed(2).replace(/\.?0+$/, '') || '0');
@@ -70,7 +53,12 @@ export default function ChartOverhangStrips({
         description={`Horizontal distance from each exterior girder's centreline to the deck edge, square to the girder, at every girder point. Straight girders under a curved edge make it bow between bents; the diamonds mark where it changes fastest in each span.`}
         xLabel={`Station (${units})`}
         yLabel={`Edge width (${axisUnit})`}
-        series={seriesOf(points, summaries, (p) => p.edge_width, (p, v) => `${where(p)}: edge width ${fmt(v)}`)}
+        series={seriesOf(
+          points,
+          summaries,
+          (p) => p.edge_width,
+          (p, v) => `${where(p)}: edge width ${fmt(v)}`,
+        )}
         bents={bents}
         formatX={stationTick}
         formatY={tick}
@@ -81,7 +69,12 @@ export default function ChartOverhangStrips({
         description="Edge drop at every girder point, drawn downward as the form edge hangs below the girder's bottom of slab. Where two spans meet at a bent the line kinks: the forms look peaked there even when every grade is right."
         xLabel={`Station (${units})`}
         yLabel={`Edge drop, down (${axisUnit})`}
-        series={seriesOf(points, summaries, (p) => p.edge_drop, (p, v) => `${where(p)}: edge drop ${fmt(v)}`)}
+        series={seriesOf(
+          points,
+          summaries,
+          (p) => p.edge_drop,
+          (p, v) => `${where(p)}: edge drop ${fmt(v)}`,
+        )}
         bents={bents}
         formatX={stationTick}
         formatY={tick}

@@ -29,11 +29,7 @@ function shortName(name: string): string {
 }
 
 function Marker({ kind, x, y, color, size = 3.5 }: { kind: 'circle' | 'square'; x: number; y: number; color: string; size?: number }) {
-  return kind === 'circle' ? (
-    <circle cx={x} cy={y} r={size} fill={color} />
-  ) : (
-    <rect x={x - size} y={y - size} width={size * 2} height={size * 2} fill={color} />
-  );
+  return kind === 'circle' ? <circle cx={x} cy={y} r={size} fill={color} /> : <rect x={x - size} y={y - size} width={size * 2} height={size * 2} fill={color} />;
 }
 
 /**
@@ -174,12 +170,7 @@ export default function ChartStrip({
                 <g key={i}>
                   {showMarkers ? <Marker kind={s.marker} x={sx(p.x)} y={sy(p.y)} color={s.color} size={2.5} /> : null}
                   {p.marked ? (
-                    <path
-                      d={`M ${sx(p.x)} ${sy(p.y) - 7} L ${sx(p.x) + 7} ${sy(p.y)} L ${sx(p.x)} ${sy(p.y) + 7} L ${sx(p.x) - 7} ${sy(p.y)} Z`}
-                      fill="none"
-                      stroke="#24221f"
-                      strokeWidth={1.5}
-                    />
+                    <path d={`M ${sx(p.x)} ${sy(p.y) - 7} L ${sx(p.x) + 7} ${sy(p.y)} L ${sx(p.x)} ${sy(p.y) + 7} L ${sx(p.x) - 7} ${sy(p.y)} Z`} fill="none" stroke="#24221f" strokeWidth={1.5} />
                   ) : null}
                   <title>{`${s.name}: ${p.label}`}</title>
                 </g>

@@ -15,8 +15,7 @@ export default function ChordOffsetTable({ set, units, style }: { set: ChordOffs
     const sign = sort.direction === 'ascending' ? 1 : -1;
     return [...set.offsets].sort((a, b) => (a[sort.key] - b[sort.key]) * sign || a.i - b.i);
   }, [set.offsets, sort]);
-  const onSort = (key: Key) =>
-    setSort((s) => (s.key === key ? { key, direction: s.direction === 'ascending' ? 'descending' : 'ascending' } : { key, direction: 'ascending' }));
+  const onSort = (key: Key) => setSort((s) => (s.key === key ? { key, direction: s.direction === 'ascending' ? 'descending' : 'ascending' } : { key, direction: 'ascending' }));
   const unit = lengthUnit(units, style);
   return (
     <div className="card overflow-x-auto print:overflow-visible">

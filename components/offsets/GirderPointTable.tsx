@@ -78,8 +78,7 @@ export default function GirderPointTable({
     if (kind === 'elevation') return elevationCell(p[key] as number | null, units);
     return lengthCell(p[key] as number | null, units, style);
   };
-  const onSort = (key: Key) =>
-    setSort((s) => (s.key === key ? { key, direction: s.direction === 'ascending' ? 'descending' : 'ascending' } : { key, direction: 'ascending' }));
+  const onSort = (key: Key) => setSort((s) => (s.key === key ? { key, direction: s.direction === 'ascending' ? 'descending' : 'ascending' } : { key, direction: 'ascending' }));
 
   return (
     <div className="card overflow-x-auto print:overflow-visible">
@@ -103,15 +102,7 @@ export default function GirderPointTable({
         <thead className="bg-concrete-100">
           <tr className="align-bottom">
             {columns.map((c, i) => (
-              <OffsetSortHeader
-                key={c.key}
-                label={c.label}
-                unit={unitOf(c.kind)}
-                active={sort.key === c.key}
-                direction={sort.direction}
-                onSort={() => onSort(c.key)}
-                sticky={i === 0}
-              />
+              <OffsetSortHeader key={c.key} label={c.label} unit={unitOf(c.kind)} active={sort.key === c.key} direction={sort.direction} onSort={() => onSort(c.key)} sticky={i === 0} />
             ))}
           </tr>
         </thead>
@@ -119,11 +110,7 @@ export default function GirderPointTable({
           {sorted.map((p) => {
             const marked = isFast(p.point);
             return (
-              <tr
-                key={p.point}
-                data-point={p.point}
-                className={`border-t border-concrete-100 ${marked ? 'bg-caution-100' : 'bg-white even:bg-concrete-50'} break-inside-avoid`}
-              >
+              <tr key={p.point} data-point={p.point} className={`border-t border-concrete-100 ${marked ? 'bg-caution-100' : 'bg-white even:bg-concrete-50'} break-inside-avoid`}>
                 {columns.map((c, i) =>
                   i === 0 ? (
                     <th

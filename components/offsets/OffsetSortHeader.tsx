@@ -24,11 +24,7 @@ export default function OffsetSortHeader({
   sticky?: boolean;
 }) {
   return (
-    <th
-      scope="col"
-      aria-sort={active ? direction : 'none'}
-      className={`p-0 font-semibold ${sticky ? 'sticky left-0 z-10 bg-concrete-100 print:static' : ''}`}
-    >
+    <th scope="col" aria-sort={active ? direction : 'none'} className={`p-0 font-semibold ${sticky ? 'sticky left-0 z-10 bg-concrete-100 print:static' : ''}`}>
       <button
         type="button"
         onClick={onSort}

@@ -101,12 +101,7 @@ export default function OffsetTableToolbar({
           <label htmlFor={`${id}-side`} className="field-label">
             Side
           </label>
-          <select
-            id={`${id}-side`}
-            className="field-input min-h-11"
-            value={filter.side}
-            onChange={(e) => onFilter({ ...filter, side: e.target.value as OffsetFilter['side'] })}
-          >
+          <select id={`${id}-side`} className="field-input min-h-11" value={filter.side} onChange={(e) => onFilter({ ...filter, side: e.target.value as OffsetFilter['side'] })}>
             <option value="both">Both sides</option>
             <option value="left">Left</option>
             <option value="right">Right</option>

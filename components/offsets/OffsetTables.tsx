@@ -90,17 +90,11 @@ export default function OffsetTables({ bridgeId, bents }: { bridgeId: number; be
   const units = (data?.units ?? 'ft') as Units;
   const exterior = useMemo(() => (data ? data.points.filter((p) => p.side !== 'interior') : []), [data]);
   const visible = useMemo(
-    () =>
-      exterior.filter(
-        (p) => (filter.span === 'all' || p.span === filter.span) && (filter.side === 'both' || p.side === filter.side) && matchesText(p, units, filter.text),
-      ),
+    () => exterior.filter((p) => (filter.span === 'all' || p.span === filter.span) && (filter.side === 'both' || p.side === filter.side) && matchesText(p, units, filter.text)),
     [exterior, filter, units],
   );
   const chords = useMemo(
-    () =>
-      (data?.chord_offsets ?? []).filter(
-        (c) => (filter.span === 'all' || c.span === filter.span) && (filter.side === 'both' || c.side === filter.side) && !filter.text.trim(),
-      ),
+    () => (data?.chord_offsets ?? []).filter((c) => (filter.span === 'all' || c.span === filter.span) && (filter.side === 'both' || c.side === filter.side) && !filter.text.trim()),
     [data, filter],
   );
 
@@ -136,7 +130,8 @@ export default function OffsetTables({ bridgeId, bents }: { bridgeId: number; be
 
       {deflections ? (
         <p className="rounded-md border border-brand-300 bg-brand-50 p-3 text-sm text-brand-800" data-testid="deflection-note">
-          This bridge has a dead-load deflection table: form targets, buildups and drops from the girder top include the deflection still to come, and the screed grade is the top of deck plus that deflection (set high so the deck ends at grade after the pour).
+          This bridge has a dead-load deflection table: form targets, buildups and drops from the girder top include the deflection still to come, and the screed grade is the top of deck plus that
+          deflection (set high so the deck ends at grade after the pour).
         </p>
       ) : null}
 
@@ -149,11 +144,7 @@ export default function OffsetTables({ bridgeId, bents }: { bridgeId: number; be
 
       <nav aria-label="Spans" className="no-print flex flex-wrap gap-2 text-sm">
         {groups.map((g) => (
-          <a
-            key={g.span}
-            href={`#span-${g.span}`}
-            className="inline-flex min-h-11 items-center rounded-md border border-concrete-300 bg-white px-4 font-semibold text-brand-700 hover:bg-brand-50"
-          >
+          <a key={g.span} href={`#span-${g.span}`} className="inline-flex min-h-11 items-center rounded-md border border-concrete-300 bg-white px-4 font-semibold text-brand-700 hover:bg-brand-50">
             Span {g.span}
           </a>
         ))}

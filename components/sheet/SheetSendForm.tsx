@@ -27,9 +27,7 @@ export default function SheetSendForm({ bridgeId, span }: { bridgeId: number; sp
     try {
       const res = await sendJson<{ via: 'smtp' | 'outbox'; to: string[] }>(`/api/bridges/${bridgeId}/send-sheet`, 'POST', { to: list, span });
       setDone(
-        res.via === 'smtp'
-          ? `Sent to ${res.to.join(', ')}.`
-          : `Captured in the local outbox for ${res.to.join(', ')} (no mail server is configured; an administrator can read it under Outbox).`,
+        res.via === 'smtp' ? `Sent to ${res.to.join(', ')}.` : `Captured in the local outbox for ${res.to.join(', ')} (no mail server is configured; an administrator can read it under Outbox).`,
       );
       setTo('');
     } catch (err) {

@@ -15,24 +15,54 @@ export default function SheetTable({ group, units, deflections }: { group: Brack
         <table className="w-full border-collapse text-sm print:text-[10pt]">
           <thead>
             <tr className="bg-concrete-100 text-left align-bottom text-xs font-semibold uppercase tracking-wide text-concrete-700 print:bg-white">
-              <th scope="col" className="border border-concrete-300 px-2 py-1">Pt</th>
-              <th scope="col" className="border border-concrete-300 px-2 py-1">Station</th>
-              <th scope="col" className="border border-concrete-300 px-2 py-1">Edge width{units === 'ft' ? ' (ft-in)' : ' (m)'}</th>
-              {units === 'ft' ? <th scope="col" className="border border-concrete-300 px-2 py-1">Edge width (ft)</th> : null}
-              <th scope="col" className="border border-concrete-300 px-2 py-1">Level-bar reading ({units})</th>
-              <th scope="col" className="border border-concrete-300 px-2 py-1">Girder rod ({units})</th>
-              <th scope="col" className="border border-concrete-300 px-2 py-1">Form rod ({units})</th>
-              <th scope="col" className="border border-concrete-300 px-2 py-1">Extra on both ({units})</th>
-              <th scope="col" className="border border-concrete-300 px-2 py-1">Form target elev. ({units})</th>
+              <th scope="col" className="border border-concrete-300 px-2 py-1">
+                Pt
+              </th>
+              <th scope="col" className="border border-concrete-300 px-2 py-1">
+                Station
+              </th>
+              <th scope="col" className="border border-concrete-300 px-2 py-1">
+                Edge width{units === 'ft' ? ' (ft-in)' : ' (m)'}
+              </th>
+              {units === 'ft' ? (
+                <th scope="col" className="border border-concrete-300 px-2 py-1">
+                  Edge width (ft)
+                </th>
+              ) : null}
+              <th scope="col" className="border border-concrete-300 px-2 py-1">
+                Level-bar reading ({units})
+              </th>
+              <th scope="col" className="border border-concrete-300 px-2 py-1">
+                Girder rod ({units})
+              </th>
+              <th scope="col" className="border border-concrete-300 px-2 py-1">
+                Form rod ({units})
+              </th>
+              <th scope="col" className="border border-concrete-300 px-2 py-1">
+                Extra on both ({units})
+              </th>
+              <th scope="col" className="border border-concrete-300 px-2 py-1">
+                Form target elev. ({units})
+              </th>
               {withDeflections ? (
                 <>
-                  <th scope="col" className="border border-concrete-300 px-2 py-1">Deflection ({units})</th>
-                  <th scope="col" className="border border-concrete-300 px-2 py-1">Screed grade ({units})</th>
+                  <th scope="col" className="border border-concrete-300 px-2 py-1">
+                    Deflection ({units})
+                  </th>
+                  <th scope="col" className="border border-concrete-300 px-2 py-1">
+                    Screed grade ({units})
+                  </th>
                 </>
               ) : null}
-              <th scope="col" className="border border-concrete-300 px-2 py-1 bg-white">Measured width</th>
-              <th scope="col" className="border border-concrete-300 px-2 py-1 bg-white">Measured reading</th>
-              <th scope="col" className="border border-concrete-300 px-2 py-1 bg-white">OK / initials</th>
+              <th scope="col" className="border border-concrete-300 px-2 py-1 bg-white">
+                Measured width
+              </th>
+              <th scope="col" className="border border-concrete-300 px-2 py-1 bg-white">
+                Measured reading
+              </th>
+              <th scope="col" className="border border-concrete-300 px-2 py-1 bg-white">
+                OK / initials
+              </th>
             </tr>
           </thead>
           <tbody className="tabular">
@@ -42,7 +72,9 @@ export default function SheetTable({ group, units, deflections }: { group: Brack
                 <td className="border border-concrete-300 px-2 py-1 whitespace-nowrap">{stationText(r.station, units)}</td>
                 <td className="border border-concrete-300 px-2 py-1 text-right font-semibold whitespace-nowrap">{r.edge_width_text.replace(/ m$/, '')}</td>
                 {units === 'ft' ? <td className="border border-concrete-300 px-2 py-1 text-right">{num(r.edge_width)}</td> : null}
-                <td className="border border-concrete-300 px-2 py-1 text-right font-semibold">{r.reading === null ? <span className="font-normal text-concrete-500">not surveyed</span> : num(r.reading)}</td>
+                <td className="border border-concrete-300 px-2 py-1 text-right font-semibold">
+                  {r.reading === null ? <span className="font-normal text-concrete-500">not surveyed</span> : num(r.reading)}
+                </td>
                 <td className="border border-concrete-300 px-2 py-1 text-right">{num(r.girder_rod)}</td>
                 <td className="border border-concrete-300 px-2 py-1 text-right">{num(r.form_rod)}</td>
                 <td className={`border border-concrete-300 px-2 py-1 text-right ${r.extra_rod ? 'font-semibold text-caution-700' : ''}`}>{r.extra_rod === null ? '—' : num(r.extra_rod)}</td>

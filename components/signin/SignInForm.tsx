@@ -49,31 +49,13 @@ export default function SignInForm({ callbackUrl, initialError }: { callbackUrl?
         <label htmlFor="email" className="field-label">
           E-mail
         </label>
-        <input
-          id="email"
-          name="email"
-          type="email"
-          autoComplete="username"
-          required
-          value={email}
-          onChange={(e) => setEmail(e.target.value)}
-          className="field-input"
-        />
+        <input id="email" name="email" type="email" autoComplete="username" required value={email} onChange={(e) => setEmail(e.target.value)} className="field-input" />
       </div>
       <div>
         <label htmlFor="password" className="field-label">
           Password
         </label>
-        <input
-          id="password"
-          name="password"
-          type="password"
-          autoComplete="current-password"
-          required
-          value={password}
-          onChange={(e) => setPassword(e.target.value)}
-          className="field-input"
-        />
+        <input id="password" name="password" type="password" autoComplete="current-password" required value={password} onChange={(e) => setPassword(e.target.value)} className="field-input" />
       </div>
       <button type="submit" className="btn-primary w-full" disabled={busy || !email.trim() || !password}>
         {busy ? 'Signing in…' : 'Sign in'}

@@ -15,7 +15,11 @@ export default function SignInRedirect() {
   return (
     <main className="mx-auto max-w-md px-4 py-16 text-center">
       <p className="text-concrete-700">
-        Your session has ended. <a href="/signin" className="font-semibold text-brand-700 underline">Sign in</a> to continue.
+        Your session has ended.{' '}
+        <a href="/signin" className="font-semibold text-brand-700 underline">
+          Sign in
+        </a>{' '}
+        to continue.
       </p>
     </main>
   );

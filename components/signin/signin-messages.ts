@@ -1,7 +1,6 @@
 /** What the sign-in page says for each result or `?error=` code next-auth can hand back. */
 export const WRONG_CREDENTIALS = 'That e-mail and password do not match an account.';
-export const LOCKED =
-  'Too many failed sign-ins: attempts for this account or from this device are slowed down. Wait a minute and try again, or ask an administrator to reset the password.';
+export const LOCKED = 'Too many failed sign-ins: attempts for this account or from this device are slowed down. Wait a minute and try again, or ask an administrator to reset the password.';
 
 export function signInErrorText(code: string | null | undefined): string | null {
   if (!code) return null;

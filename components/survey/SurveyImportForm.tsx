@@ -29,7 +29,11 @@ export default function SurveyImportForm({ bridgeId, units }: { bridgeId: number
   const [stored, setStored] = useState<Stored | null>(null);
   const [busy, setBusy] = useState<'checking' | 'storing' | null>(null);
   // The file input works only once the page is interactive (hydrated); until then it is shown disabled.
-  const ready = useSyncExternalStore(noSubscription, () => true, () => false);
+  const ready = useSyncExternalStore(
+    noSubscription,
+    () => true,
+    () => false,
+  );
 
   async function check(name: string, text: string) {
     setBusy('checking');
@@ -90,9 +94,8 @@ export default function SurveyImportForm({ bridgeId, units }: { bridgeId: number
         Import a survey file
       </h2>
       <p className="mt-1 max-w-3xl text-sm text-concrete-700">
-        A CSV with one surveyed point per line: girder, span, point, elevation ({units}). A first line of column names is optional. Every
-        line is checked against the current revision before anything is stored; a point already surveyed gets the new value and the old
-        one is kept in its history.
+        A CSV with one surveyed point per line: girder, span, point, elevation ({units}). A first line of column names is optional. Every line is checked against the current revision before anything
+        is stored; a point already surveyed gets the new value and the old one is kept in its history.
       </p>
       <div className="mt-4">
         <label htmlFor={`${id}-file`} className="field-label">
@@ -133,11 +136,7 @@ export default function SurveyImportForm({ bridgeId, units }: { bridgeId: number
           <SurveyPreviewTable preview={preview} filename={file.name} />
           <div className="flex flex-wrap items-center gap-3">
             <button type="button" className="btn-primary min-h-11" disabled={!canStore || busy !== null} onClick={() => void onStore()}>
-              {busy === 'storing'
-                ? 'Storing…'
-                : canStore
-                  ? `Store ${preview.summary.rows} surveyed ${preview.summary.rows === 1 ? 'point' : 'points'}`
-                  : 'Nothing to store yet'}
+              {busy === 'storing' ? 'Storing…' : canStore ? `Store ${preview.summary.rows} surveyed ${preview.summary.rows === 1 ? 'point' : 'points'}` : 'Nothing to store yet'}
             </button>
             <button type="button" className="btn-secondary min-h-11" disabled={busy !== null} onClick={() => void check(file.name, file.text)}>
               Check again

@@ -7,17 +7,14 @@ export default function SurveyValuesTable({ listing }: { listing: SurveyListing 
   if (listing.values.length === 0) {
     return (
       <p className="card p-6 text-concrete-700">
-        No surveyed points are stored yet. The offset table shows buildups only where the description itself lists a top of girder; import a survey
-        file to add the rest.
+        No surveyed points are stored yet. The offset table shows buildups only where the description itself lists a top of girder; import a survey file to add the rest.
       </p>
     );
   }
   return (
     <div className="card overflow-x-auto">
       <table className="w-full text-sm">
-        <caption className="border-b border-concrete-200 bg-concrete-100 px-4 py-2 text-left font-bold text-concrete-800">
-          Stored top-of-girder elevations ({listing.values.length} points)
-        </caption>
+        <caption className="border-b border-concrete-200 bg-concrete-100 px-4 py-2 text-left font-bold text-concrete-800">Stored top-of-girder elevations ({listing.values.length} points)</caption>
         <thead className="text-concrete-600">
           <tr>
             <th scope="col" className="sticky left-0 bg-white px-3 py-2 text-left font-semibold">
@@ -51,9 +48,7 @@ export default function SurveyValuesTable({ listing }: { listing: SurveyListing 
                 {v.imported_by ?? 'a removed user'}, {dateTimeText(v.imported_at)}
               </td>
               <td className="px-3 py-1.5 text-concrete-600">
-                {v.history.length === 0
-                  ? '—'
-                  : v.history.map((h) => `${elev(h.elevation)} (${h.imported_by ?? 'a removed user'}, ${dateTimeText(h.imported_at)})`).join('; ')}
+                {v.history.length === 0 ? '—' : v.history.map((h) => `${elev(h.elevation)} (${h.imported_by ?? 'a removed user'}, ${dateTimeText(h.imported_at)})`).join('; ')}
               </td>
             </tr>
           ))}

@@ -38,12 +38,14 @@ export async function readJsonText(req: NextRequest, limit = MAX_JSON_BYTES): Pr
   if (!/^application\/json\s*(;|$)/i.test(req.headers.get('content-type') ?? '')) {
     throw new HttpError(415, 'Send the body as JSON with the header Content-Type: application/json.');
   }
-  const text = (await readBodyLimited(
-    req,
-    limit,
-    () => new HttpError(413, `The request body is larger than ${Math.round(limit / 1024)} KB.`),
-    () => new HttpError(400, 'The request has no body; send JSON.'),
-  )).toString('utf8');
+  const text = (
+    await readBodyLimited(
+      req,
+      limit,
+      () => new HttpError(413, `The request body is larger than ${Math.round(limit / 1024)} KB.`),
+      () => new HttpError(400, 'The request has no body; send JSON.'),
+    )
+  ).toString('utf8');
   if (!text.trim()) throw new HttpError(400, 'The request body is empty; send JSON.');
   return text;
 }

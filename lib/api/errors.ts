@@ -1,16 +1,5 @@
 import { NextResponse } from 'next/server';
-import {
-  ConflictError,
-  DomainError,
-  fieldErrors,
-  invalidFields,
-  NotFoundError,
-  TooLargeError,
-  UnprocessableError,
-  UnsupportedTypeError,
-  UpstreamError,
-  ValidationError,
-} from '@/lib/errors';
+import { ConflictError, DomainError, fieldErrors, invalidFields, NotFoundError, TooLargeError, UnprocessableError, UnsupportedTypeError, UpstreamError, ValidationError } from '@/lib/errors';
 
 export { fieldErrors };
 

@@ -60,8 +60,7 @@ export function authOptions(headers?: HeaderSource): NextAuthOptions {
       CredentialsProvider({
         name: 'Email and password',
         credentials: { email: { label: 'Email', type: 'email' }, password: { label: 'Password', type: 'password' } },
-        authorize: async (credentials, req) =>
-          authorizeCredentials(String(credentials?.email ?? ''), String(credentials?.password ?? ''), clientAddress(req?.headers ?? {})),
+        authorize: async (credentials, req) => authorizeCredentials(String(credentials?.email ?? ''), String(credentials?.password ?? ''), clientAddress(req?.headers ?? {})),
       }),
     ],
     callbacks: {

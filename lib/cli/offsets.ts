@@ -78,7 +78,10 @@ function main(argv: string[]): void {
   const parsed = parseBridge(json);
   if (!parsed.ok) {
     if (parsed.kind === 'geometry') failAll(file, parsed.issues);
-    failAll(file, Object.entries(parsed.fields).flatMap(([path, messages]) => messages.map((message) => ({ path, message }))));
+    failAll(
+      file,
+      Object.entries(parsed.fields).flatMap(([path, messages]) => messages.map((message) => ({ path, message }))),
+    );
   }
   let table;
   try {

@@ -24,8 +24,7 @@ async function readBody(res: Response): Promise<unknown> {
 
 function toError(res: Response, body: unknown): ApiError {
   const b = (body ?? {}) as ApiErrorBody;
-  const fallback =
-    res.status === 401 ? 'Your session has ended. Sign in again.' : `The server answered ${res.status}. Try again; if it keeps happening, tell your administrator.`;
+  const fallback = res.status === 401 ? 'Your session has ended. Sign in again.' : `The server answered ${res.status}. Try again; if it keeps happening, tell your administrator.`;
   return new ApiError(res.status, b.error ?? fallback, b.fields ?? {});
 }
 

@@ -200,9 +200,7 @@ const tansyHollow: BridgeDescription = {
   points_per_span: 10,
   chord_spaces: 20,
   // The plans' dead-load deflections (wet deck, barrier and overlay placed with it), tenth points.
-  deflections: rampGirders.flatMap((g, gi) =>
-    [1, 2, 3].map((span) => ({ girder: g.name, span, values: tenthPointDeflections(gi === 0 || gi === 4 ? 0.052 : 0.064) })),
-  ),
+  deflections: rampGirders.flatMap((g, gi) => [1, 2, 3].map((span) => ({ girder: g.name, span, values: tenthPointDeflections(gi === 0 || gi === 4 ? 0.052 : 0.064) }))),
 };
 
 /**

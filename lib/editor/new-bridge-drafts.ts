@@ -8,7 +8,6 @@ import type { ImportedAlignment } from '@/lib/import/landxml';
 import { alignmentToDraft, pvisToDraft, toDraft, type Draft, type OffsetDraft } from './draft';
 import type { Units } from '@/lib/units';
 
-
 /** The draft of the built-in starter bridge in the given units. */
 export function starterDraft(units: Units, name?: string): Draft {
   return toDraft(starterBridge(units, name) as BridgeDescription);

@@ -104,14 +104,32 @@ function drawTitleBlock(sheet: Sheet, page: number, pages: number): void {
   doc.save();
   doc.lineWidth(0.8).strokeColor('#333333').rect(box.left, top, box.width, TITLE_HEIGHT).stroke();
   const split = box.left + box.width * 0.58;
-  doc.moveTo(split, top).lineTo(split, top + TITLE_HEIGHT).stroke();
-  doc.fillColor('#555555').font(FONT.regular).fontSize(7.5).text(`CHORDLINE · ${meta.kind.toUpperCase()}`, box.left + 6, top + 5, { lineBreak: false });
-  doc.fillColor('#000000').font(FONT.bold).fontSize(13).text(meta.bridgeName, box.left + 6, top + 15, { width: split - box.left - 12, height: 17, ellipsis: true, lineBreak: false });
+  doc
+    .moveTo(split, top)
+    .lineTo(split, top + TITLE_HEIGHT)
+    .stroke();
+  doc
+    .fillColor('#555555')
+    .font(FONT.regular)
+    .fontSize(7.5)
+    .text(`CHORDLINE · ${meta.kind.toUpperCase()}`, box.left + 6, top + 5, { lineBreak: false });
+  doc
+    .fillColor('#000000')
+    .font(FONT.bold)
+    .fontSize(13)
+    .text(meta.bridgeName, box.left + 6, top + 15, { width: split - box.left - 12, height: 17, ellipsis: true, lineBreak: false });
   const second = [meta.structureNumber ? `Structure no. ${meta.structureNumber}` : null, meta.subtitle ?? null].filter(Boolean).join(' · ');
-  if (second) doc.font(FONT.regular).fontSize(9).text(second, box.left + 6, top + 34, { width: split - box.left - 12, lineBreak: false });
+  if (second)
+    doc
+      .font(FONT.regular)
+      .fontSize(9)
+      .text(second, box.left + 6, top + 34, { width: split - box.left - 12, lineBreak: false });
   const rx = split + 6;
   const rw = box.left + box.width - rx - 6;
-  doc.font(FONT.bold).fontSize(9).text(`Revision ${meta.revision}`, rx, top + 5, { width: rw, lineBreak: false });
+  doc
+    .font(FONT.bold)
+    .fontSize(9)
+    .text(`Revision ${meta.revision}`, rx, top + 5, { width: rw, lineBreak: false });
   doc.font(FONT.regular).fontSize(8.5);
   doc.text(`of ${meta.revisionDate}`, rx, top + 17, { width: rw, lineBreak: false });
   doc.text(`Units: ${meta.unitsText}`, rx, top + 29, { width: rw, height: 11, ellipsis: true, lineBreak: false });
@@ -123,7 +141,12 @@ function drawFoot(sheet: Sheet): void {
   const { doc, box, meta } = sheet;
   const y = box.bottom + 8;
   doc.save();
-  doc.lineWidth(0.5).strokeColor('#999999').moveTo(box.left, y - 3).lineTo(box.left + box.width, y - 3).stroke();
+  doc
+    .lineWidth(0.5)
+    .strokeColor('#999999')
+    .moveTo(box.left, y - 3)
+    .lineTo(box.left + box.width, y - 3)
+    .stroke();
   doc.fillColor('#333333').font(FONT.regular).fontSize(7.5);
   doc.text(FOOT_CAUTION, box.left, y, { width: box.width * 0.75, lineBreak: false });
   doc.text(`Made ${meta.printedAt}`, box.left + box.width * 0.75, y, { width: box.width * 0.25, align: 'right', lineBreak: false });
@@ -176,7 +199,14 @@ export function cautionBox(sheet: Sheet, caution: string): void {
   ensureRoom(sheet, height);
   const y = doc.y;
   doc.save().lineWidth(1).strokeColor('#b45309').fillColor('#fff7e6').rect(box.left, y, box.width, height).fillAndStroke().restore();
-  doc.fillColor('#92400e').font(FONT.bold).fontSize(8.5).text('CAUTION: GEOMETRY ONLY', box.left + 8, y + 6, { lineBreak: false });
-  doc.fillColor('#000000').font(FONT.regular).text(caution, box.left + 8, y + 17, { width: box.width - 16 });
+  doc
+    .fillColor('#92400e')
+    .font(FONT.bold)
+    .fontSize(8.5)
+    .text('CAUTION: GEOMETRY ONLY', box.left + 8, y + 6, { lineBreak: false });
+  doc
+    .fillColor('#000000')
+    .font(FONT.regular)
+    .text(caution, box.left + 8, y + 17, { width: box.width - 16 });
   doc.y = y + height + 8;
 }

@@ -35,7 +35,11 @@ function widths(sheet: Sheet, columns: PdfColumn[]): number[] {
 
 function caption(sheet: Sheet, table: PdfTable, continued: boolean): void {
   const { doc, box } = sheet;
-  doc.fillColor('#000000').font(FONT.bold).fontSize(10).text(`${table.caption}${continued ? ' (continued)' : ''}`, box.left, doc.y, { width: box.width, lineBreak: false });
+  doc
+    .fillColor('#000000')
+    .font(FONT.bold)
+    .fontSize(10)
+    .text(`${table.caption}${continued ? ' (continued)' : ''}`, box.left, doc.y, { width: box.width, lineBreak: false });
   doc.y += 13;
   if (table.note && !continued) {
     doc.font(FONT.regular).fontSize(8).fillColor('#333333').text(table.note, box.left, doc.y, { width: box.width, lineBreak: false });
@@ -65,7 +69,10 @@ function rule(sheet: Sheet, y: number, height: number, w: number[]): void {
   let x = box.left;
   for (let i = 0; i < w.length - 1; i++) {
     x += w[i];
-    doc.moveTo(x, y).lineTo(x, y + height).stroke();
+    doc
+      .moveTo(x, y)
+      .lineTo(x, y + height)
+      .stroke();
   }
   doc.restore();
 }
@@ -94,9 +101,17 @@ export function drawTable(sheet: Sheet, table: PdfTable): void {
     let x = box.left;
     table.columns.forEach((c, i) => {
       if (c.blank) {
-        doc.save().fillColor('#ffffff').rect(x + 0.5, y + 0.5, w[i] - 1, ROW - 1).fill().restore();
+        doc
+          .save()
+          .fillColor('#ffffff')
+          .rect(x + 0.5, y + 0.5, w[i] - 1, ROW - 1)
+          .fill()
+          .restore();
       } else {
-        doc.font(c.bold ? FONT.bold : FONT.regular).fontSize(FONT_SIZE).fillColor('#000000');
+        doc
+          .font(c.bold ? FONT.bold : FONT.regular)
+          .fontSize(FONT_SIZE)
+          .fillColor('#000000');
         doc.text(cells[i] ?? '', x + 3, y + 2.5, { width: w[i] - 6, align: c.align ?? 'right', lineBreak: false });
       }
       x += w[i];

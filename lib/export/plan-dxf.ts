@@ -33,7 +33,11 @@ const on = (layerName: Layer) => ({ layerName });
 function polyline(dxf: DxfWriter, points: PlanPoint[], layer: Layer): void {
   if (points.length < 2) return;
   if (points.length === 2) dxf.addLine(point3d(points[0].x, points[0].y), point3d(points[1].x, points[1].y), on(layer));
-  else dxf.addLWPolyline(points.map((p) => ({ point: { x: p.x, y: p.y } })), on(layer));
+  else
+    dxf.addLWPolyline(
+      points.map((p) => ({ point: { x: p.x, y: p.y } })),
+      on(layer),
+    );
 }
 
 function text(dxf: DxfWriter, at: PlanPoint, height: number, value: string, rotation = 0): void {

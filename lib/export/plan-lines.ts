@@ -125,7 +125,15 @@ function girderLines(bridge: BridgeDescription, al: Alignment, table: OffsetTabl
     const last = rows[rows.length - 1];
     const layout = layouts.get(first.girder) ?? 'chord';
     if (layout === 'chord') {
-      out.push({ name: first.girder, span: first.span, layout, points: [{ x: first.x, y: first.y }, { x: last.x, y: last.y }] });
+      out.push({
+        name: first.girder,
+        span: first.span,
+        layout,
+        points: [
+          { x: first.x, y: first.y },
+          { x: last.x, y: last.y },
+        ],
+      });
       continue;
     }
     // Curved: station and offset linear between the girder's points on the two bent lines (data contract).

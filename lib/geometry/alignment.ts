@@ -9,7 +9,6 @@ import { edgeSpecOffsetAt, edgeSpecSlopeAt, isConstantEdge, type EdgeOffsetSpec 
 import { layOutSpiral, spiralBox, spiralCurvature, spiralFoot, spiralPoint, type SpiralShape } from './spiral';
 import { PARALLEL_SLOPE, residualAccepted, stepConverged } from './tolerance';
 
-
 /** A straight tangent of `length` (length units of the bridge). */
 export interface LineElementInput {
   type: 'line';
@@ -502,13 +501,7 @@ export class SolveError extends Error {}
  * @param target signed offset (length units, positive right) or a flared edge's station/offset list.
  * @throws SolveError when the ray runs parallel to the offset lines or does not converge.
  */
-export function distanceAlongRayToOffset(
-  alignment: Alignment,
-  origin: PlanPoint,
-  direction: PlanPoint,
-  target: EdgeOffsetSpec,
-  firstGuess = 0,
-): number {
+export function distanceAlongRayToOffset(alignment: Alignment, origin: PlanPoint, direction: PlanPoint, target: EdgeOffsetSpec, firstGuess = 0): number {
   const flat = typeof target === 'number' ? target : isConstantEdge(target) ? target[0].offset : null;
   // Coordinates carry rounding in proportion to their size (state-plane eastings run to millions), so
   // the step that counts as converged grows with them; Newton's last step is then far below 1e-6.
@@ -570,12 +563,7 @@ function bisect(residual: (t: number) => number, lo: number, hi: number, scale: 
  * straight in plan while the offset is measured normal to the curve, so the point is solved numerically.
  * @returns the plan point with the station and offset found by the inverse at that point.
  */
-export function pointOnSkewedLine(
-  alignment: Alignment,
-  station: number,
-  skewDeg: number,
-  offset: EdgeOffsetSpec,
-): PlanPoint & { station: number; offset: number } {
+export function pointOnSkewedLine(alignment: Alignment, station: number, skewDeg: number, offset: EdgeOffsetSpec): PlanPoint & { station: number; offset: number } {
   const base = alignment.pointAt(station);
   const lineBearing = skewedLineBearing(base.bearing, skewDeg);
   const dir = directionOf(lineBearing);

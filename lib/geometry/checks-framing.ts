@@ -77,7 +77,12 @@ export function checkCurveOffsets(bridge: BridgeDescription, issues: GeometryIss
     }
     bridge.girders.forEach((g, gi) => {
       g.offsets.forEach((o, b) => {
-        if (inside(o)) issues.push({ path: `girders.${gi}.offsets.${b}`, girder: g.name, message: `Girder ${g.name}: the offset ${len(Math.abs(o))} at bent ${b + 1} is on the inside of the curve and not smaller than ${what}` });
+        if (inside(o))
+          issues.push({
+            path: `girders.${gi}.offsets.${b}`,
+            girder: g.name,
+            message: `Girder ${g.name}: the offset ${len(Math.abs(o))} at bent ${b + 1} is on the inside of the curve and not smaller than ${what}`,
+          });
       });
     });
   });
@@ -90,12 +95,16 @@ export function checkCounts(bridge: BridgeDescription, issues: GeometryIssue[]):
   if (!Number.isInteger(n) || n < 1 || n > maxN) issues.push({ path: 'points_per_span', message: `points_per_span: must be a whole number from 1 to ${maxN}, both included (found ${n})` });
   const m = bridge.chord_spaces;
   const maxM = SIZE_LIMITS.chordSpaces;
-  if (m !== undefined && (!Number.isInteger(m) || m < 1 || m > maxM)) issues.push({ path: 'chord_spaces', message: `chord_spaces: must be a whole number from 1 to ${maxM}, both included (found ${m})` });
+  if (m !== undefined && (!Number.isInteger(m) || m < 1 || m > maxM))
+    issues.push({ path: 'chord_spaces', message: `chord_spaces: must be a whole number from 1 to ${maxM}, both included (found ${m})` });
   // Bound the work one description can ask for, so hostile input cannot tie up the server.
   const spans = Math.max(0, bridge.bents.length - 1);
   const girderPoints = bridge.girders.length * spans * (Number.isInteger(n) ? n + 1 : 0);
   if (girderPoints > MAX_GIRDER_POINTS) {
-    issues.push({ path: 'points_per_span', message: `This description asks for ${girderPoints} girder points (girders × spans × points); the limit is ${MAX_GIRDER_POINTS}. Use fewer points per span.` });
+    issues.push({
+      path: 'points_per_span',
+      message: `This description asks for ${girderPoints} girder points (girders × spans × points); the limit is ${MAX_GIRDER_POINTS}. Use fewer points per span.`,
+    });
   }
   const chordPoints = 2 * spans * ((m ?? DEFAULT_CHORD_SPACES) + 1);
   if (chordPoints > MAX_CHORD_POINTS) {

@@ -42,7 +42,10 @@ export function checkAlignment(bridge: BridgeDescription, issues: GeometryIssue[
     } else if (r1 !== null && r2 !== null && r1 === r2) {
       issues.push({ path: `${path}.radius_end`, message: `${path}.radius_end: a spiral with equal radii (${len(r1)}) is a circular arc; use an arc element` });
     }
-    for (const [key, r] of [['radius_start', r1], ['radius_end', r2]] as const) {
+    for (const [key, r] of [
+      ['radius_start', r1],
+      ['radius_end', r2],
+    ] as const) {
       if (r !== null && !(r > 0)) issues.push({ path: `${path}.${key}`, message: `${path}.${key}: a spiral radius must be greater than zero or null (infinite) (found ${r})` });
     }
   });
@@ -154,7 +157,10 @@ export function checkDeckEdges(bridge: BridgeDescription, issues: GeometryIssue[
     if (typeof spec === 'number') continue;
     spec.forEach((r, i) => {
       if (i > 0 && !(r.station > spec[i - 1].station)) {
-        issues.push({ path: `deck.${side}_edge_offset.${i}.station`, message: `deck.${side}_edge_offset.${i}.station: ${sta(r.station)} must be up-station of the row before (${sta(spec[i - 1].station)})` });
+        issues.push({
+          path: `deck.${side}_edge_offset.${i}.station`,
+          message: `deck.${side}_edge_offset.${i}.station: ${sta(r.station)} must be up-station of the row before (${sta(spec[i - 1].station)})`,
+        });
       }
     });
   }
@@ -165,7 +171,10 @@ export function checkDeckEdges(bridge: BridgeDescription, issues: GeometryIssue[
   const crossing = stations.findIndex((_, i) => !(left[i] < right[i]));
   if (crossing >= 0) {
     const at = stations.length > 1 || typeof d.left_edge_offset !== 'number' || typeof d.right_edge_offset !== 'number' ? ` at ${sta(stations[crossing])}` : '';
-    issues.push({ path: 'deck.left_edge_offset', message: `The left edge offset (${len(left[crossing])}) must be left of (less than) the right edge offset (${len(right[crossing])})${at}: the deck edges touch or cross` });
+    issues.push({
+      path: 'deck.left_edge_offset',
+      message: `The left edge offset (${len(left[crossing])}) must be left of (less than) the right edge offset (${len(right[crossing])})${at}: the deck edges touch or cross`,
+    });
     return;
   }
   if (stations.some((_, i) => !(left[i] + d.left_barrier_width < right[i] - d.right_barrier_width))) {
@@ -182,9 +191,15 @@ function checkBarrierOverAlignment(bridge: BridgeDescription, stations: number[]
   const lw = d.left_barrier_width;
   const rw = d.right_barrier_width;
   if (lw > 0 && runs(left).some(([lo, hi]) => lo < 0 && hi > -lw)) {
-    issues.push({ path: 'deck.left_barrier_width', message: `deck.left_barrier_width: the left barrier (${len(lw)} wide) reaches over the alignment, the left edge being only ${len(Math.abs(Math.max(...left.filter((v) => v < 0), -lw)))} to its left` });
+    issues.push({
+      path: 'deck.left_barrier_width',
+      message: `deck.left_barrier_width: the left barrier (${len(lw)} wide) reaches over the alignment, the left edge being only ${len(Math.abs(Math.max(...left.filter((v) => v < 0), -lw)))} to its left`,
+    });
   }
   if (rw > 0 && runs(right).some(([lo, hi]) => lo < rw && hi > 0)) {
-    issues.push({ path: 'deck.right_barrier_width', message: `deck.right_barrier_width: the right barrier (${len(rw)} wide) reaches over the alignment, the right edge being only ${len(Math.min(...right.filter((v) => v > 0), rw))} to its right` });
+    issues.push({
+      path: 'deck.right_barrier_width',
+      message: `deck.right_barrier_width: the right barrier (${len(rw)} wide) reaches over the alignment, the right edge being only ${len(Math.min(...right.filter((v) => v > 0), rw))} to its right`,
+    });
   }
 }

@@ -13,13 +13,7 @@ import type { ChordOffsetSet } from '@/lib/geometry/types';
  * positive when the edge lies outward of the chord (away from the alignment).
  * @param chordDirection plan direction Ea → Eb (up-station).
  */
-export function chordOffsetAt(
-  alignment: Alignment,
-  chordPoint: PlanPoint,
-  chordDirection: PlanPoint,
-  side: 'left' | 'right',
-  edgeOffset: EdgeOffsetSpec,
-): number {
+export function chordOffsetAt(alignment: Alignment, chordPoint: PlanPoint, chordDirection: PlanPoint, side: 'left' | 'right', edgeOffset: EdgeOffsetSpec): number {
   return distanceAlongRayToOffset(alignment, chordPoint, outwardNormal(chordDirection, side), edgeOffset, 0);
 }
 
@@ -28,15 +22,7 @@ export function chordOffsetAt(
  * line at each division point i = 0..m, `distance` along the chord from Ea.
  * @param ea, eb the edge line's points on the span's two bent lines.
  */
-export function chordOffsetSet(
-  alignment: Alignment,
-  span: number,
-  side: 'left' | 'right',
-  ea: PlanPoint,
-  eb: PlanPoint,
-  edgeOffset: EdgeOffsetSpec,
-  spaces: number,
-): ChordOffsetSet {
+export function chordOffsetSet(alignment: Alignment, span: number, side: 'left' | 'right', ea: PlanPoint, eb: PlanPoint, edgeOffset: EdgeOffsetSpec, spaces: number): ChordOffsetSet {
   const dx = eb.x - ea.x;
   const dy = eb.y - ea.y;
   const chordLength = Math.hypot(dx, dy);
@@ -55,13 +41,7 @@ export function chordOffsetSet(
  * positive when the edge bows outward). On a single arc of radius R with central angle Δ this is
  * R(1 − cos(Δ/2)).
  */
-export function edgeMiddleOrdinate(
-  alignment: Alignment,
-  ea: PlanPoint,
-  eb: PlanPoint,
-  side: 'left' | 'right',
-  edgeOffset: EdgeOffsetSpec,
-): number {
+export function edgeMiddleOrdinate(alignment: Alignment, ea: PlanPoint, eb: PlanPoint, side: 'left' | 'right', edgeOffset: EdgeOffsetSpec): number {
   const dir = { x: eb.x - ea.x, y: eb.y - ea.y };
   const mid = { x: (ea.x + eb.x) / 2, y: (ea.y + eb.y) / 2 };
   return chordOffsetAt(alignment, mid, dir, side, edgeOffset);

@@ -44,8 +44,7 @@ export function offsetTableToCsv(table: OffsetTable, options: CsvOptions = {}): 
   const style: DisplayStyle = metric ? 'metric' : options.style === 'feet-inches' ? 'feet-inches' : 'decimal-feet';
   const elevationUnit = metric ? 'm' : 'ft';
   const lengthUnit = metric ? 'm' : style === 'feet-inches' ? 'ft_in' : 'ft';
-  const length = (v: number | null) =>
-    v === null ? '' : metric ? formatMetres(v) : style === 'feet-inches' ? formatFeetInches(v) : formatFeet(v);
+  const length = (v: number | null) => (v === null ? '' : metric ? formatMetres(v) : style === 'feet-inches' ? formatFeetInches(v) : formatFeet(v));
   const elevation = (v: number | null) => (v === null ? '' : metric ? formatMetres(v) : formatFeet(v));
   const header = [
     'span',

@@ -89,12 +89,7 @@ export function formatStation(station: number, units: 'ft' | 'm'): string {
  */
 export function formatOffset(offset: number, units: 'ft' | 'm', style: DisplayStyle = 'decimal-feet'): string {
   const magnitude = Math.abs(offset);
-  const text =
-    units === 'm'
-      ? formatMetres(magnitude)
-      : style === 'feet-inches'
-        ? formatFeetInches(magnitude)
-        : formatFeet(magnitude);
+  const text = units === 'm' ? formatMetres(magnitude) : style === 'feet-inches' ? formatFeetInches(magnitude) : formatFeet(magnitude);
   if (/^0(\.0+)?$/.test(text) || text === `0'-0"`) return text;
   return `${text} ${offset < 0 ? 'LT' : 'RT'}`;
 }

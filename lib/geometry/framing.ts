@@ -47,13 +47,7 @@ export function bentLinePoint(alignment: Alignment, bent: BentInput, offset: Edg
  * @param pa, pb the girder's points on the span's first and second bent lines.
  * @param n points per span (≥ 1).
  */
-export function girderPoints(
-  alignment: Alignment,
-  layout: 'chord' | 'curved',
-  pa: LocatedPoint,
-  pb: LocatedPoint,
-  n: number,
-): GirderPoint[] {
+export function girderPoints(alignment: Alignment, layout: 'chord' | 'curved', pa: LocatedPoint, pb: LocatedPoint, n: number): GirderPoint[] {
   const points: GirderPoint[] = new Array(n + 1);
   for (let k = 0; k <= n; k++) {
     const f = k / n;

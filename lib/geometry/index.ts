@@ -17,34 +17,11 @@ export {
   type SpiralElementDescription,
   SIZE_LIMITS,
 } from './schema';
-export {
-  edgeOffsetAt,
-  edgeSpecOffsetAt,
-  isConstantEdge,
-  type DeckEdgeSpecs,
-  type EdgeOffsetSpec,
-  type EdgeStationOffset,
-} from './deck-edges';
+export { edgeOffsetAt, edgeSpecOffsetAt, isConstantEdge, type DeckEdgeSpecs, type EdgeOffsetSpec, type EdgeStationOffset } from './deck-edges';
 export { parseBridge, parseBridgeSchema, validateGeometry, MAX_GIRDER_POINTS, MAX_CHORD_POINTS, type ParseBridgeResult } from './validate';
 export { GeometryError, type GeometryIssue } from './errors';
-export {
-  formatFeet,
-  formatFeetFine,
-  formatFeetInches,
-  formatLength,
-  formatMetres,
-  formatOffset,
-  formatStation,
-  type DisplayStyle,
-} from './format';
-export {
-  thermalBow,
-  thermalBowInches,
-  STEEL_EXPANSION_PER_F,
-  CONCRETE_EXPANSION_PER_F,
-  STEEL_EXPANSION_PER_C,
-  CONCRETE_EXPANSION_PER_C,
-} from './thermal';
+export { formatFeet, formatFeetFine, formatFeetInches, formatLength, formatMetres, formatOffset, formatStation, type DisplayStyle } from './format';
+export { thermalBow, thermalBowInches, STEEL_EXPANSION_PER_F, CONCRETE_EXPANSION_PER_F, STEEL_EXPANSION_PER_C, CONCRETE_EXPANSION_PER_C } from './thermal';
 export { offsetTableToCsv, csvCell, type CsvOptions } from './csv';
 export {
   Alignment,

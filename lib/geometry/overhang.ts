@@ -34,13 +34,7 @@ export function outwardNormal(direction: PlanPoint, side: 'left' | 'right'): Pla
  * @param girderDirection plan direction of the girder (Pa → Pb), any length.
  * @param edgeOffset the edge: a signed offset (length units, positive right) or a flared station/offset list.
  */
-export function chordEdgePoint(
-  alignment: Alignment,
-  pk: GirderPoint,
-  girderDirection: PlanPoint,
-  side: 'left' | 'right',
-  edgeOffset: EdgeOffsetSpec,
-): EdgePoint {
+export function chordEdgePoint(alignment: Alignment, pk: GirderPoint, girderDirection: PlanPoint, side: 'left' | 'right', edgeOffset: EdgeOffsetSpec): EdgePoint {
   const w = outwardNormal(girderDirection, side);
   const here = edgeSpecOffsetAt(edgeOffset, pk.station);
   const guess = side === 'left' ? pk.offset - here : here - pk.offset;

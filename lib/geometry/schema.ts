@@ -5,8 +5,7 @@
  */
 import { z } from 'zod';
 
-const finite = (what: string) =>
-  z.number({ error: (iss) => (iss.input === undefined ? `${what} is required` : `${what} must be a finite number`) });
+const finite = (what: string) => z.number({ error: (iss) => (iss.input === undefined ? `${what} is required` : `${what} must be a finite number`) });
 
 const positive = (what: string) => finite(what).gt(0, { error: `${what} must be greater than zero` });
 const nonNegative = (what: string) => finite(what).min(0, { error: `${what} must not be negative` });
@@ -100,9 +99,7 @@ const deckSchema = z.looseObject({
 const bentSchema = z.looseObject({
   name: z.string({ error: 'Bent name must be text' }).min(1, { error: 'Bent name is required' }),
   station: finite('Bent station'),
-  skew_deg: finite('Bent skew')
-    .gt(-90, { error: 'Bent skew must be strictly between -90 and 90 degrees' })
-    .lt(90, { error: 'Bent skew must be strictly between -90 and 90 degrees' }),
+  skew_deg: finite('Bent skew').gt(-90, { error: 'Bent skew must be strictly between -90 and 90 degrees' }).lt(90, { error: 'Bent skew must be strictly between -90 and 90 degrees' }),
 });
 
 const girderSchema = z.looseObject({

@@ -91,7 +91,10 @@ export function sizeProblems(json: unknown): GeometryIssue[] {
     });
     over('deflections', b.deflections.length, SIZE_LIMITS.girders * SIZE_LIMITS.bents, 'deflection tables');
   }
-  for (const [key, limit] of [['points_per_span', SIZE_LIMITS.pointsPerSpan], ['chord_spaces', SIZE_LIMITS.chordSpaces]] as const) {
+  for (const [key, limit] of [
+    ['points_per_span', SIZE_LIMITS.pointsPerSpan],
+    ['chord_spaces', SIZE_LIMITS.chordSpaces],
+  ] as const) {
     const v = b[key];
     if (typeof v === 'number' && v > limit) out.push({ path: key, message: `${key}: ${v} is above ${limit}; from 1 to ${limit} (both included) are accepted` });
   }

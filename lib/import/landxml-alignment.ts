@@ -109,14 +109,19 @@ export function readHorizontal(node: XmlNode, where: string, cg: Map<string, str
     if (gap > JOIN_TOLERANCE) problems.push({ station: stations[i], text: `${at}: element ${i + 1} does not start where element ${i} ends (a gap of ${fmt(gap)}).` });
     const kink = angleDiff(a.bearingOut, b.bearingIn);
     if (Math.abs(kink) > TANGENCY_TOLERANCE) {
-      problems.push({ station: stations[i], text: `${at}: the elements are not tangent (the direction changes by ${degrees(Math.abs(kink)).toFixed(4)}° at the join); Chordline lays elements tangent end to end.` });
+      problems.push({
+        station: stations[i],
+        text: `${at}: the elements are not tangent (the direction changes by ${degrees(Math.abs(kink)).toFixed(4)}° at the join); Chordline lays elements tangent end to end.`,
+      });
     }
     const spiralJoin = (a.element.type === 'spiral' && b.element.type === 'arc') || (a.element.type === 'arc' && b.element.type === 'spiral');
     if (spiralJoin) {
       const ka = curvatureAt(a.element, 'end');
       const kb = curvatureAt(b.element, 'start');
       if (Math.abs(ka - kb) > CURVATURE_MISMATCH * Math.max(Math.abs(ka), Math.abs(kb))) {
-        notes.push(`${at}: the curvature jumps from radius ${fmt(1 / Math.abs(ka))} to ${fmt(1 / Math.abs(kb))}${Math.sign(ka) !== Math.sign(kb) ? ' (and changes direction)' : ''}; check the spiral's radius against the arc's.`);
+        notes.push(
+          `${at}: the curvature jumps from radius ${fmt(1 / Math.abs(ka))} to ${fmt(1 / Math.abs(kb))}${Math.sign(ka) !== Math.sign(kb) ? ' (and changes direction)' : ''}; check the spiral's radius against the arc's.`,
+        );
       }
     }
   }

@@ -24,7 +24,11 @@ export interface Pt {
 export const TWO_PI = 2 * Math.PI;
 
 export function numbersIn(text: string): number[] {
-  return text.trim().split(/[\s,]+/).filter(Boolean).map(Number);
+  return text
+    .trim()
+    .split(/[\s,]+/)
+    .filter(Boolean)
+    .map(Number);
 }
 
 /** A numeric attribute, undefined when absent or blank; a problem when it is not a number. */

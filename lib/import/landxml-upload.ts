@@ -56,7 +56,9 @@ function slim(a: ImportedAlignment): ImportedAlignment {
       start_bearing_deg: a.alignment.start_bearing_deg,
       elements: a.alignment.elements.map(slimElement),
     },
-    profile: a.profile ? { pvis: a.profile.pvis.map((p) => (p.curve_length ? { station: p.station, elevation: p.elevation, curve_length: p.curve_length } : { station: p.station, elevation: p.elevation })) } : null,
+    profile: a.profile
+      ? { pvis: a.profile.pvis.map((p) => (p.curve_length ? { station: p.station, elevation: p.elevation, curve_length: p.curve_length } : { station: p.station, elevation: p.elevation })) }
+      : null,
     profile_name: a.profile_name,
     profile_left_out: a.profile_left_out ? [...a.profile_left_out] : null,
     notes: [...a.notes],

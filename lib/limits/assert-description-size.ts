@@ -8,6 +8,9 @@ import { descriptionSizeProblems, shortProblemBody } from './description-size';
 export function assertDescriptionSize(json: unknown, fieldPrefix = 'description'): void {
   const problems = descriptionSizeProblems(json);
   if (!problems.length) return;
-  const body = shortProblemBody(`This description is larger than any bridge: ${problems[0].message}`, problems.map((p) => ({ ...p, path: fieldPrefix === '_' ? p.path : `${fieldPrefix}.${p.path}` })));
+  const body = shortProblemBody(
+    `This description is larger than any bridge: ${problems[0].message}`,
+    problems.map((p) => ({ ...p, path: fieldPrefix === '_' ? p.path : `${fieldPrefix}.${p.path}` })),
+  );
   throw new HttpError(422, body.error, body.fields);
 }

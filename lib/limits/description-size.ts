@@ -83,9 +83,7 @@ export function nestedDeeperThan(value: unknown, limit = MAX_JSON_DEPTH): boolea
  * and how many there were in all, so a hostile input cannot make the answer large.
  */
 export function shortProblemBody(error: string, problems: SizeProblem[] | Record<string, string[]>): { error: string; fields: Record<string, string[]>; problem_count: number } {
-  const entries: [string, string[]][] = Array.isArray(problems)
-    ? problems.map((p) => [p.path, [p.message]] as [string, string[]])
-    : Object.entries(problems);
+  const entries: [string, string[]][] = Array.isArray(problems) ? problems.map((p) => [p.path, [p.message]] as [string, string[]]) : Object.entries(problems);
   const total = entries.reduce((n, [, v]) => n + v.length, 0);
   const fields: Record<string, string[]> = {};
   let listed = 0;

@@ -49,12 +49,7 @@ function toJson(a: Attachment, by: string | null): AttachmentJson {
 
 /** The text fields sent beside the file. */
 const uploadFieldsSchema = z.object({
-  check_id: z
-    .string()
-    .trim()
-    .regex(/^\d+$/, 'check_id must be the number of a check of this bridge.')
-    .transform(Number)
-    .optional(),
+  check_id: z.string().trim().regex(/^\d+$/, 'check_id must be the number of a check of this bridge.').transform(Number).optional(),
   caption: z.string().transform(cleanText).pipe(z.string().max(300, 'Keep the caption under 300 characters.')).optional().default(''),
   client_key: z
     .string()
@@ -118,14 +113,7 @@ export async function uploadAttachment(user: SessionUser, bridgeId: string, req:
         },
         { transaction },
       );
-      await audit(
-        user.id,
-        'attachment.create',
-        'bridge',
-        bridge.id,
-        { attachment: a.id, check: a.checkId, name: a.originalName, content_type: a.contentType, size: a.size },
-        transaction,
-      );
+      await audit(user.id, 'attachment.create', 'bridge', bridge.id, { attachment: a.id, check: a.checkId, name: a.originalName, content_type: a.contentType, size: a.size }, transaction);
       await markFieldActivity(bridge.id, transaction);
       return a;
     });

@@ -17,7 +17,10 @@ export const bridgeListQuerySchema = z.object({
   stage: z.enum(STAGES, { error: `stage must be one of ${STAGES.join(', ')}.` }).optional(),
   district: z.string().trim().max(120, 'Keep the district under 120 characters.').optional(),
   attention: z.enum(['failures', 'signoff'], { error: 'attention must be failures or signoff.' }).optional(),
-  sort: z.enum(SORTS, { error: `sort must be one of ${SORTS.join(', ')}.` }).optional().default('activity'),
+  sort: z
+    .enum(SORTS, { error: `sort must be one of ${SORTS.join(', ')}.` })
+    .optional()
+    .default('activity'),
   limit: z
     .string()
     .regex(/^\d{1,4}$/, `limit must be a whole number from 1 to ${MAX_LIMIT}.`)

@@ -67,10 +67,7 @@ export async function writeStatus(bridge: Bridge, table: OffsetTable, transactio
   ]);
   const counts = statusCounts(table, checks, signoffs, bridge.currentRevision);
   const now = new Date();
-  await Bridge.update(
-    { ...counts, activityAt: now, ...(options.fieldWork ? { lastFieldAt: now } : {}) },
-    { where: { id: bridge.id }, transaction },
-  );
+  await Bridge.update({ ...counts, activityAt: now, ...(options.fieldWork ? { lastFieldAt: now } : {}) }, { where: { id: bridge.id }, transaction });
   return counts;
 }
 

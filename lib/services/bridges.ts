@@ -14,10 +14,7 @@ import { bridgeRecordSchema, recordAttributes, recordOf, RECORD_KEYS, type Bridg
 import { markActivity, refreshStatus } from './bridge-status';
 import { listBridgePage, MAX_LIMIT, type BridgeRow } from './bridge-list';
 
-export const bridgeNameSchema = z
-  .string({ error: 'Give the bridge a name.' })
-  .transform(cleanName)
-  .pipe(z.string().min(1, 'Give the bridge a name.').max(200, 'Keep the name under 200 characters.'));
+export const bridgeNameSchema = z.string({ error: 'Give the bridge a name.' }).transform(cleanName).pipe(z.string().min(1, 'Give the bridge a name.').max(200, 'Keep the name under 200 characters.'));
 
 export const createBridgeSchema = bridgeRecordSchema.extend({ name: bridgeNameSchema, description: z.unknown() });
 /** PATCH body: a new name and/or any field of the bridge record; at least one. */
@@ -55,10 +52,7 @@ export async function createBridge(user: SessionUser, input: z.infer<typeof crea
   const sequelize = await db();
   const bridge = await sequelize.transaction(async (transaction) => {
     const created = await Bridge.create({ name: input.name, units: description.units, currentRevision: 1, ...recordAttributes(input) }, { transaction });
-    await GeometryRevision.create(
-      { bridgeId: created.id, revision: 1, description: JSON.stringify(description), authorId: user.id, note: 'Created' },
-      { transaction },
-    );
+    await GeometryRevision.create({ bridgeId: created.id, revision: 1, description: JSON.stringify(description), authorId: user.id, note: 'Created' }, { transaction });
     await audit(user.id, 'bridge.create', 'bridge', created.id, { name: created.name }, transaction);
     return created;
   });
@@ -136,19 +130,12 @@ export async function createRevision(user: SessionUser, id: string, input: z.inf
   }
   const next = input.base_revision + 1;
   const sequelize = await db();
-  const stale = () =>
-    new ConflictError(`Revision ${input.base_revision} is no longer the latest. Reload the bridge to see the newer revision, then make your change again.`);
+  const stale = () => new ConflictError(`Revision ${input.base_revision} is no longer the latest. Reload the bridge to see the newer revision, then make your change again.`);
   try {
     await sequelize.transaction(async (transaction) => {
-      const [count] = await Bridge.update(
-        { currentRevision: next },
-        { where: { id: bridge.id, currentRevision: { [Op.eq]: input.base_revision } }, transaction },
-      );
+      const [count] = await Bridge.update({ currentRevision: next }, { where: { id: bridge.id, currentRevision: { [Op.eq]: input.base_revision } }, transaction });
       if (count !== 1) throw stale();
-      await GeometryRevision.create(
-        { bridgeId: bridge.id, revision: next, description: JSON.stringify(description), authorId: user.id, note: input.note },
-        { transaction },
-      );
+      await GeometryRevision.create({ bridgeId: bridge.id, revision: next, description: JSON.stringify(description), authorId: user.id, note: input.note }, { transaction });
       await audit(user.id, 'revision.create', 'bridge', bridge.id, { revision: next }, transaction);
     });
   } catch (err) {

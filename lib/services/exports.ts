@@ -32,7 +32,10 @@ const spanParam = z
 
 /** Query of the offsets PDF: `style` as on screen (decimal-feet when absent), `paper` (by units when absent). */
 export const offsetsPdfQuerySchema = z.object({
-  style: z.enum(STYLES, { error: `style must be one of ${STYLES.join(', ')}.` }).optional().default('decimal-feet'),
+  style: z
+    .enum(STYLES, { error: `style must be one of ${STYLES.join(', ')}.` })
+    .optional()
+    .default('decimal-feet'),
   paper: paperParam,
 });
 

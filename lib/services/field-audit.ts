@@ -17,7 +17,27 @@ export const ACTION_LABELS: Record<string, string> = {
 };
 
 /** Only these detail keys leave the server (audit detail is written by our services; still whitelisted). */
-const DETAIL_KEYS = ['name', 'from', 'to', 'revision', 'check', 'span', 'girder', 'point', 'pass', 'supersedes', 'attachment', 'content_type', 'size', 'via', 'outbox', 'signoff', 'before', 'after', 'demo'];
+const DETAIL_KEYS = [
+  'name',
+  'from',
+  'to',
+  'revision',
+  'check',
+  'span',
+  'girder',
+  'point',
+  'pass',
+  'supersedes',
+  'attachment',
+  'content_type',
+  'size',
+  'via',
+  'outbox',
+  'signoff',
+  'before',
+  'after',
+  'demo',
+];
 
 /** The audit log of one bridge, newest first (at most `limit` events). */
 export async function bridgeAudit(bridgeId: string, limit = 300, viewerRole: Role = 'crew'): Promise<AuditJson[]> {

@@ -12,7 +12,7 @@ import { lengthText, stationText, tapeLength, type Units } from '@/lib/units';
 
 /** The caution printed on every field sheet (domain.md, "Cautions the product must carry"). */
 export const SHEET_CAUTION =
-  'Geometry only. Overhang brackets carry wet concrete, the finishing machine rail and workers at the deck edge: bracket capacity, spacing, tie-back and fall protection follow the contractor\'s engineered falsework design, the bracket maker\'s limits, the agency\'s specifications and local codes. The engineer of record and the agency decide. Check every number against the plans before use.';
+  "Geometry only. Overhang brackets carry wet concrete, the finishing machine rail and workers at the deck edge: bracket capacity, spacing, tie-back and fall protection follow the contractor's engineered falsework design, the bracket maker's limits, the agency's specifications and local codes. The engineer of record and the agency decide. Check every number against the plans before use.";
 
 /** Plain definition of the level-bar rods, printed on the sheet and in the e-mail. */
 export const ROD_DEFINITION =
@@ -108,7 +108,6 @@ export function buildSheetGroups(table: OffsetTable, baseRod: number, span: numb
   return out.sort((a, b) => a.span - b.span || (a.side === b.side ? 0 : a.side === 'left' ? -1 : 1));
 }
 
-
 /**
  * The field sheet as CSV: two "# " lines, each one cell (bridge, revision, base rod; the caution), then a header row
  * and one row per bracket. Lengths in display units (0.01 ft or 0.001 m; widths also in feet-inches
@@ -137,7 +136,9 @@ export function fieldSheetCsv(sheet: FieldSheet): string {
   const opt = (v: number | null) => (v === null ? '' : decimal(v, u));
   // The two leading lines are single cells (quoted when they hold commas) so spreadsheets keep them whole.
   const lines = [
-    csvCell(`# Chordline field sheet: ${sheet.bridge.name.replace(/[\r\n]+/g, ' ')}; revision ${sheet.revision}; base rod ${decimal(sheet.base_rod_length, u)} ${u}${sheet.span ? `; span ${sheet.span}` : ''}`),
+    csvCell(
+      `# Chordline field sheet: ${sheet.bridge.name.replace(/[\r\n]+/g, ' ')}; revision ${sheet.revision}; base rod ${decimal(sheet.base_rod_length, u)} ${u}${sheet.span ? `; span ${sheet.span}` : ''}`,
+    ),
     csvCell(`# Caution: ${sheet.caution}`),
     header.join(','),
   ];
@@ -172,7 +173,12 @@ export function fieldSheetCsv(sheet: FieldSheet): string {
 
 /** File-name-safe form of a bridge name. */
 export function safeFileName(name: string): string {
-  return name.replace(/[^A-Za-z0-9._-]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 80) || 'bridge';
+  return (
+    name
+      .replace(/[^A-Za-z0-9._-]+/g, '-')
+      .replace(/^-+|-+$/g, '')
+      .slice(0, 80) || 'bridge'
+  );
 }
 
 /** The field sheet of a stored bridge's latest revision (all spans, or one: 400 for a span it lacks). */

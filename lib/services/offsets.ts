@@ -84,13 +84,20 @@ const STYLES = ['decimal-feet', 'feet-inches', 'metric'] as const;
 
 /** Query of the offsets CSV: `style` of the display units, decimal-feet when absent. */
 export const offsetsCsvQuerySchema = z.object({
-  style: z.enum(STYLES, { error: `Use ${STYLES.join(', ')}.` }).optional().default('decimal-feet'),
+  style: z
+    .enum(STYLES, { error: `Use ${STYLES.join(', ')}.` })
+    .optional()
+    .default('decimal-feet'),
 });
 
 /** CSV of a stored bridge's offset table in display units (decimal feet, feet-inches or metric). */
 export async function offsetsCsvForBridge(id: string, style: (typeof STYLES)[number]): Promise<{ filename: string; csv: string }> {
   const { bridge, table } = await offsetsForBridge(id);
-  const safeName = bridge.name.replace(/[^A-Za-z0-9._-]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 80) || 'bridge';
+  const safeName =
+    bridge.name
+      .replace(/[^A-Za-z0-9._-]+/g, '-')
+      .replace(/^-+|-+$/g, '')
+      .slice(0, 80) || 'bridge';
   return {
     filename: `${safeName}-rev${bridge.currentRevision}-offsets.csv`,
     csv: offsetTableToCsv(table, { style }),

@@ -11,7 +11,14 @@ import { Bridge } from '@/models';
 
 /** A bridge id: a positive whole number, given as a number or as route-parameter digits ("12"). */
 export const bridgeIdSchema = z
-  .union([z.number(), z.string().trim().regex(/^\d{1,15}$/).transform(Number)])
+  .union([
+    z.number(),
+    z
+      .string()
+      .trim()
+      .regex(/^\d{1,15}$/)
+      .transform(Number),
+  ])
   .pipe(z.number().int().positive().max(Number.MAX_SAFE_INTEGER));
 
 /** Route parameters of the /bridges/:id routes and pages. */

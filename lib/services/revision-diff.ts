@@ -87,7 +87,35 @@ function comparePaths(a: string, b: string): number {
 }
 
 /** Fields in the order the contract lists them (for a readable list of changes). */
-const FIELD_KEYS = ['start_station', 'start_x', 'start_y', 'start_bearing_deg', 'type', 'length', 'radius', 'direction', 'name', 'station', 'elevation', 'curve_length', 'left', 'right', 'skew_deg', 'layout', 'offsets', 'left_edge_offset', 'right_edge_offset', 'slab_thickness', 'edge_thickness', 'left_barrier_width', 'right_barrier_width', 'form_settlement', 'girder', 'span', 'point'];
+const FIELD_KEYS = [
+  'start_station',
+  'start_x',
+  'start_y',
+  'start_bearing_deg',
+  'type',
+  'length',
+  'radius',
+  'direction',
+  'name',
+  'station',
+  'elevation',
+  'curve_length',
+  'left',
+  'right',
+  'skew_deg',
+  'layout',
+  'offsets',
+  'left_edge_offset',
+  'right_edge_offset',
+  'slab_thickness',
+  'edge_thickness',
+  'left_barrier_width',
+  'right_barrier_width',
+  'form_settlement',
+  'girder',
+  'span',
+  'point',
+];
 
 /** Field-by-field differences of two descriptions (arrays compared by position). */
 export function diffFields(before: unknown, after: unknown): FieldChange[] {
@@ -171,7 +199,13 @@ export function diffRevisions(before: BridgeDescription, after: BridgeDescriptio
     const gb = ranges(rb);
     for (const key of new Set([...ga.keys(), ...gb.keys()])) {
       const [span, side] = key.split('|');
-      spans.push({ span: Number(span), side: side as 'left' | 'right', before: ga.get(key) ?? null, after: gb.get(key) ?? null, largest_change: ga.has(key) && gb.has(key) ? (largest.get(key) ?? 0) : null });
+      spans.push({
+        span: Number(span),
+        side: side as 'left' | 'right',
+        before: ga.get(key) ?? null,
+        after: gb.get(key) ?? null,
+        largest_change: ga.has(key) && gb.has(key) ? (largest.get(key) ?? 0) : null,
+      });
     }
     spans.sort((p, q) => p.span - q.span || sideRank(p.side) - sideRank(q.side));
   }
@@ -251,7 +285,11 @@ export function fieldLabel(path: string, description: BridgeDescription | null):
 
 /** The kind of quantity a path holds, for display with the right unit and sign words. */
 export function fieldKind(path: string): 'station' | 'offset' | 'slope' | 'angle' | 'length' | 'count' | 'coordinate' | 'elevation' | 'text' {
-  const last = path.split('.').filter((p) => !/^\d+$/.test(p)).pop() ?? '';
+  const last =
+    path
+      .split('.')
+      .filter((p) => !/^\d+$/.test(p))
+      .pop() ?? '';
   if (last === 'station' || last === 'start_station') return 'station';
   if (last === 'offsets' || last.endsWith('_edge_offset')) return 'offset';
   if (path.startsWith('cross_slopes.') && (last === 'left' || last === 'right')) return 'slope';

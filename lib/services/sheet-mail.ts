@@ -68,7 +68,11 @@ async function checkSendRate(userId: number, recipients: number): Promise<void> 
 }
 
 /** Sends the field sheet (CSV and PDF attached, summary in the body) and records it in the audit log. */
-export async function sendSheet(user: SessionUser, bridgeId: string, input: z.infer<typeof sendSheetSchema>): Promise<{ via: MailResult['via']; to: string[]; subject: string; outbox_id: number | null }> {
+export async function sendSheet(
+  user: SessionUser,
+  bridgeId: string,
+  input: z.infer<typeof sendSheetSchema>,
+): Promise<{ via: MailResult['via']; to: string[]; subject: string; outbox_id: number | null }> {
   const span = input.span ?? null;
   const sheet = await loadFieldSheet(bridgeId, span);
   const to = [...new Set(input.to.map((a) => a.trim()))];

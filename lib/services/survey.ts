@@ -20,7 +20,6 @@ export { MAX_SURVEY_CSV_CHARS, surveyUploadSchema } from './survey-types';
 export type { SurveyUpload, SurveyPreviewRow, SurveyPreview, SurveyValue, SurveyImportSummary, SurveyListing } from './survey-types';
 import type { SurveyUpload, SurveyPreviewRow, SurveyPreview, SurveyValue, SurveyListing } from './survey-types';
 
-
 const keyOf = (girder: string, span: number, point: number) => `${girder}\u0000${span}\u0000${point}`;
 
 /**
@@ -214,10 +213,7 @@ export async function listSurvey(id: string | number): Promise<SurveyListing> {
   const girderOrder = new Map(framing.girders.map((g, i) => [g, i]));
   const sorted = [...values.values()].sort(
     (a, b) =>
-      a.span - b.span ||
-      (girderOrder.get(a.girder) ?? 1e9) - (girderOrder.get(b.girder) ?? 1e9) ||
-      a.girder.localeCompare(b.girder) ||
-      a.point / a.points_per_span - b.point / b.points_per_span,
+      a.span - b.span || (girderOrder.get(a.girder) ?? 1e9) - (girderOrder.get(b.girder) ?? 1e9) || a.girder.localeCompare(b.girder) || a.point / a.points_per_span - b.point / b.points_per_span,
   );
   return {
     bridge_id: bridge.id,

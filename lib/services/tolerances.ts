@@ -6,7 +6,6 @@ import { Bridge } from '@/models';
 import { audit } from './audit';
 import type { Units } from '@/lib/units';
 
-
 /**
  * Default field-check tolerances and base rod length per unit system, in that unit. Common practice:
  * ±1/4 inch on the edge width and ±0.01 ft on the level-bar reading; 6 mm and 3 mm in metric work.

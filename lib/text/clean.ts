@@ -18,7 +18,12 @@ export function cleanText(text: string): string {
     .normalize('NFC')
     .replace(/\r\n?/g, '\n')
     .split('\n')
-    .map((line) => line.replace(/[\u0000-\u001f\u007f-\u009f\u061c\u200e\u200f\u202a-\u202e\u2066-\u2069]+/g, ' ').replace(/[ \t]+/g, ' ').trimEnd())
+    .map((line) =>
+      line
+        .replace(/[\u0000-\u001f\u007f-\u009f\u061c\u200e\u200f\u202a-\u202e\u2066-\u2069]+/g, ' ')
+        .replace(/[ \t]+/g, ' ')
+        .trimEnd(),
+    )
     .join('\n')
     .trim();
 }

@@ -18,7 +18,11 @@ const STORED = /^[a-f0-9]{32}\.(jpg|png|webp|pdf)$/;
  * The result is never used to build a path.
  */
 export function neutraliseName(name: string): string {
-  const last = name.split(/[\\/]+/).filter(Boolean).pop() ?? '';
+  const last =
+    name
+      .split(/[\\/]+/)
+      .filter(Boolean)
+      .pop() ?? '';
   const clean = last
     .normalize('NFC')
     .replace(/[\u0000-\u001f\u007f-\u009f\u061c\u200e\u200f\u202a-\u202e\u2066-\u2069"<>|:*?]+/g, '_')

@@ -22,14 +22,7 @@ export interface BentInstances {
  * lowest girder top on that bent line; three columns per bent (two when the cap is short) down to
  * a ground `clearance` below the lowest cap.
  */
-export function buildBents(
-  desc: BridgeDescription,
-  model: BridgeModel,
-  table: Pick<OffsetTable, 'points'>,
-  frame: SceneFrame,
-  girderDepth: number,
-  units: 'ft' | 'm',
-): BentInstances {
+export function buildBents(desc: BridgeDescription, model: BridgeModel, table: Pick<OffsetTable, 'points'>, frame: SceneFrame, girderDepth: number, units: 'ft' | 'm'): BentInstances {
   const u = units === 'm' ? 0.3048 : 1;
   const capDepth = 3.5 * u;
   const capWidth = 4 * u;

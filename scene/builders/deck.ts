@@ -108,12 +108,7 @@ export interface ColoredMeshArrays extends MeshArrays {
  * edge bottom + edge thickness, as the engine defines the edge bottom.
  * @param range edge widths mapped to the ends of the ramp (default: the table's own range).
  */
-export function buildEdgeBand(
-  table: Pick<OffsetTable, 'points'>,
-  desc: BridgeDescription,
-  frame: SceneFrame,
-  range: [number, number] = edgeWidthRange(table),
-): ColoredMeshArrays {
+export function buildEdgeBand(table: Pick<OffsetTable, 'points'>, desc: BridgeDescription, frame: SceneFrame, range: [number, number] = edgeWidthRange(table)): ColoredMeshArrays {
   const pos: number[] = [];
   const col: number[] = [];
   const idx: number[] = [];

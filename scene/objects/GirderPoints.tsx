@@ -22,8 +22,13 @@ export default function GirderPoints({ positions, radius, selected, onPick, ...p
     const m = new Float32Array(count * 16);
     for (let i = 0; i < count; i++) {
       const o = i * 16;
-      m[o] = radius; m[o + 5] = radius; m[o + 10] = radius; m[o + 15] = 1;
-      m[o + 12] = positions[i * 3]; m[o + 13] = positions[i * 3 + 1] + radius * 0.5; m[o + 14] = positions[i * 3 + 2];
+      m[o] = radius;
+      m[o + 5] = radius;
+      m[o + 10] = radius;
+      m[o + 15] = 1;
+      m[o + 12] = positions[i * 3];
+      m[o + 13] = positions[i * 3 + 1] + radius * 0.5;
+      m[o + 14] = positions[i * 3 + 2];
     }
     return m;
   }, [positions, radius, count]);

@@ -7,7 +7,6 @@ import { groundGridSpacing } from './ground-grid';
 
 type Props = ThreeElements['group'] & { y: number; units: Units; centre?: [number, number]; extent: number };
 
-
 /**
  * The ground under the bridge at the bents' column feet: a plane that takes the sun's shadows and a
  * faint survey grid on it (squares of 10 ft or 5 m, a heavier line every 100 ft or 50 m).

@@ -30,7 +30,16 @@ const AVOID_HALF = 18;
 /** What the frame loop keeps between frames (nothing is allocated per frame). */
 type LayoutState = { v: THREE.Vector3; cam: THREE.Matrix4; proj: THREE.Matrix4; w: number; h: number; dirty: boolean; measured: boolean; avoidBox: ScreenBox };
 
-const newLayoutState = (): LayoutState => ({ v: new THREE.Vector3(), cam: new THREE.Matrix4(), proj: new THREE.Matrix4(), w: 0, h: 0, dirty: true, measured: false, avoidBox: { x: 0, y: 0, w: 0, h: 0 } });
+const newLayoutState = (): LayoutState => ({
+  v: new THREE.Vector3(),
+  cam: new THREE.Matrix4(),
+  proj: new THREE.Matrix4(),
+  w: 0,
+  h: 0,
+  dirty: true,
+  measured: false,
+  avoidBox: { x: 0, y: 0, w: 0, h: 0 },
+});
 
 /**
  * Lays the labels out on the screen whenever the camera, the picture size or the labels change:

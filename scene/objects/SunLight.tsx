@@ -50,7 +50,7 @@ export default function SunLight({ target, reach, shadows, ...props }: Props) {
         shadow-radius={4}
         shadow-blurSamples={12}
         shadow-bias={-0.0004}
-        shadow-normalBias={0.02 * reach / 100}
+        shadow-normalBias={(0.02 * reach) / 100}
       />
       <directionalLight position={[-200, 120, -300]} intensity={0.3} />
     </group>

@@ -36,7 +36,8 @@ export default function PourControl({ units, maxDeflection, pour, onPour, deltaT
         </span>
         <input type="range" min={0} max={1} step={0.05} value={pour} onChange={(e) => onPour(Number(e.target.value))} className="mt-2 w-full accent-brand-600" />
         <span className="mt-1 block text-xs text-concrete-600">
-          The girders sag by their dead-load deflection (up to <span className="tabular">{lengthText(maxDeflection, units)}</span>) as the deck is placed; the brackets and forms ride down with them, from the form target to the edge bottom.
+          The girders sag by their dead-load deflection (up to <span className="tabular">{lengthText(maxDeflection, units)}</span>) as the deck is placed; the brackets and forms ride down with them,
+          from the form target to the edge bottom.
         </span>
       </label>
     );
@@ -45,11 +46,15 @@ export default function PourControl({ units, maxDeflection, pour, onPour, deltaT
   return (
     <label className="block" data-testid="pour-control">
       <span className="field-label">
-        Sun on the girders (no deflections in this bridge): top flange warmer by <span className="tabular">{deltaT} {unit}</span>
+        Sun on the girders (no deflections in this bridge): top flange warmer by{' '}
+        <span className="tabular">
+          {deltaT} {unit}
+        </span>
       </span>
       <input type="range" min={0} max={units === 'm' ? 22 : 40} step={1} value={deltaT} onChange={(e) => onDeltaT(Number(e.target.value))} className="mt-2 w-full accent-brand-600" />
       <span className="mt-1 block text-xs text-concrete-600">
-        A steel girder of the drawn depth bows up <span className="tabular">{lengthText(bow, units)}</span> at midspan (α × ΔT × span² ÷ 8 × depth), drawn ×{THERMAL_DRAWN}; the form-target line, an absolute elevation, stays put.
+        A steel girder of the drawn depth bows up <span className="tabular">{lengthText(bow, units)}</span> at midspan (α × ΔT × span² ÷ 8 × depth), drawn ×{THERMAL_DRAWN}; the form-target line, an
+        absolute elevation, stays put.
       </span>
     </label>
   );

@@ -16,8 +16,7 @@ let bridgeId: string;
 // Tolerances (common practice): ±1/4 inch on the edge width, ±0.01 ft on the level-bar reading.
 const QUARTER_INCH_FT = 0.25 / 12;
 
-const post = (who: Role | null, body: unknown, id = bridgeId) =>
-  call(checks.POST, { method: 'POST', cookie: who ? people[who].cookie : undefined, params: { id }, body });
+const post = (who: Role | null, body: unknown, id = bridgeId) => call(checks.POST, { method: 'POST', cookie: who ? people[who].cookie : undefined, params: { id }, body });
 
 beforeAll(async () => {
   people = await makeUsers();

@@ -21,7 +21,12 @@ export function metricCopy(b: BridgeDescription): BridgeDescription {
       elements: b.alignment.elements.map((e) => {
         const r = e as { radius?: number; radius_start?: number | null; radius_end?: number | null };
         const scaled = (v: number | null | undefined) => (typeof v === 'number' ? v * M : v);
-        return { ...e, length: e.length * M, ...(r.radius !== undefined ? { radius: r.radius * M } : {}), ...(r.radius_start !== undefined ? { radius_start: scaled(r.radius_start), radius_end: scaled(r.radius_end) } : {}) };
+        return {
+          ...e,
+          length: e.length * M,
+          ...(r.radius !== undefined ? { radius: r.radius * M } : {}),
+          ...(r.radius_start !== undefined ? { radius_start: scaled(r.radius_start), radius_end: scaled(r.radius_end) } : {}),
+        };
       }),
     },
     profile: { pvis: b.profile.pvis.map((p) => ({ ...p, station: p.station * M, elevation: p.elevation * M, ...(p.curve_length ? { curve_length: p.curve_length * M } : {}) })) },

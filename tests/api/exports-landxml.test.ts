@@ -21,15 +21,29 @@ beforeAll(async () => {
   people = await makeUsers();
 });
 
-const get = (handler: unknown, id: string) =>
-  callRaw(handler, new NextRequest(new URL(`/api/bridges/${id}/file`, 'http://localhost:3000'), { headers: { cookie: people.crew.cookie } }), { id });
+const get = (handler: unknown, id: string) => callRaw(handler, new NextRequest(new URL(`/api/bridges/${id}/file`, 'http://localhost:3000'), { headers: { cookie: people.crew.cookie } }), { id });
 
 /**
  * Element names and the attributes each may carry, from the LandXML 1.2 schema (LandXML-1.2.xsd;
  * written down from memory of the published schema, cross-checked against a generated binding of it).
  */
 const POINT_ATTRS = ['code', 'desc', 'name', 'state', 'pntRef', 'featureRef', 'pointGeometry', 'DTMAttribute', 'timeStamp', 'role', 'determinedTimeStamp'];
-const UNIT_ATTRS = ['areaUnit', 'linearUnit', 'volumeUnit', 'temperatureUnit', 'pressureUnit', 'diameterUnit', 'widthUnit', 'heightUnit', 'velocityUnit', 'flowUnit', 'angularUnit', 'directionUnit', 'latLongAngularUnit', 'elevationUnit'];
+const UNIT_ATTRS = [
+  'areaUnit',
+  'linearUnit',
+  'volumeUnit',
+  'temperatureUnit',
+  'pressureUnit',
+  'diameterUnit',
+  'widthUnit',
+  'heightUnit',
+  'velocityUnit',
+  'flowUnit',
+  'angularUnit',
+  'directionUnit',
+  'latLongAngularUnit',
+  'elevationUnit',
+];
 const SCHEMA: Record<string, string[]> = {
   LandXML: ['xmlns', 'version', 'date', 'time', 'readOnly', 'LandXMLId', 'language'],
   Units: [],
@@ -42,7 +56,28 @@ const SCHEMA: Record<string, string[]> = {
   CoordGeom: ['name', 'desc', 'oID', 'state'],
   Line: ['desc', 'dir', 'length', 'name', 'staStart', 'state', 'oID', 'note'],
   Curve: ['rot', 'chord', 'crvType', 'delta', 'desc', 'dirEnd', 'dirStart', 'external', 'length', 'midOrd', 'name', 'radius', 'staStart', 'state', 'tangent', 'oID', 'note'],
-  Spiral: ['length', 'radiusEnd', 'radiusStart', 'rot', 'spiType', 'chord', 'constant', 'desc', 'dirEnd', 'dirStart', 'name', 'theta', 'totalY', 'totalX', 'staStart', 'state', 'tanLong', 'tanShort', 'oID', 'note'],
+  Spiral: [
+    'length',
+    'radiusEnd',
+    'radiusStart',
+    'rot',
+    'spiType',
+    'chord',
+    'constant',
+    'desc',
+    'dirEnd',
+    'dirStart',
+    'name',
+    'theta',
+    'totalY',
+    'totalX',
+    'staStart',
+    'state',
+    'tanLong',
+    'tanShort',
+    'oID',
+    'note',
+  ],
   Start: POINT_ATTRS,
   End: POINT_ATTRS,
   Center: POINT_ATTRS,
@@ -75,7 +110,7 @@ function outsideSchema(name: string, node: unknown, out: string[] = []): string[
 }
 
 const near = (a: number, b: number) => Math.abs(a - b) <= 1e-9 * Math.max(1, Math.abs(a), Math.abs(b));
-const bearingNear = (a: number, b: number) => Math.abs((((a - b) % 360) + 540) % 360 - 180) <= 1e-9;
+const bearingNear = (a: number, b: number) => Math.abs(((((a - b) % 360) + 540) % 360) - 180) <= 1e-9;
 
 /** Imports the route's file with the product's importer and compares it with the stored description. */
 async function roundTrip(description: BridgeDescription) {
@@ -122,7 +157,17 @@ describe('GET /api/bridges/:id/alignment.xml', () => {
     await roundTrip(demoBridges[1]);
     await roundTrip(metricCopy(demoBridges[0]));
     // A curve to the left first, then a line.
-    const left = { ...demoBridges[0], alignment: { ...demoBridges[0].alignment, start_bearing_deg: 350, elements: [{ type: 'arc' as const, length: 420, radius: 1500, direction: 'left' as const }, { type: 'line' as const, length: 400 }] } };
+    const left = {
+      ...demoBridges[0],
+      alignment: {
+        ...demoBridges[0].alignment,
+        start_bearing_deg: 350,
+        elements: [
+          { type: 'arc' as const, length: 420, radius: 1500, direction: 'left' as const },
+          { type: 'line' as const, length: 400 },
+        ],
+      },
+    };
     await roundTrip(left);
   });
 

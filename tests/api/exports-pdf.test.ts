@@ -160,7 +160,13 @@ describe('GET /api/bridges/:id/field-sheet.pdf', () => {
     const span1 = table.points.filter((p) => p.span === 1 && p.side !== 'interior');
     // Pass every check of span 1 (within a few thousandths), then sign it off.
     for (const p of span1) {
-      const body = { span: 1, girder: p.girder, point: p.point, measured_edge_width: (p.edge_width as number) + 0.003, ...(p.drop_from_girder_top !== null ? { measured_drop_from_girder_top: p.drop_from_girder_top - 0.004 } : {}) };
+      const body = {
+        span: 1,
+        girder: p.girder,
+        point: p.point,
+        measured_edge_width: (p.edge_width as number) + 0.003,
+        ...(p.drop_from_girder_top !== null ? { measured_drop_from_girder_top: p.drop_from_girder_top - 0.004 } : {}),
+      };
       expect((await call(checks.POST, { method: 'POST', cookie: people.inspector.cookie, params: { id }, body })).status).toBe(201);
     }
     expect((await call(signoffs.POST, { method: 'POST', cookie: people.inspector.cookie, params: { id }, body: { span: 1 } })).status).toBe(201);

@@ -5,10 +5,7 @@ import { createBridge } from '@/lib/services/bridges';
 import type { TestUser } from './helpers';
 
 /** A smallest valid PNG (1×1, PNG spec §5.2 signature + IHDR/IDAT/IEND), as any camera app would save it. */
-export const PNG_1X1 = Buffer.from(
-  'iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mP8z8BQDwAEhQGAhKmMIQAAAABJRU5ErkJggg==',
-  'base64',
-);
+export const PNG_1X1 = Buffer.from('iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mP8z8BQDwAEhQGAhKmMIQAAAABJRU5ErkJggg==', 'base64');
 
 /** JPEG start: SOI + APP0 "JFIF" marker (ISO/IEC 10918-1, JFIF 1.02), padded. */
 export const JPEG_START = Buffer.concat([Buffer.from([0xff, 0xd8, 0xff, 0xe0, 0x00, 0x10]), Buffer.from('JFIF\0', 'latin1'), Buffer.alloc(200, 7)]);

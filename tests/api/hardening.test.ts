@@ -52,8 +52,7 @@ function cells(csv: string): string[] {
 }
 
 /** Cells a spreadsheet would run as a formula: a leading trigger, and not a plain number, feet-inches or station. */
-const formulaCells = (csv: string) =>
-  cells(csv).filter((c) => /^[=+\-@\t\r]/.test(c) && !/^[+-]?\d+(\.\d+)?$/.test(c) && !/^-?\d+'-\d+( \d\/\d)?"$/.test(c) && !/^-?\d+\+\d+(\.\d+)?$/.test(c));
+const formulaCells = (csv: string) => cells(csv).filter((c) => /^[=+\-@\t\r]/.test(c) && !/^[+-]?\d+(\.\d+)?$/.test(c) && !/^-?\d+'-\d+( \d\/\d)?"$/.test(c) && !/^-?\d+\+\d+(\.\d+)?$/.test(c));
 
 describe('spreadsheet formula injection', () => {
   it('csvCell neutralises formula text but leaves numbers and our number formats alone', () => {
@@ -111,7 +110,12 @@ describe('names, captions and file names', () => {
     const id = String(created.json.id);
     const up = await callRaw(
       attachments.POST,
-      await multipartRequest(`/api/bridges/${id}/attachments`, people.inspector.cookie, { bytes: PNG_1X1, name: 'photo\u202Egnp.exe', type: 'image/png' }, { caption: 'left\u0000 form\u200F edge\u0007' }),
+      await multipartRequest(
+        `/api/bridges/${id}/attachments`,
+        people.inspector.cookie,
+        { bytes: PNG_1X1, name: 'photo\u202Egnp.exe', type: 'image/png' },
+        { caption: 'left\u0000 form\u200F edge\u0007' },
+      ),
       { id },
     );
     expect(up.status).toBe(201);
@@ -192,7 +196,11 @@ function claimedPng(w: number, h: number): Buffer {
 describe('limits on uploads', () => {
   it('a PNG claiming 7999 × 7999 pixels is refused (422 naming the limit) before anything decodes it, and nothing is stored', async () => {
     const id = await demoBridge(people.engineer);
-    const res = await callRaw(attachments.POST, await multipartRequest(`/api/bridges/${id}/attachments`, people.inspector.cookie, { bytes: claimedPng(7999, 7999), name: 'huge.png', type: 'image/png' }), { id });
+    const res = await callRaw(
+      attachments.POST,
+      await multipartRequest(`/api/bridges/${id}/attachments`, people.inspector.cookie, { bytes: claimedPng(7999, 7999), name: 'huge.png', type: 'image/png' }),
+      { id },
+    );
     expect(res.status).toBe(422);
     expect(res.json.error).toMatch(/7999 × 7999 pixels .* the limit is 50 megapixels/);
     const { Attachment } = await import('@/models');
@@ -202,7 +210,11 @@ describe('limits on uploads', () => {
   it('a LandXML file with more alignments than the limit is refused with a short 422', async () => {
     const one = '<Alignment name="A" length="100" staStart="0"><CoordGeom><Line length="100"><Start>0 0</Start><End>0 100</End></Line></CoordGeom></Alignment>';
     const xml = `<?xml version="1.0"?><LandXML xmlns="http://www.landxml.org/schema/LandXML-1.2" version="1.2"><Units><Imperial linearUnit="USSurveyFoot" areaUnit="squareFoot" volumeUnit="cubicYard" angularUnit="decimal degrees" directionUnit="decimal degrees"/></Units><Alignments>${one.repeat(60_000)}</Alignments></LandXML>`;
-    const req = await multipartRequest('/api/import/landxml', people.engineer.cookie, { bytes: Buffer.from(xml.slice(0, 5 * 1024 * 1024 - 100) + '</Alignments></LandXML>'), name: 'many.xml', type: 'application/xml' });
+    const req = await multipartRequest('/api/import/landxml', people.engineer.cookie, {
+      bytes: Buffer.from(xml.slice(0, 5 * 1024 * 1024 - 100) + '</Alignments></LandXML>'),
+      name: 'many.xml',
+      type: 'application/xml',
+    });
     const res = await callRaw(landxml.POST, req);
     expect(res.status).toBe(422);
     expect(res.json.error).toMatch(/alignments; the limit is 100/);

@@ -26,7 +26,8 @@ async function upload(opts: { who?: Role; file?: Uint8Array | string; filename?:
   let form = opts.form;
   if (!form) {
     form = new FormData();
-    if (opts.file !== undefined) form.append('file', new Blob([typeof opts.file === 'string' ? opts.file : new Uint8Array(opts.file)], { type: opts.type ?? 'application/xml' }), opts.filename ?? 'alignment.xml');
+    if (opts.file !== undefined)
+      form.append('file', new Blob([typeof opts.file === 'string' ? opts.file : new Uint8Array(opts.file)], { type: opts.type ?? 'application/xml' }), opts.filename ?? 'alignment.xml');
     if (opts.units !== undefined) form.append('units', opts.units);
   }
   const headers: Record<string, string> = { origin: 'http://localhost:3000' };
@@ -168,7 +169,12 @@ describe('GET /api/bridges/:id/revisions/:revision', () => {
     const { id } = await createBridge({ id: people.engineer.id, email: '', name: '', role: 'engineer' }, { name: 'Revision reader', description: demoBridges[0] });
     const changed = JSON.parse(JSON.stringify(demoBridges[0]));
     changed.girders[0].offsets[1] = -18.0;
-    const saved = await call(revisions.POST, { method: 'POST', cookie: people.engineer.cookie, params: { id: String(id) }, body: { base_revision: 1, description: changed, note: 'G1 moved at Pier 2' } });
+    const saved = await call(revisions.POST, {
+      method: 'POST',
+      cookie: people.engineer.cookie,
+      params: { id: String(id) },
+      body: { base_revision: 1, description: changed, note: 'G1 moved at Pier 2' },
+    });
     expect(saved.status).toBe(201);
     const one = await call(revisionOne.GET, { cookie: people.crew.cookie, params: { id: String(id), revision: '1' } });
     const two = await call(revisionOne.GET, { cookie: people.crew.cookie, params: { id: String(id), revision: '2' } });
@@ -180,7 +186,11 @@ describe('GET /api/bridges/:id/revisions/:revision', () => {
   });
 
   it('answers 404 for a revision or bridge that does not exist', async () => {
-    for (const params of [{ id: '1', revision: '99' }, { id: '1', revision: 'abc' }, { id: '99999', revision: '1' }]) {
+    for (const params of [
+      { id: '1', revision: '99' },
+      { id: '1', revision: 'abc' },
+      { id: '99999', revision: '1' },
+    ]) {
       const res = await call(revisionOne.GET, { cookie: people.crew.cookie, params });
       expect(res.status).toBe(404);
       expect(res.json.error).toMatch(/does not exist|no bridge/);

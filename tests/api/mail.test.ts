@@ -70,7 +70,10 @@ describe('POST /api/bridges/:id/send-sheet without an SMTP server (local outbox)
     // The PDF part of the MIME message (RFC 2046), base64 decoded to its bytes.
     const part = mimeParts(raw).find((p) => /application\/pdf/i.test(p.headers));
     expect(part?.headers).toMatch(/-rev1-field-sheet-span1\.pdf/);
-    const body = raw.split(/application\/pdf/i)[1].split(/\r?\n\r?\n/)[1].split(/\r?\n--/)[0];
+    const body = raw
+      .split(/application\/pdf/i)[1]
+      .split(/\r?\n\r?\n/)[1]
+      .split(/\r?\n--/)[0];
     const bytes = Buffer.from(body.replace(/\s+/g, ''), 'base64');
     expect(bytes.subarray(0, 5).toString('latin1')).toBe('%PDF-');
     // pdf-parse (pdf.js): an independent reader of the attached file.
@@ -82,7 +85,11 @@ describe('POST /api/bridges/:id/send-sheet without an SMTP server (local outbox)
     expect(text).toContain('Span 1 · G1');
     expect(text).not.toContain('Span 2 · G1');
     // Every bracket of span 1 is a row starting with its point and station, as on the sheet page.
-    const csvRows = (await csvOf(1)).trim().split('\n').slice(3).map((l) => l.split(','));
+    const csvRows = (await csvOf(1))
+      .trim()
+      .split('\n')
+      .slice(3)
+      .map((l) => l.split(','));
     for (const r of csvRows) expect(text).toContain(`${r[3]} ${r[4]} `);
   });
 

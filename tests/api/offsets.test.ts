@@ -66,10 +66,7 @@ describe('offsets over HTTP equal the offsets command', () => {
   for (const [i, demo] of demoBridges.entries()) {
     it(`demo bridge ${i + 1} (${demo.name}): GET /api/bridges/:id/offsets matches \`offsets\` number by number`, async () => {
       const { id } = await createBridge({ id: people.engineer.id, email: '', name: '', role: 'engineer' }, { name: `HTTP vs command ${i}`, description: demo });
-      const [http, cli] = await Promise.all([
-        call(offsets.GET, { cookie: people.crew.cookie, params: { id: String(id) } }),
-        commandTable(demo),
-      ]);
+      const [http, cli] = await Promise.all([call(offsets.GET, { cookie: people.crew.cookie, params: { id: String(id) } }), commandTable(demo)]);
       expect(http.status).toBe(200);
       expect(differences(http.json, cli)).toEqual([]);
       // The comparison must have covered a real table, not two empty ones.
@@ -94,9 +91,7 @@ describe('offsets over HTTP equal the offsets command', () => {
     const [http, cli] = await Promise.all([call(offsets.GET, { cookie: people.crew.cookie, params: { id: String(id) } }), commandTable(merged)]);
     expect(http.status).toBe(200);
     expect(differences(http.json, cli)).toEqual([]);
-    const g1 = (http.json.points as { girder: string; span: number; point: number; top_of_girder: number | null }[]).find(
-      (p) => p.girder === 'G1' && p.span === 1 && p.point === 10,
-    );
+    const g1 = (http.json.points as { girder: string; span: number; point: number; top_of_girder: number | null }[]).find((p) => p.girder === 'G1' && p.span === 1 && p.point === 10);
     expect(g1?.top_of_girder).toBeCloseTo(253.61, 9);
   }, 120000);
 });

@@ -12,8 +12,7 @@ import type { Role } from '@/lib/auth/roles';
 
 let people: Record<Role, TestUser>;
 
-const create = (body: Record<string, unknown>) =>
-  call(bridges.POST, { method: 'POST', cookie: people.engineer.cookie, body: { description: demoBridges[0], ...body } });
+const create = (body: Record<string, unknown>) => call(bridges.POST, { method: 'POST', cookie: people.engineer.cookie, body: { description: demoBridges[0], ...body } });
 const list = async (query = '') => {
   const res = await call(bridges.GET, { cookie: people.crew.cookie, path: `/api/bridges${query}` });
   return res;
@@ -172,7 +171,9 @@ describe('status counters', () => {
     // Span 1 all in tolerance (a few thousandths off), readings where the top of girder was surveyed.
     for (const p of span1) {
       const res = await record(id, {
-        span: 1, girder: p.girder, point: p.point,
+        span: 1,
+        girder: p.girder,
+        point: p.point,
         measured_edge_width: p.edge_width! + 0.003,
         ...(p.drop_from_girder_top !== null ? { measured_drop_from_girder_top: p.drop_from_girder_top - 0.004 } : {}),
       });

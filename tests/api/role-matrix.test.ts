@@ -39,7 +39,11 @@ import * as revisionOne from '@/app/api/bridges/[id]/revisions/[revision]/route'
 
 type Expect = Record<Who, number>;
 const row = (anonymous: number, crew: number, inspector: number, engineer: number, admin: number): Expect => ({
-  anonymous, crew, inspector, engineer, admin,
+  anonymous,
+  crew,
+  inspector,
+  engineer,
+  admin,
 });
 const READ = row(401, 200, 200, 200, 200);
 

@@ -65,10 +65,18 @@ const setCookies = (a: Answer) => ([] as string[]).concat(a.headers['set-cookie'
 /** Signs out through next-auth: fetch the CSRF token, then POST the sign-out with the session cookie. */
 async function signOut(cookie: string) {
   const csrf = await nextAuth('GET', 'csrf', {});
-  const csrfCookie = setCookies(csrf).find((c) => c.startsWith('next-auth.csrf-token='))!.split(';')[0].split('=')[1];
-  return nextAuth('POST', 'signout', { 'next-auth.csrf-token': decodeURIComponent(csrfCookie), 'next-auth.session-token': token(cookie) }, {
-    csrfToken: (csrf.body as { csrfToken: string }).csrfToken,
-  });
+  const csrfCookie = setCookies(csrf)
+    .find((c) => c.startsWith('next-auth.csrf-token='))!
+    .split(';')[0]
+    .split('=')[1];
+  return nextAuth(
+    'POST',
+    'signout',
+    { 'next-auth.csrf-token': decodeURIComponent(csrfCookie), 'next-auth.session-token': token(cookie) },
+    {
+      csrfToken: (csrf.body as { csrfToken: string }).csrfToken,
+    },
+  );
 }
 
 describe('sessions end', () => {

@@ -69,7 +69,10 @@ describe('sign-off of a span', () => {
     expect(await SignOff.count({ where: { bridgeId: Number(id) } })).toBe(0);
 
     // The correction supersedes the failing check; now the span can be signed off.
-    await checkWholeSpan(id, span1.filter((p) => p.girder === 'G1' && p.point === 4));
+    await checkWholeSpan(
+      id,
+      span1.filter((p) => p.girder === 'G1' && p.point === 4),
+    );
     const done = await signOff(id, { span: 1, note: 'Overhang forms G1 and G5 checked before the pour' });
     expect(done.status, done.text).toBe(201);
     expect(done.json).toMatchObject({ span: 1, revision: 1, by: 'Test inspector', out_of_date: false });

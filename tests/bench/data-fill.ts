@@ -36,15 +36,42 @@ function fieldRows(bridgeId: number, t: Template, userId: number, at: Date, firs
     const failing = bridgeId % 10 === 0 && k === CHECKS_PER_BRIDGE - 1;
     const measured = p.edge_width! + (failing ? 0.06 : 0.002);
     checks.push({
-      id: firstCheckId + k, bridge_id: bridgeId, revision: 3, span: p.span, girder: p.girder, point: p.point, side: p.side, station: p.station,
-      measured_edge_width: measured, computed_edge_width: p.edge_width, width_deviation: measured - p.edge_width!, width_tolerance: 0.25 / 12, width_pass: !failing,
-      measured_drop_from_girder_top: null, computed_drop_from_girder_top: null, reading_deviation: null, reading_tolerance: 0.01, reading_pass: null,
-      pass: !failing, note: '', supersedes_id: null, user_id: userId, created_at: new Date(at.getTime() + k * 60_000), client_key: null,
+      id: firstCheckId + k,
+      bridge_id: bridgeId,
+      revision: 3,
+      span: p.span,
+      girder: p.girder,
+      point: p.point,
+      side: p.side,
+      station: p.station,
+      measured_edge_width: measured,
+      computed_edge_width: p.edge_width,
+      width_deviation: measured - p.edge_width!,
+      width_tolerance: 0.25 / 12,
+      width_pass: !failing,
+      measured_drop_from_girder_top: null,
+      computed_drop_from_girder_top: null,
+      reading_deviation: null,
+      reading_tolerance: 0.01,
+      reading_pass: null,
+      pass: !failing,
+      note: '',
+      supersedes_id: null,
+      user_id: userId,
+      created_at: new Date(at.getTime() + k * 60_000),
+      client_key: null,
     });
   }
   const photos = Array.from({ length: PHOTOS_PER_BRIDGE }, (_, k) => ({
-    id: firstPhotoId + k, bridge_id: bridgeId, check_id: firstCheckId + CHECKS_PER_BRIDGE - 1 - k, user_id: userId,
-    stored_name: `${crypto.randomBytes(16).toString('hex')}.jpg`, original_name: `bracket-${k + 1}.jpg`, content_type: 'image/jpeg', size: 180_000, caption: '',
+    id: firstPhotoId + k,
+    bridge_id: bridgeId,
+    check_id: firstCheckId + CHECKS_PER_BRIDGE - 1 - k,
+    user_id: userId,
+    stored_name: `${crypto.randomBytes(16).toString('hex')}.jpg`,
+    original_name: `bracket-${k + 1}.jpg`,
+    content_type: 'image/jpeg',
+    size: 180_000,
+    caption: '',
     created_at: new Date(at.getTime() + (CHECKS_PER_BRIDGE + k) * 60_000),
   }));
   const events = [
@@ -72,23 +99,56 @@ export async function fillBridges(sequelize: Sequelize, from: number, to: number
       const t = templates[id % templates.length];
       const at = new Date(base + id * 3_600_000);
       const field = fieldRows(id, t, userId, at, (id - 1) * CHECKS_PER_BRIDGE + 1, (id - 1) * PHOTOS_PER_BRIDGE + 1);
-      const counts = statusCounts(t.table, field.checks.map((c) => ({
-        id: c.id as number, span: c.span as number, girder: c.girder as string, point: c.point as number, revision: 3,
-        measuredEdgeWidth: c.measured_edge_width as number, widthPass: c.width_pass as boolean, measuredReading: null, readingPass: null,
-      })), [], 3);
+      const counts = statusCounts(
+        t.table,
+        field.checks.map((c) => ({
+          id: c.id as number,
+          span: c.span as number,
+          girder: c.girder as string,
+          point: c.point as number,
+          revision: 3,
+          measuredEdgeWidth: c.measured_edge_width as number,
+          widthPass: c.width_pass as boolean,
+          measuredReading: null,
+          readingPass: null,
+        })),
+        [],
+        3,
+      );
       const last = field.photos[field.photos.length - 1].created_at as Date;
       bridges.push({
-        id, name: `Bench bridge ${String(id).padStart(5, '0')} ${t.description.name}`, units: t.description.units, current_revision: 3,
+        id,
+        name: `Bench bridge ${String(id).padStart(5, '0')} ${t.description.name}`,
+        units: t.description.units,
+        current_revision: 3,
         search_text: searchTextOf(`Bench bridge ${String(id).padStart(5, '0')} ${t.description.name}`, `BN-${String(id).padStart(5, '0')}`, `Route ${(id % 97) + 1}`),
-        created_at: at, updated_at: at, structure_number: `BN-${String(id).padStart(5, '0')}`, route: `Route ${(id % 97) + 1}`,
-        feature_crossed: `Creek ${id % 31}`, district: DISTRICTS[id % DISTRICTS.length], contractor: `Contractor ${id % 40}`, stage: STAGES[id % STAGES.length],
-        brackets_total: counts.bracketsTotal, brackets_passing: counts.bracketsPassing, open_failures: counts.openFailures,
-        spans_total: counts.spansTotal, spans_signed_off: counts.spansSignedOff, spans_awaiting_signoff: counts.spansAwaitingSignoff,
-        last_field_at: last, activity_at: last,
+        created_at: at,
+        updated_at: at,
+        structure_number: `BN-${String(id).padStart(5, '0')}`,
+        route: `Route ${(id % 97) + 1}`,
+        feature_crossed: `Creek ${id % 31}`,
+        district: DISTRICTS[id % DISTRICTS.length],
+        contractor: `Contractor ${id % 40}`,
+        stage: STAGES[id % STAGES.length],
+        brackets_total: counts.bracketsTotal,
+        brackets_passing: counts.bracketsPassing,
+        open_failures: counts.openFailures,
+        spans_total: counts.spansTotal,
+        spans_signed_off: counts.spansSignedOff,
+        spans_awaiting_signoff: counts.spansAwaitingSignoff,
+        last_field_at: last,
+        activity_at: last,
       });
       for (let r = 1; r <= 3; r++) {
         revisions.push({ bridge_id: id, revision: r, description: t.json, author_id: userId, note: `Revision ${r}`, created_at: new Date(at.getTime() + r * 1000) });
-        events.push({ user_id: userId, action: r === 1 ? 'bridge.create' : 'revision.create', entity_type: 'bridge', entity_id: String(id), detail: JSON.stringify({ revision: r }), created_at: new Date(at.getTime() + r * 1000) });
+        events.push({
+          user_id: userId,
+          action: r === 1 ? 'bridge.create' : 'revision.create',
+          entity_type: 'bridge',
+          entity_id: String(id),
+          detail: JSON.stringify({ revision: r }),
+          created_at: new Date(at.getTime() + r * 1000),
+        });
       }
       checks.push(...field.checks);
       photos.push(...field.photos);

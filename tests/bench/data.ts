@@ -105,7 +105,9 @@ async function main() {
     await fillBridges(sequelize, filled + 1, size, user.id);
     filled = size;
     await sequelize.query('ANALYZE');
-    console.log(`filled ${size.toLocaleString('en-US')} bridges (${(size * 3).toLocaleString('en-US')} revisions, ${(size * CHECKS_PER_BRIDGE).toLocaleString('en-US')} checks, ${(size * PHOTOS_PER_BRIDGE).toLocaleString('en-US')} photo records) in ${((Date.now() - t) / 1000).toFixed(1)} s`);
+    console.log(
+      `filled ${size.toLocaleString('en-US')} bridges (${(size * 3).toLocaleString('en-US')} revisions, ${(size * CHECKS_PER_BRIDGE).toLocaleString('en-US')} checks, ${(size * PHOTOS_PER_BRIDGE).toLocaleString('en-US')} photo records) in ${((Date.now() - t) / 1000).toFixed(1)} s`,
+    );
     for (const [name, work] of cases) {
       const ms = await time(work);
       results.set(name, [...(results.get(name) ?? []), ms]);
@@ -121,7 +123,12 @@ async function main() {
     worst = Math.max(worst, ratio);
     console.log(`| ${name} | ${small.fastest.toFixed(2)} (${small.median.toFixed(2)}) | ${large.fastest.toFixed(2)} (${large.median.toFixed(2)}) | ${ratio.toFixed(2)} |`);
   }
-  console.log(`load average at the end: ${os.loadavg().map((l) => l.toFixed(1)).join(', ')} on ${os.cpus().length} cores`);
+  console.log(
+    `load average at the end: ${os
+      .loadavg()
+      .map((l) => l.toFixed(1))
+      .join(', ')} on ${os.cpus().length} cores`,
+  );
   console.log(`\nworst ratio ${worst.toFixed(2)} (target under 2): ${worst < 2 ? 'met' : 'NOT met'}`);
   await closeDb();
   fs.rmSync(dir, { recursive: true, force: true });

@@ -64,7 +64,7 @@ async function signIn(base: string): Promise<string> {
  * moved by a few thousandths of a foot that change with n, so every body computes a different table.
  */
 export function variedBridge(n: number): string {
-  const b = structuredClone(demoBridges[0]) as typeof demoBridges[0];
+  const b = structuredClone(demoBridges[0]) as (typeof demoBridges)[0];
   const nudge = ((n * 7919) % 1000) / 1000; // 0 … 0.999, a different value each request
   b.name = `Held-out load bridge ${n}`;
   b.points_per_span = 40;
@@ -134,9 +134,7 @@ async function main() {
     const computeRuns: autocannon.Result[] = [];
     for (let r = 0; r < rounds; r++) {
       healthRuns.push(await run({ url: `${base}/api/health`, duration: seconds / rounds, connections }));
-      computeRuns.push(
-        await run({ url: base, requests: computeRequests, duration: seconds / rounds, connections }),
-      );
+      computeRuns.push(await run({ url: base, requests: computeRequests, duration: seconds / rounds, connections }));
     }
     const health = combine(healthRuns);
     const compute = combine(computeRuns);

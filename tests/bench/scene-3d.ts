@@ -16,7 +16,17 @@ import { twelveSpanBridge } from './geometry';
 import { signIn } from '../e2e/browser';
 
 const root = path.resolve(__dirname, '../..');
-const FLAGS = ['--no-sandbox', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--use-angle=swiftshader', '--enable-unsafe-swiftshader', '--ignore-gpu-blocklist'];
+const FLAGS = [
+  '--no-sandbox',
+  '--disable-quic',
+  '--no-first-run',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+  '--use-angle=swiftshader',
+  '--enable-unsafe-swiftshader',
+  '--ignore-gpu-blocklist',
+];
 
 function median(v: number[]): number {
   const s = [...v].sort((a, b) => a - b);
@@ -106,7 +116,9 @@ async function main() {
     }
     for (const key of ['on', 'off']) {
       const r = results[key];
-      console.log(`  shadows ${key.padEnd(3)}: first frame ${r.first.toFixed(0)} ms after navigation start; median frame ${r.median.toFixed(1)} ms while orbiting (${r.frames} frames); ${r.calls} draw calls, ${r.triangles.toLocaleString('en-US')} triangles`);
+      console.log(
+        `  shadows ${key.padEnd(3)}: first frame ${r.first.toFixed(0)} ms after navigation start; median frame ${r.median.toFixed(1)} ms while orbiting (${r.frames} frames); ${r.calls} draw calls, ${r.triangles.toLocaleString('en-US')} triangles`,
+      );
     }
     const ratio = results.on.median / results.off.median;
     console.log(`  shadows cost ${ratio.toFixed(2)}× the frame time without them (budget 1.5×: ${ratio <= 1.5 ? 'met' : 'MISSED'})`);

@@ -28,14 +28,20 @@ function freePort(): Promise<number> {
 async function signIn(base: string, email: string): Promise<string> {
   const csrfRes = await fetch(`${base}/api/auth/csrf`);
   const { csrfToken } = (await csrfRes.json()) as { csrfToken: string };
-  const jar = csrfRes.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
+  const jar = csrfRes.headers
+    .getSetCookie()
+    .map((c) => c.split(';')[0])
+    .join('; ');
   const res = await fetch(`${base}/api/auth/callback/credentials`, {
     method: 'POST',
     redirect: 'manual',
     headers: { 'content-type': 'application/x-www-form-urlencoded', cookie: jar, origin: base },
     body: new URLSearchParams({ csrfToken, email, password: 'chordline-demo' }),
   });
-  const session = res.headers.getSetCookie().map((c) => c.split(';')[0]).find((c) => c.includes('session-token'));
+  const session = res.headers
+    .getSetCookie()
+    .map((c) => c.split(';')[0])
+    .find((c) => c.includes('session-token'));
   if (!session) throw new Error(`sign-in failed for ${email}`);
   return session;
 }
@@ -77,13 +83,22 @@ async function main() {
   const server = spawn('npx', ['next', 'start', '-p', String(port), '-H', '127.0.0.1'], { cwd: root, env: { ...env, NEXTAUTH_URL: base }, stdio: 'ignore', detached: true });
   const line = (what: string, got: number | string | boolean, want: number | string | boolean) => console.log(`${String(got) === String(want) ? 'ok  ' : 'FAIL'} ${what}: ${got} (want ${want})`);
   try {
-    for (let i = 0; i < 240 && !(await fetch(`${base}/api/health`).then((r) => r.ok).catch(() => false)); i++) await new Promise((r) => setTimeout(r, 250));
+    for (
+      let i = 0;
+      i < 240 &&
+      !(await fetch(`${base}/api/health`)
+        .then((r) => r.ok)
+        .catch(() => false));
+      i++
+    )
+      await new Promise((r) => setTimeout(r, 250));
     const admin = await signIn(base, 'admin@example.com');
     const crew = await signIn(base, 'crew@example.com');
     const engineer = await signIn(base, 'engineer@example.com');
     const inspector = await signIn(base, 'inspector@example.com');
     const planted = JSON.stringify({ email: 'planted@test.invalid', name: 'P', role: 'admin', password: 'planted-password-1' });
-    const post = (url: string, cookie: string, body: BodyInit, headers: Record<string, string>) => fetch(`${base}${url}`, { method: 'POST', redirect: 'manual', headers: { cookie, ...headers }, body });
+    const post = (url: string, cookie: string, body: BodyInit, headers: Record<string, string>) =>
+      fetch(`${base}${url}`, { method: 'POST', redirect: 'manual', headers: { cookie, ...headers }, body });
     line('text/plain JSON to /api/admin/users from another port', (await post('/api/admin/users', admin, planted, { 'content-type': 'text/plain', origin: 'http://127.0.0.1:3100' })).status, 403);
     line('text/plain JSON to /api/admin/users from the app itself', (await post('/api/admin/users', admin, planted, { 'content-type': 'text/plain', origin: base })).status, 415);
     const before = await fetch(`${base}/api/bridges`, { headers: { cookie: crew } });
@@ -97,7 +112,11 @@ async function main() {
     line('signed-in open redirect goes to', new URL(redirect.headers.get('location') ?? '/none', base).origin, base);
     const page = await fetch(`${base}/bridges/1`, { redirect: 'manual' });
     line('signed-out /bridges/1 leaks the name', /Marlow Creek/.test(await page.text()), false);
-    line('points_per_span 10000 with interior=1', (await post('/api/compute?interior=1', engineer, JSON.stringify({ ...demoBridges[0], points_per_span: 10000 }), { 'content-type': 'application/json', origin: base })).status, 422);
+    line(
+      'points_per_span 10000 with interior=1',
+      (await post('/api/compute?interior=1', engineer, JSON.stringify({ ...demoBridges[0], points_per_span: 10000 }), { 'content-type': 'application/json', origin: base })).status,
+      422,
+    );
     line('GET /api/bridges/%E0%A4%A', (await fetch(`${base}/api/bridges/%E0%A4%A`, { headers: { cookie: engineer } })).status, 400);
     const form = new FormData();
     form.append('file', new Blob([new Uint8Array(png(7999, 7999))], { type: 'image/png' }), 'huge.png');
@@ -121,7 +140,9 @@ async function main() {
     }
     const statuses = await Promise.all(work);
     times.sort((a, b) => a - b);
-    console.log(`heavy compute ${statuses[0]}, 49 MP photo ${statuses[1]}; /api/health during them: ${times.length} answers, median ${times[Math.floor(times.length / 2)].toFixed(0)} ms, slowest ${times[times.length - 1].toFixed(0)} ms (want < 200)`);
+    console.log(
+      `heavy compute ${statuses[0]}, 49 MP photo ${statuses[1]}; /api/health during them: ${times.length} answers, median ${times[Math.floor(times.length / 2)].toFixed(0)} ms, slowest ${times[times.length - 1].toFixed(0)} ms (want < 200)`,
+    );
   } finally {
     try {
       process.kill(-server.pid!, 'SIGTERM');

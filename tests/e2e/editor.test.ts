@@ -136,9 +136,17 @@ describe('geometry editor in a real browser', () => {
     expect(await page.getByRole('button', { name: 'Save revision' }).isDisabled()).toBe(false);
     // Rows can be added and removed: a new bent adds an offset to every girder.
     await page.getByRole('button', { name: '+ Add bent' }).click();
-    expect(await girderRow(page, 'G3').getByRole('textbox', { name: /^Offset at / }).count()).toBe(5);
+    expect(
+      await girderRow(page, 'G3')
+        .getByRole('textbox', { name: /^Offset at / })
+        .count(),
+    ).toBe(5);
     await page.getByRole('button', { name: 'Remove Bent 5' }).click();
-    expect(await girderRow(page, 'G3').getByRole('textbox', { name: /^Offset at / }).count()).toBe(4);
+    expect(
+      await girderRow(page, 'G3')
+        .getByRole('textbox', { name: /^Offset at / })
+        .count(),
+    ).toBe(4);
     expect(errors).toEqual([]);
     await context.close();
   });
@@ -156,7 +164,10 @@ describe('geometry editor in a real browser', () => {
 
     // A file with two alignments: the user picks one and the preview follows the choice.
     const single = fs.readFileSync(path.join(fixtures, 'creek-road-ft.xml'), 'utf8');
-    const second = single.slice(single.indexOf('<Alignment name='), single.indexOf('</Alignments>')).replace('name="Willowmere Creek Road CL"', 'name="Creek Road east"').replace('staStart="1000.0000000000"', 'staStart="500.0"');
+    const second = single
+      .slice(single.indexOf('<Alignment name='), single.indexOf('</Alignments>'))
+      .replace('name="Willowmere Creek Road CL"', 'name="Creek Road east"')
+      .replace('staStart="1000.0000000000"', 'staStart="500.0"');
     const two = path.join(fs.mkdtempSync(path.join(os.tmpdir(), 'chordline-landxml-')), 'two-alignments-ft.xml');
     fs.writeFileSync(two, single.replace('</Alignments>', `${second}</Alignments>`));
     await file.setInputFiles(two);
@@ -208,7 +219,10 @@ describe('geometry editor in a real browser', () => {
     await page.locator('#main').getByRole('heading', { name: 'Editing needs an engineer' }).waitFor();
     expect(await page.locator('#main').getByRole('button', { name: 'Save revision' }).count()).toBe(0);
     await page.goto(`${baseUrl}/bridges/${id}/history`);
-    await page.locator('#main').getByText(/one revision so far/).waitFor();
+    await page
+      .locator('#main')
+      .getByText(/one revision so far/)
+      .waitFor();
     await context.close();
   });
 

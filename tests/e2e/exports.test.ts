@@ -65,8 +65,18 @@ describe('the designer’s deliverables from the offsets and sheet pages', () =>
     // PDF (pdf-parse): every exterior row exactly as the on-screen table rounds it (decimal feet).
     const offsetsPdf = await pdfLines(await click(page, /Download PDF/));
     for (const p of exterior) {
-      const row = [p.point, stationText(p.station, 'ft'), offsetCell(p.offset, 'ft', 'decimal-feet'), lengthCell(p.edge_width, 'ft', 'decimal-feet'), lengthCell(p.edge_drop, 'ft', 'decimal-feet'), elevationCell(p.form_target, 'ft')].join(' ');
-      expect([...offsetsPdf.lines].some((l) => l.startsWith(`${row} `)), row).toBe(true);
+      const row = [
+        p.point,
+        stationText(p.station, 'ft'),
+        offsetCell(p.offset, 'ft', 'decimal-feet'),
+        lengthCell(p.edge_width, 'ft', 'decimal-feet'),
+        lengthCell(p.edge_drop, 'ft', 'decimal-feet'),
+        elevationCell(p.form_target, 'ft'),
+      ].join(' ');
+      expect(
+        [...offsetsPdf.lines].some((l) => l.startsWith(`${row} `)),
+        row,
+      ).toBe(true);
     }
     expect(offsetsPdf.text).toContain(`Revision ${stored.revision}`);
     expect(offsetsPdf.text).toContain('CAUTION: GEOMETRY ONLY');

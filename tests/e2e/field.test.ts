@@ -102,7 +102,14 @@ describe('field mode on a phone', () => {
     await page.getByLabel(/Measured edge width/).fill(width2.toFixed(2));
     await page.getByRole('button', { name: 'Record' }).click();
     await expect.poll(() => page.getByTestId('field-verdict').textContent()).toBe('PASS');
-    await expect.poll(() => page.getByRole('status').filter({ hasText: /1 waiting/ }).count()).toBeGreaterThan(0);
+    await expect
+      .poll(() =>
+        page
+          .getByRole('status')
+          .filter({ hasText: /1 waiting/ })
+          .count(),
+      )
+      .toBeGreaterThan(0);
     const kept = await outbox(page);
     expect(kept).toHaveLength(1);
     expect(kept[0]).toMatchObject({ kind: 'check', bridgeId: Number(id), body: { span: 1, girder: 'G1', point: 2 } });
@@ -159,7 +166,12 @@ describe('field mode on a phone', () => {
     expect(await page.getByRole('heading', { name: /Span 2/ }).count()).toBe(0);
     expect(await page.getByText(/revision\s*1/).count()).toBeGreaterThan(0);
     await page.emulateMedia({ media: 'print' });
-    expect(await page.getByRole('note').filter({ hasText: /geometry only/i }).isVisible()).toBe(true);
+    expect(
+      await page
+        .getByRole('note')
+        .filter({ hasText: /geometry only/i })
+        .isVisible(),
+    ).toBe(true);
     expect(await page.getByRole('button', { name: 'Print sheet' }).isVisible()).toBe(false);
     await page.close();
   });

@@ -22,7 +22,10 @@ describe('served pages', () => {
     expect(page.headers.get('referrer-policy')).toBe('strict-origin-when-cross-origin');
     const csrf = await fetch(`${baseUrl}/api/auth/csrf`);
     const { csrfToken } = (await csrf.json()) as { csrfToken: string };
-    const jar = csrf.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
+    const jar = csrf.headers
+      .getSetCookie()
+      .map((c) => c.split(';')[0])
+      .join('; ');
     const signIn = await fetch(`${baseUrl}/api/auth/callback/credentials`, {
       method: 'POST',
       redirect: 'manual',
@@ -46,7 +49,10 @@ describe('foundation in a real browser', () => {
     const page = await browser.newPage({ viewport: { width: 1280, height: 860 } });
     const errors = trackPageErrors(page);
     await signIn(page, baseUrl, 'engineer@example.com');
-    await page.getByRole('link', { name: /new bridge/i }).first().click();
+    await page
+      .getByRole('link', { name: /new bridge/i })
+      .first()
+      .click();
     await page.waitForURL(/\/bridges\/new/);
     const name = `Browser test bridge ${Date.now()}`;
     // A new bridge starts in the form editor from the starter bridge (JSON is only for integrators).

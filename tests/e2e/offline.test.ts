@@ -99,7 +99,15 @@ describe('installable app', () => {
   it('serves the manifest with name, start URL, colours and 192/512 px icons including a maskable one', async () => {
     const res = await fetch(`${baseUrl}/manifest.webmanifest`);
     expect(res.status).toBe(200);
-    const m = (await res.json()) as { name: string; short_name: string; start_url: string; display: string; theme_color: string; background_color: string; icons: { src: string; sizes: string; purpose?: string }[] };
+    const m = (await res.json()) as {
+      name: string;
+      short_name: string;
+      start_url: string;
+      display: string;
+      theme_color: string;
+      background_color: string;
+      icons: { src: string; sizes: string; purpose?: string }[];
+    };
     expect(m.name).toMatch(/Chordline/);
     expect(m.short_name).toBe('Chordline');
     expect(m.start_url).toBe('/bridges');
@@ -184,7 +192,12 @@ describe('field mode without a connection', () => {
 
     const after = await apiGet<Check[]>(page, `/api/bridges/${id}/checks`);
     const fresh = after.filter((c) => !before.some((b) => b.id === c.id));
-    expect(fresh.map((c) => c.client_key).sort()).toEqual(waiting.slice(0, 3).map((w) => w.key).sort());
+    expect(fresh.map((c) => c.client_key).sort()).toEqual(
+      waiting
+        .slice(0, 3)
+        .map((w) => w.key)
+        .sort(),
+    );
     expect(fresh.map((c) => [c.span, c.girder, c.point, c.pass]).sort()).toEqual([0, 1, 2].map((p) => [span, girder, p, true]));
     const photos = (await apiGet<Photo[]>(page, `/api/bridges/${id}/attachments`)).filter((p) => p.client_key === waiting[3].key);
     expect(photos).toHaveLength(1);

@@ -71,41 +71,45 @@ describe('3D view and walkthrough', () => {
 
   // Generous waits: on a busy shared machine software WebGL can take minutes; the time is measured by
   // `npm run bench:scene` instead.
-  it('draws every demo bridge, non-blank, in at most 60 draw calls', async () => {
-    const res = await page.request.get(`${baseUrl}/api/bridges`);
-    expect(res.ok()).toBe(true);
-    const body = await res.json();
-    const bridges: Array<{ id: number; name: string }> = Array.isArray(body) ? body : body.bridges;
-    expect(bridges.length).toBeGreaterThanOrEqual(2);
-    for (const b of bridges) {
-      await page.goto(`${baseUrl}/bridges/${b.id}/view?stats=1`);
-      await page.waitForFunction(() => Number(document.querySelector('[data-testid=render-stats]')?.getAttribute('data-frames') ?? 0) >= 3, null, {
-        timeout: 300_000,
-      });
-      const s = await stats(page);
-      console.info(`[scene] ${b.name}: ${s.calls} draw calls, ${s.triangles} triangles`);
-      expect(s.calls, `${b.name}: draw calls`).toBeGreaterThan(5);
-      expect(s.calls, `${b.name}: draw calls`).toBeLessThanOrEqual(60);
-      expect(s.triangles).toBeGreaterThan(1000);
-      const content = await canvasContent(page);
-      expect(content.covered, `${b.name}: share of the picture drawn`).toBeGreaterThan(0.05);
-      expect(content.colours).toBeGreaterThan(20);
+  it(
+    'draws every demo bridge, non-blank, in at most 60 draw calls',
+    async () => {
+      const res = await page.request.get(`${baseUrl}/api/bridges`);
+      expect(res.ok()).toBe(true);
+      const body = await res.json();
+      const bridges: Array<{ id: number; name: string }> = Array.isArray(body) ? body : body.bridges;
+      expect(bridges.length).toBeGreaterThanOrEqual(2);
+      for (const b of bridges) {
+        await page.goto(`${baseUrl}/bridges/${b.id}/view?stats=1`);
+        await page.waitForFunction(() => Number(document.querySelector('[data-testid=render-stats]')?.getAttribute('data-frames') ?? 0) >= 3, null, {
+          timeout: 300_000,
+        });
+        const s = await stats(page);
+        console.info(`[scene] ${b.name}: ${s.calls} draw calls, ${s.triangles} triangles`);
+        expect(s.calls, `${b.name}: draw calls`).toBeGreaterThan(5);
+        expect(s.calls, `${b.name}: draw calls`).toBeLessThanOrEqual(60);
+        expect(s.triangles).toBeGreaterThan(1000);
+        const content = await canvasContent(page);
+        expect(content.covered, `${b.name}: share of the picture drawn`).toBeGreaterThan(0.05);
+        expect(content.colours).toBeGreaterThan(20);
 
-      // The camera presets move the camera (frames are drawn) without errors, staying in budget.
-      for (const name of ['Plan', 'Along the edge', 'Crew at a bent', 'Free orbit']) {
-        const before = (await stats(page)).frames;
-        await page.getByRole('button', { name, exact: true }).click();
-        await page.waitForFunction((n) => Number(document.querySelector('[data-testid=render-stats]')?.getAttribute('data-frames')) > n + 3, before, { timeout: 120_000 });
+        // The camera presets move the camera (frames are drawn) without errors, staying in budget.
+        for (const name of ['Plan', 'Along the edge', 'Crew at a bent', 'Free orbit']) {
+          const before = (await stats(page)).frames;
+          await page.getByRole('button', { name, exact: true }).click();
+          await page.waitForFunction((n) => Number(document.querySelector('[data-testid=render-stats]')?.getAttribute('data-frames')) > n + 3, before, { timeout: 120_000 });
+          expect((await stats(page)).calls).toBeLessThanOrEqual(60);
+        }
+        // Straight chords ↔ curved girders recomputes through the engine in the page.
+        await page.getByLabel('Curved girders').check();
+        await page.getByLabel('Straight chords').check();
+        await page.waitForTimeout(300);
         expect((await stats(page)).calls).toBeLessThanOrEqual(60);
       }
-      // Straight chords ↔ curved girders recomputes through the engine in the page.
-      await page.getByLabel('Curved girders').check();
-      await page.getByLabel('Straight chords').check();
-      await page.waitForTimeout(300);
-      expect((await stats(page)).calls).toBeLessThanOrEqual(60);
-    }
-    expect(errors.map(String)).toEqual([]);
-  }, 30 * 60_000);
+      expect(errors.map(String)).toEqual([]);
+    },
+    30 * 60_000,
+  );
 
   it('shows the engine’s edge widths and a chosen point’s numbers', async () => {
     const res = await page.request.get(`${baseUrl}/api/bridges`);
@@ -171,15 +175,20 @@ describe('3D view and walkthrough', () => {
     await page.getByLabel(/Curve radius/).fill('1500');
     const t2 = computeOffsetTable(sandboxBridge({ ...DEFAULT_SANDBOX, radius: 1500 }));
     const s2 = t2.span_summaries.find((x) => x.span === 2 && x.side === 'left')!;
-    await expect
-      .poll(async () => (await page.getByTestId('edge-width-summary').locator('tbody tr').allTextContents()).some((r) => r.includes(formatLength(s2.max_edge_width, 'ft'))))
-      .toBe(true);
+    await expect.poll(async () => (await page.getByTestId('edge-width-summary').locator('tbody tr').allTextContents()).some((r) => r.includes(formatLength(s2.max_edge_width, 'ft')))).toBe(true);
 
     // A deck the engine cannot build: a 160 ft chord on a 400 ft radius bows 160² ÷ (8 × 400) = 8 ft
     // off the curve, more than the 3.50 ft overhang. The steps say their numbers are the last good deck's.
     await page.getByLabel(/Span length/).fill('160');
     await page.getByLabel(/Curve radius/).fill('400');
-    await expect.poll(() => page.getByRole('alert').filter({ hasText: /bows 8\.00 ft/ }).count()).toBe(1);
+    await expect
+      .poll(() =>
+        page
+          .getByRole('alert')
+          .filter({ hasText: /bows 8\.00 ft/ })
+          .count(),
+      )
+      .toBe(1);
     expect(await page.getByTestId('walkthrough-stale').textContent()).toMatch(/radius 1500\.00 ft, span 160\.00 ft, overhang 3\.50 ft/);
     const good = computeOffsetTable(sandboxBridge({ ...DEFAULT_SANDBOX, radius: 1500, spanLength: 160 })).span_summaries.find((x) => x.span === 2 && x.side === 'left')!;
     expect(await page.getByTestId('walkthrough-step').textContent()).toContain(formatLength(good.max_edge_width, 'ft'));

@@ -57,7 +57,10 @@ describe('attacks against the served app', () => {
     const context = await browser.newContext();
     const page = await context.newPage();
     await signIn(page, baseUrl, 'crew@example.com');
-    const saved = (await context.cookies()).filter((c) => c.name.includes('session-token')).map((c) => `${c.name}=${c.value}`).join('; ');
+    const saved = (await context.cookies())
+      .filter((c) => c.name.includes('session-token'))
+      .map((c) => `${c.name}=${c.value}`)
+      .join('; ');
     expect((await fetch(`${baseUrl}/api/bridges`, { headers: { cookie: saved } })).status).toBe(200);
     await page.getByRole('button', { name: /sign out/i }).click();
     await page.waitForURL(/\/signin/);
@@ -86,9 +89,11 @@ describe('attacks against the served app', () => {
     await page.getByRole('button', { name: /sign in/i }).click();
     await page.waitForURL(/\/bridges/);
     expect(new URL(page.url()).origin).toBe(baseUrl);
-    // Signed in, the same link also stays here.
-    await page.goto(`${baseUrl}/signin?callbackUrl=/%09/evil.example:3100/x`);
-    expect(new URL(page.url()).origin).toBe(baseUrl);
+    // Signed in, the same link also stays here. A fresh tab of the same session, so the first tab's
+    // client-side replace and refresh after sign-in cannot abort this navigation.
+    const second = await context.newPage();
+    await second.goto(`${baseUrl}/signin?callbackUrl=/%09/evil.example:3100/x`);
+    expect(new URL(second.url()).origin).toBe(baseUrl);
     await context.close();
   });
 
@@ -113,7 +118,10 @@ describe('attacks against the served app', () => {
     await row.getByRole('button', { name: 'Enable' }).waitFor();
     if (process.env.E2E_SCREENSHOTS) await page.screenshot({ path: `${process.env.E2E_SCREENSHOTS}/admin-users-disabled.png`, fullPage: true });
     await row.getByRole('button', { name: 'Remove' }).click();
-    await page.getByRole('alertdialog').getByText(/keep their name/).waitFor();
+    await page
+      .getByRole('alertdialog')
+      .getByText(/keep their name/)
+      .waitFor();
     if (process.env.E2E_SCREENSHOTS) await page.screenshot({ path: `${process.env.E2E_SCREENSHOTS}/admin-users-remove.png`, fullPage: true });
     await page.getByRole('button', { name: 'Yes, remove this user' }).click();
     await expect.poll(() => page.getByRole('row', { name: /Lee Leaving/ }).count()).toBe(0);

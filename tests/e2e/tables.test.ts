@@ -101,7 +101,12 @@ describe('offset tables in a real browser', () => {
     const slabHeader = await slab.locator('thead th').allTextContents();
     const slabRow = slab.locator('tbody tr').nth(4);
     expect(await slabRow.locator('th').textContent()).toBe('4');
-    expect(await slabRow.locator('td').nth(slabHeader.indexOf('G3') - 1).textContent()).toBe(formatFeet(g3.bottom_of_slab));
+    expect(
+      await slabRow
+        .locator('td')
+        .nth(slabHeader.indexOf('G3') - 1)
+        .textContent(),
+    ).toBe(formatFeet(g3.bottom_of_slab));
     expect(errors).toEqual([]);
     await page.close();
   });
@@ -132,10 +137,10 @@ describe('offset tables in a real browser', () => {
     await signIn(page, baseUrl, 'engineer@example.com');
     // The demo deck's numbers read as metres: an invented metric bridge of the same shape.
     const description = { ...demoBridges[0], units: 'm', deck: { ...demoBridges[0].deck, form_settlement: 0.005 }, top_of_girder: [] };
-    const created = await page.evaluate(
-      async (body) => (await fetch('/api/bridges', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) })).json(),
-      { name: `Metric browser bridge ${Date.now()}`, description },
-    );
+    const created = await page.evaluate(async (body) => (await fetch('/api/bridges', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) })).json(), {
+      name: `Metric browser bridge ${Date.now()}`,
+      description,
+    });
     await page.goto(`${baseUrl}/bridges/${created.id}/offsets`);
     const name = /span 1, left overhang/i;
     await page.getByRole('table', { name }).waitFor();
@@ -197,7 +202,12 @@ describe('offset tables in a real browser', () => {
     await desktop.pdf({ path: path.join(shots, 'offsets.pdf'), format: 'Letter', landscape: true, printBackground: true });
     // On paper: the caution, the bridge name and revision are there; the controls are not.
     expect(await desktop.getByText(/caution: geometry only/i).isVisible()).toBe(true);
-    expect(await desktop.getByText(/revision \d+/i).first().isVisible()).toBe(true);
+    expect(
+      await desktop
+        .getByText(/revision \d+/i)
+        .first()
+        .isVisible(),
+    ).toBe(true);
     expect(await desktop.getByRole('region', { name: /table controls/i }).isVisible()).toBe(false);
     await desktop.close();
 

@@ -30,7 +30,12 @@ afterAll(() => {
 
 describe('offsets command', () => {
   it('prints the same table as computeOffsetTable as JSON', () => {
-    const bridge = straightBridge({ bents: [{ name: 'Bent 1', station: 100, skew_deg: 12 }, { name: 'Bent 2', station: 230, skew_deg: -5 }] });
+    const bridge = straightBridge({
+      bents: [
+        { name: 'Bent 1', station: 100, skew_deg: 12 },
+        { name: 'Bent 2', station: 230, skew_deg: -5 },
+      ],
+    });
     const r = run(file('ok.json', JSON.stringify(bridge)));
     expect(r.stderr).toBe('');
     expect(r.code).toBe(0);
@@ -43,9 +48,7 @@ describe('offsets command', () => {
     const r = run(file('ok.json', JSON.stringify(bridge)), '--format', 'csv');
     expect(r.code).toBe(0);
     const lines = r.stdout.trim().split('\n');
-    expect(lines[0]).toBe(
-      'span,girder,side,point,station,offset,edge_width_ft,edge_drop_ft,form_target_ft,top_of_girder_ft,buildup_ft,drop_from_girder_top_ft,top_of_deck_ft,bottom_of_slab_ft',
-    );
+    expect(lines[0]).toBe('span,girder,side,point,station,offset,edge_width_ft,edge_drop_ft,form_target_ft,top_of_girder_ft,buildup_ft,drop_from_girder_top_ft,top_of_deck_ft,bottom_of_slab_ft');
     expect(lines).toHaveLength(1 + computeOffsetTable(bridge).points.length);
     // Girder G1 point 0: station 1+00.00, 16 ft left, 4 ft overhang (straight bridge, hand-checked).
     expect(lines[1]).toMatch(/^1,G1,left,0,1\+00\.00,16\.00 LT,4\.00,/);
@@ -65,17 +68,32 @@ describe('offsets command', () => {
     ['a schema error', () => file('schema.json', JSON.stringify({ ...straightBridge(), units: 'furlongs' })), /units: Units must be "ft" or "m"/],
     [
       'a geometry error',
-      () => file('geo.json', JSON.stringify(straightBridge({ girders: [{ name: 'G1', layout: 'chord', offsets: [-16, -20.3] }, { name: 'G2', layout: 'chord', offsets: [16, 16] }] }))),
+      () =>
+        file(
+          'geo.json',
+          JSON.stringify(
+            straightBridge({
+              girders: [
+                { name: 'G1', layout: 'chord', offsets: [-16, -20.3] },
+                { name: 'G2', layout: 'chord', offsets: [16, 16] },
+              ],
+            }),
+          ),
+        ),
       /Span 1, girder G1, point 10: the girder point is at or beyond the left deck edge \(edge width -0\.30 ft\)/,
     ],
-  ])('exits 1 with one stderr line for %s', (_what, make, pattern) => {
-    const r = run(make());
-    expect(r.code).toBe(1);
-    expect(r.stdout).toBe('');
-    const lines = r.stderr.split('\n').filter((l) => l.length > 0);
-    expect(lines).toHaveLength(1);
-    expect(lines[0]).toMatch(pattern);
-  }, 60000);
+  ])(
+    'exits 1 with one stderr line for %s',
+    (_what, make, pattern) => {
+      const r = run(make());
+      expect(r.code).toBe(1);
+      expect(r.stdout).toBe('');
+      const lines = r.stderr.split('\n').filter((l) => l.length > 0);
+      expect(lines).toHaveLength(1);
+      expect(lines[0]).toMatch(pattern);
+    },
+    60000,
+  );
 
   it('prints every problem on its own line, the first 20 and then a count', () => {
     const b = straightBridge();

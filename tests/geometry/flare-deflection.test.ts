@@ -27,12 +27,18 @@ describe('flared edge on a straight alignment (closed form by hand)', () => {
     // to 18 (direction (2, 300)); from Pk outward square to the girder, w = (300, −2)/n, n = √(300² + 2²):
     // x_k + 300t/n = e(s_k − 2t/n)  ⇒  t = n (e(s_k) − x_k) / 300.04 while the edge point's station is
     // within the list; before station 100 the edge is constant (20 ft): t = n (20 − x_k) / 300.
-    const b = flared([{ station: 100, offset: 20 }, { station: 400, offset: 26 }], {
-      girders: [
-        { name: 'G1', layout: 'chord', offsets: [-16, -16] },
-        { name: 'G3', layout: 'chord', offsets: [16, 18] },
+    const b = flared(
+      [
+        { station: 100, offset: 20 },
+        { station: 400, offset: 26 },
       ],
-    });
+      {
+        girders: [
+          { name: 'G1', layout: 'chord', offsets: [-16, -16] },
+          { name: 'G3', layout: 'chord', offsets: [16, 18] },
+        ],
+      },
+    );
     const t = computeOffsetTable(b);
     const n = Math.hypot(300, 2);
     const e = (s: number) => (s <= 100 ? 20 : 20 + 0.02 * (s - 100));
@@ -59,7 +65,14 @@ describe('flared edge on a straight alignment (closed form by hand)', () => {
     // Edge (20 at 100) → (23 at 250), then 23 to 400. Chord Ea (20, 100) → Eb (23, 400); outward
     // normal w = (300, −3)/n. Against the first leg: t(300 + 0.06)/n = 20 + 0.02(y − 100) − x; against
     // the second: t = n(23 − x)/300; the leg whose station range holds the foot is the answer.
-    const b = flared([{ station: 100, offset: 20 }, { station: 250, offset: 23 }, { station: 400, offset: 23 }], { chord_spaces: 10 });
+    const b = flared(
+      [
+        { station: 100, offset: 20 },
+        { station: 250, offset: 23 },
+        { station: 400, offset: 23 },
+      ],
+      { chord_spaces: 10 },
+    );
     const set = computeOffsetTable(b).chord_offsets.find((c) => c.side === 'right')!;
     const n = Math.hypot(300, 3);
     expect(set.chord_length).toBeCloseTo(n, 9);
@@ -76,12 +89,18 @@ describe('flared edge on a straight alignment (closed form by hand)', () => {
   });
 
   it('curved layout: Ek at the girder point station, at the edge offset of that station; constant beyond the list', () => {
-    const b = flared([{ station: 150, offset: 20 }, { station: 350, offset: 24 }], {
-      girders: [
-        { name: 'G1', layout: 'curved', offsets: [-16, -16] },
-        { name: 'G3', layout: 'curved', offsets: [16, 16] },
+    const b = flared(
+      [
+        { station: 150, offset: 20 },
+        { station: 350, offset: 24 },
       ],
-    });
+      {
+        girders: [
+          { name: 'G1', layout: 'curved', offsets: [-16, -16] },
+          { name: 'G3', layout: 'curved', offsets: [16, 16] },
+        ],
+      },
+    );
     const e = (s: number) => (s <= 150 ? 20 : s >= 350 ? 24 : 20 + 0.02 * (s - 150));
     for (const p of computeOffsetTable(b).points.filter((q) => q.side === 'right')) {
       expect(p.edge_station).toBeCloseTo(p.station, 9);
@@ -138,7 +157,11 @@ describe('hostile inputs are refused naming the field', () => {
   const messages = (b: unknown) => {
     const r = parseBridge(b);
     if (r.ok) return '';
-    return r.kind === 'schema' ? Object.entries(r.fields).map(([k, v]) => `${k}: ${v.join('; ')}`).join('\n') : r.issues.map((i) => `${i.path} | ${i.message}`).join('\n');
+    return r.kind === 'schema'
+      ? Object.entries(r.fields)
+          .map(([k, v]) => `${k}: ${v.join('; ')}`)
+          .join('\n')
+      : r.issues.map((i) => `${i.path} | ${i.message}`).join('\n');
   };
   const withElements = (elements: unknown[]) => {
     const b = straightBridge();
@@ -146,22 +169,50 @@ describe('hostile inputs are refused naming the field', () => {
   };
 
   it('a spiral with both radii null, or equal radii', () => {
-    expect(messages(withElements([{ type: 'spiral', length: 500, radius_start: null, radius_end: null, direction: 'left' }]))).toMatch(/alignment\.elements\.0\.radius_end: a spiral with both radii infinite/);
+    expect(messages(withElements([{ type: 'spiral', length: 500, radius_start: null, radius_end: null, direction: 'left' }]))).toMatch(
+      /alignment\.elements\.0\.radius_end: a spiral with both radii infinite/,
+    );
     expect(messages(withElements([{ type: 'spiral', length: 500, radius_start: 900, radius_end: 900, direction: 'left' }]))).toMatch(/alignment\.elements\.0\.radius_end: a spiral with equal radii/);
   });
 
   it('a flare whose edges cross, even beyond the bents', () => {
     const b = straightBridge();
-    const crossing = { ...b, deck: { ...b.deck, right_edge_offset: [{ station: 100, offset: 20 }, { station: 300, offset: -25 }] } };
+    const crossing = {
+      ...b,
+      deck: {
+        ...b.deck,
+        right_edge_offset: [
+          { station: 100, offset: 20 },
+          { station: 300, offset: -25 },
+        ],
+      },
+    };
     expect(messages(crossing)).toMatch(/deck\.left_edge_offset \| .*touch or cross/);
-    const beyond = { ...b, deck: { ...b.deck, left_edge_offset: [{ station: 0, offset: 20 }, { station: 50, offset: -20 }] } };
+    const beyond = {
+      ...b,
+      deck: {
+        ...b.deck,
+        left_edge_offset: [
+          { station: 0, offset: 20 },
+          { station: 50, offset: -20 },
+        ],
+      },
+    };
     expect(messages(beyond)).toMatch(/touch or cross/);
   });
 
   it('deflection tables: one value, an unknown girder or span, a second entry, too many values', () => {
     const b = straightBridge();
     expect(messages({ ...b, deflections: [{ girder: 'G1', span: 1, values: [0.02] }] })).toMatch(/^deflections\.0\.values: /);
-    const bad = messages({ ...b, deflections: [{ girder: 'G9', span: 1, values: [0, 0] }, { girder: 'G1', span: 2, values: [0, 0] }, { girder: 'G2', span: 1, values: [0, 1] }, { girder: 'G2', span: 1, values: [0, 1] }] });
+    const bad = messages({
+      ...b,
+      deflections: [
+        { girder: 'G9', span: 1, values: [0, 0] },
+        { girder: 'G1', span: 2, values: [0, 0] },
+        { girder: 'G2', span: 1, values: [0, 1] },
+        { girder: 'G2', span: 1, values: [0, 1] },
+      ],
+    });
     expect(bad).toMatch(/deflections\.0\.girder \| .*no girder named G9/);
     expect(bad).toMatch(/deflections\.1\.span \| .*span 2 does not exist/);
     expect(bad).toMatch(/deflections\.3 \| .*second deflection table for girder G2, span 1/);

@@ -14,7 +14,10 @@ const dir = path.join(__dirname, 'golden');
 const regen = process.env.REGEN === '1';
 
 function slug(name: string): string {
-  return name.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '');
+  return name
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, '-')
+    .replace(/^-|-$/g, '');
 }
 
 /** Every difference between two JSON values: numbers to 1e-9, everything else exactly; paths for the message. */

@@ -7,7 +7,12 @@ export function straightBridge(overrides: Partial<BridgeDescription> = {}): Brid
     name: 'Straight test bridge',
     units: 'ft',
     alignment: { start_station: 0, start_x: 0, start_y: 0, start_bearing_deg: 0, elements: [{ type: 'line', length: 500 }] },
-    profile: { pvis: [{ station: 0, elevation: 100 }, { station: 500, elevation: 105 }] },
+    profile: {
+      pvis: [
+        { station: 0, elevation: 100 },
+        { station: 500, elevation: 105 },
+      ],
+    },
     cross_slopes: [{ station: 0, left: -0.03, right: -0.03 }],
     deck: {
       left_edge_offset: -20,
@@ -64,7 +69,12 @@ export function arcBridge(opts: {
         { type: 'line', length: 200 },
       ],
     },
-    profile: { pvis: [{ station: 1000, elevation: 300 }, { station: 3000, elevation: 310 }] },
+    profile: {
+      pvis: [
+        { station: 1000, elevation: 300 },
+        { station: 3000, elevation: 310 },
+      ],
+    },
     cross_slopes: [{ station: 1000, left: -0.02, right: -0.02 }],
     deck: {
       left_edge_offset: -edge,

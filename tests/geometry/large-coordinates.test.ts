@@ -13,28 +13,21 @@ function moved(bridge: BridgeDescription, x: number, y: number): BridgeDescripti
 describe('state-plane sized coordinates', () => {
   it('give the same table as the bridge near the origin, translated', () => {
     fc.assert(
-      fc.property(
-        fc.constantFrom(...demoBridges),
-        fc.double({ min: -3e7, max: 3e7, noNaN: true }),
-        fc.double({ min: -3e7, max: 3e7, noNaN: true }),
-        (bridge, x, y) => {
-          const near = computeOffsetTable(moved(bridge, 0, 0));
-          const far = computeOffsetTable(moved(bridge, x, y));
-          expect(far.points.length).toBe(near.points.length);
-          far.points.forEach((p, i) => {
-            const q = near.points[i];
-            for (const k of ['station', 'offset', 'edge_width', 'edge_drop', 'form_target', 'edge_station'] as const) {
-              if (q[k] === null) expect(p[k]).toBeNull();
-              else expect(Math.abs((p[k] as number) - (q[k] as number))).toBeLessThan(1e-7);
-            }
-            expect(Math.abs(p.x - (q.x + x))).toBeLessThan(1e-6);
-            expect(Math.abs(p.y - (q.y + y))).toBeLessThan(1e-6);
-          });
-          far.chord_offsets.forEach((c, i) =>
-            c.offsets.forEach((o, j) => expect(Math.abs(o.offset - near.chord_offsets[i].offsets[j].offset)).toBeLessThan(1e-7)),
-          );
-        },
-      ),
+      fc.property(fc.constantFrom(...demoBridges), fc.double({ min: -3e7, max: 3e7, noNaN: true }), fc.double({ min: -3e7, max: 3e7, noNaN: true }), (bridge, x, y) => {
+        const near = computeOffsetTable(moved(bridge, 0, 0));
+        const far = computeOffsetTable(moved(bridge, x, y));
+        expect(far.points.length).toBe(near.points.length);
+        far.points.forEach((p, i) => {
+          const q = near.points[i];
+          for (const k of ['station', 'offset', 'edge_width', 'edge_drop', 'form_target', 'edge_station'] as const) {
+            if (q[k] === null) expect(p[k]).toBeNull();
+            else expect(Math.abs((p[k] as number) - (q[k] as number))).toBeLessThan(1e-7);
+          }
+          expect(Math.abs(p.x - (q.x + x))).toBeLessThan(1e-6);
+          expect(Math.abs(p.y - (q.y + y))).toBeLessThan(1e-6);
+        });
+        far.chord_offsets.forEach((c, i) => c.offsets.forEach((o, j) => expect(Math.abs(o.offset - near.chord_offsets[i].offsets[j].offset)).toBeLessThan(1e-7)));
+      }),
       { numRuns: 20 },
     );
     // Three demo bridges (one with spirals) × 20 runs × two tables: room for a busy machine.

@@ -142,11 +142,7 @@ describe('overhang and chord offsets against @flatten-js/core (property)', () =>
  * Edge point on a bent line, found independently of the engine's solver: flatten intersects the
  * straight bent line with the edge circle; the crossing nearer the alignment is the one on the deck.
  */
-function edgeOnBent(
-  al: ReturnType<typeof createAlignment>,
-  bent: { station: number; skew_deg: number },
-  circle: Circle,
-): { x: number; y: number } {
+function edgeOnBent(al: ReturnType<typeof createAlignment>, bent: { station: number; skew_deg: number }, circle: Circle): { x: number; y: number } {
   const base = al.pointAt(bent.station);
   const lineBearing = base.bearing + Math.PI / 2 - (bent.skew_deg * Math.PI) / 180;
   const p0 = new Point(base.x, base.y);

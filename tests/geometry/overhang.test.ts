@@ -61,7 +61,14 @@ describe('straight square bridge (hand-checkable)', () => {
 
   it('level under the barrier: a girder outside the gutter line sees no slope to the edge', () => {
     // Data contract: top of deck is level from the gutter line to the edge.
-    const t = computeOffsetTable(straightBridge({ girders: [{ name: 'G1', layout: 'chord', offsets: [-19, -19] }, { name: 'G2', layout: 'chord', offsets: [19, 19] }] }));
+    const t = computeOffsetTable(
+      straightBridge({
+        girders: [
+          { name: 'G1', layout: 'chord', offsets: [-19, -19] },
+          { name: 'G2', layout: 'chord', offsets: [19, 19] },
+        ],
+      }),
+    );
     for (const p of t.points) expect(Math.abs((p.edge_drop ?? NaN) - (0.75 - 0.7))).toBeLessThan(TOL);
   });
 
@@ -96,7 +103,19 @@ describe('straight square bridge (hand-checkable)', () => {
   });
 
   it('orders points by span, then girder in input order, then point', () => {
-    const t = computeOffsetTable(straightBridge({ bents: [{ name: 'A', station: 100, skew_deg: 0 }, { name: 'B', station: 200, skew_deg: 0 }, { name: 'C', station: 300, skew_deg: 0 }], girders: [{ name: 'G1', layout: 'chord', offsets: [-16, -16, -16] }, { name: 'G2', layout: 'chord', offsets: [16, 16, 16] }] }));
+    const t = computeOffsetTable(
+      straightBridge({
+        bents: [
+          { name: 'A', station: 100, skew_deg: 0 },
+          { name: 'B', station: 200, skew_deg: 0 },
+          { name: 'C', station: 300, skew_deg: 0 },
+        ],
+        girders: [
+          { name: 'G1', layout: 'chord', offsets: [-16, -16, -16] },
+          { name: 'G2', layout: 'chord', offsets: [16, 16, 16] },
+        ],
+      }),
+    );
     const keys = t.points.map((p) => `${p.span}-${p.girder}-${String(p.point).padStart(2, '0')}`);
     expect(keys.slice(0, 11).every((k) => k.startsWith('1-G1'))).toBe(true);
     expect(keys[11]).toBe('1-G2-00');
@@ -106,7 +125,14 @@ describe('straight square bridge (hand-checkable)', () => {
 
   it('skewed bents on a straight road: edge width still square to the girder', () => {
     // Parallel lines stay 4 ft apart whatever the skew; the edge point slides along the skew.
-    const t = computeOffsetTable(straightBridge({ bents: [{ name: 'A', station: 100, skew_deg: 30 }, { name: 'B', station: 200, skew_deg: -20 }] }));
+    const t = computeOffsetTable(
+      straightBridge({
+        bents: [
+          { name: 'A', station: 100, skew_deg: 30 },
+          { name: 'B', station: 200, skew_deg: -20 },
+        ],
+      }),
+    );
     for (const p of t.points.filter((q) => q.side !== 'interior')) expect(Math.abs((p.edge_width ?? NaN) - 4)).toBeLessThan(TOL);
     const g3 = t.points.find((p) => p.girder === 'G3' && p.point === 0) as OffsetPoint;
     expect(g3.station).toBeCloseTo(100 + 16 * Math.tan(Math.PI / 6), 9);

@@ -58,7 +58,13 @@ describe('spiral: classical series (route surveying; θs = Ls/2R, X and Y series
     [150, 1000],
     [350, 954.93],
   ])('Ls %d ft into R %d ft: θs, X, Y, long and short tangents', (Ls, R) => {
-    const al = createAlignment({ start_station: 0, start_x: 500, start_y: 800, start_bearing_deg: 33, elements: [{ type: 'spiral', length: Ls, radius_start: null, radius_end: R, direction: 'left' }] });
+    const al = createAlignment({
+      start_station: 0,
+      start_x: 500,
+      start_y: 800,
+      start_bearing_deg: 33,
+      elements: [{ type: 'spiral', length: Ls, radius_start: null, radius_end: R, direction: 'left' }],
+    });
     const ts = al.pointAt(0);
     const sc = al.pointAt(Ls);
     const th = Ls / (2 * R);
@@ -154,19 +160,34 @@ const length = fc.double({ min: 20, max: 400, noNaN: true });
 describe('spiral: properties against the Fresnel oracle (fast-check, @stdlib/math)', () => {
   it('positions agree with the Fresnel integrals to 1e-9 of L, for any start bearing and either hand', () => {
     fc.assert(
-      fc.property(length, radius, radius, fc.double({ min: 0, max: 1, noNaN: true }), fc.double({ min: -360, max: 360, noNaN: true }), fc.boolean(), fc.boolean(), (L, Ra, Rb, f, b0, right, fromTangent) => {
-        const r1 = fromTangent ? null : Math.max(Ra, Rb) * 1.5;
-        const r2 = Math.min(Ra, Rb);
-        fc.pre(r1 === null || Math.abs(1 / r1 - 1 / r2) > 1e-6);
-        const turn = right ? 1 : -1;
-        const al = createAlignment({ start_station: 100, start_x: 0, start_y: 0, start_bearing_deg: b0, elements: [{ type: 'spiral', length: L, radius_start: r1, radius_end: r2, direction: right ? 'right' : 'left' }] });
-        const t = f * L;
-        const o = fresnelLocal(L, r1 === null ? 0 : 1 / r1, 1 / r2, t);
-        const p = al.pointAt(100 + t);
-        const l = local(p, { x: 0, y: 0 }, (b0 * Math.PI) / 180, turn);
-        expect(Math.abs(l.X - o.X)).toBeLessThan(1e-9 * L);
-        expect(Math.abs(l.Y - o.Y)).toBeLessThan(1e-9 * L);
-      }),
+      fc.property(
+        length,
+        radius,
+        radius,
+        fc.double({ min: 0, max: 1, noNaN: true }),
+        fc.double({ min: -360, max: 360, noNaN: true }),
+        fc.boolean(),
+        fc.boolean(),
+        (L, Ra, Rb, f, b0, right, fromTangent) => {
+          const r1 = fromTangent ? null : Math.max(Ra, Rb) * 1.5;
+          const r2 = Math.min(Ra, Rb);
+          fc.pre(r1 === null || Math.abs(1 / r1 - 1 / r2) > 1e-6);
+          const turn = right ? 1 : -1;
+          const al = createAlignment({
+            start_station: 100,
+            start_x: 0,
+            start_y: 0,
+            start_bearing_deg: b0,
+            elements: [{ type: 'spiral', length: L, radius_start: r1, radius_end: r2, direction: right ? 'right' : 'left' }],
+          });
+          const t = f * L;
+          const o = fresnelLocal(L, r1 === null ? 0 : 1 / r1, 1 / r2, t);
+          const p = al.pointAt(100 + t);
+          const l = local(p, { x: 0, y: 0 }, (b0 * Math.PI) / 180, turn);
+          expect(Math.abs(l.X - o.X)).toBeLessThan(1e-9 * L);
+          expect(Math.abs(l.Y - o.Y)).toBeLessThan(1e-9 * L);
+        },
+      ),
       { numRuns: 150 },
     );
   });
@@ -175,7 +196,13 @@ describe('spiral: properties against the Fresnel oracle (fast-check, @stdlib/mat
     fc.assert(
       fc.property(length, radius, fc.option(radius, { nil: null }), fc.boolean(), (L, Ra, Rb, right) => {
         fc.pre(Rb === null || Math.abs(Ra - Rb) > 1);
-        const al = createAlignment({ start_station: 0, start_x: 0, start_y: 0, start_bearing_deg: 10, elements: [{ type: 'spiral', length: L, radius_start: Rb, radius_end: Ra, direction: right ? 'right' : 'left' }] });
+        const al = createAlignment({
+          start_station: 0,
+          start_x: 0,
+          start_y: 0,
+          start_bearing_deg: 10,
+          elements: [{ type: 'spiral', length: L, radius_start: Rb, radius_end: Ra, direction: right ? 'right' : 'left' }],
+        });
         const k = (L * (1 / Ra + (Rb === null ? 0 : 1 / Rb))) / 2;
         expect(Math.abs(al.pointAt(L).bearing - al.pointAt(0).bearing - (right ? k : -k))).toBeLessThan(1e-12);
       }),
@@ -184,32 +211,38 @@ describe('spiral: properties against the Fresnel oracle (fast-check, @stdlib/mat
 
   it('a symmetric spiral–arc–spiral closes on its hand-computed PI: Ts = (R + p)·tan(Δ/2) + k', () => {
     fc.assert(
-      fc.property(fc.double({ min: 50, max: 300, noNaN: true }), fc.double({ min: 400, max: 3000, noNaN: true }), fc.double({ min: 0.05, max: 0.8, noNaN: true }), fc.boolean(), (Ls, R, deltaC, right) => {
-        const th = Ls / (2 * R);
-        const delta = deltaC + 2 * th;
-        // Hand: X, Y of the spiral's end from the Fresnel oracle; p = Y − R(1 − cos θs), k = X − R sin θs.
-        const { X, Y } = fresnelLocal(Ls, 0, 1 / R, Ls);
-        const p = Y - R * (1 - Math.cos(th));
-        const k = X - R * Math.sin(th);
-        const Ts = (R + p) * Math.tan(delta / 2) + k;
-        const dir = right ? 'right' : 'left';
-        const al = createAlignment({
-          start_station: 0,
-          start_x: 10,
-          start_y: 20,
-          start_bearing_deg: 145,
-          elements: [
-            { type: 'spiral', length: Ls, radius_start: null, radius_end: R, direction: dir },
-            { type: 'arc', length: R * deltaC, radius: R, direction: dir },
-            { type: 'spiral', length: Ls, radius_start: R, radius_end: null, direction: dir },
-          ],
-        });
-        const a = al.pointAt(0);
-        const b = al.pointAt(al.endStation);
-        const pi = intersect(a, a.bearing, b, b.bearing);
-        expect(Math.abs(dist(a, pi) - Ts)).toBeLessThan(1e-8 * Ts);
-        expect(Math.abs(dist(b, pi) - Ts)).toBeLessThan(1e-8 * Ts);
-      }),
+      fc.property(
+        fc.double({ min: 50, max: 300, noNaN: true }),
+        fc.double({ min: 400, max: 3000, noNaN: true }),
+        fc.double({ min: 0.05, max: 0.8, noNaN: true }),
+        fc.boolean(),
+        (Ls, R, deltaC, right) => {
+          const th = Ls / (2 * R);
+          const delta = deltaC + 2 * th;
+          // Hand: X, Y of the spiral's end from the Fresnel oracle; p = Y − R(1 − cos θs), k = X − R sin θs.
+          const { X, Y } = fresnelLocal(Ls, 0, 1 / R, Ls);
+          const p = Y - R * (1 - Math.cos(th));
+          const k = X - R * Math.sin(th);
+          const Ts = (R + p) * Math.tan(delta / 2) + k;
+          const dir = right ? 'right' : 'left';
+          const al = createAlignment({
+            start_station: 0,
+            start_x: 10,
+            start_y: 20,
+            start_bearing_deg: 145,
+            elements: [
+              { type: 'spiral', length: Ls, radius_start: null, radius_end: R, direction: dir },
+              { type: 'arc', length: R * deltaC, radius: R, direction: dir },
+              { type: 'spiral', length: Ls, radius_start: R, radius_end: null, direction: dir },
+            ],
+          });
+          const a = al.pointAt(0);
+          const b = al.pointAt(al.endStation);
+          const pi = intersect(a, a.bearing, b, b.bearing);
+          expect(Math.abs(dist(a, pi) - Ts)).toBeLessThan(1e-8 * Ts);
+          expect(Math.abs(dist(b, pi) - Ts)).toBeLessThan(1e-8 * Ts);
+        },
+      ),
       { numRuns: 100 },
     );
   });

@@ -80,7 +80,11 @@ describe('LandXML import: files from several exporters, with spirals', () => {
     // long tangent LT = X − Y/tan θ; short tangent ST = Y/sin θ.
     const xml = text('ramp-spirals-ft.xml');
     const spiral = xml.match(/<Spiral length="150\.000000" radiusEnd="700\.0000" radiusStart="INF"[\s\S]*?<\/Spiral>/)![0];
-    const pt = (tag: string) => spiral.match(new RegExp(`<${tag}>([^<]+)</${tag}>`))![1].split(/\s+/).map(Number);
+    const pt = (tag: string) =>
+      spiral
+        .match(new RegExp(`<${tag}>([^<]+)</${tag}>`))![1]
+        .split(/\s+/)
+        .map(Number);
     const [s, pi, e] = [pt('Start'), pt('PI'), pt('End')];
     const d = (a: number[], b: number[]) => Math.hypot(a[0] - b[0], a[1] - b[1]);
     const L = 150;

@@ -128,8 +128,30 @@ describe('moving the earlier localStorage queue', () => {
 
   it('moves every waiting measurement in order under its own key, once, and empties the old entry', async () => {
     const old = [
-      { key: '0b6c1f8e-1111-4a5b-9c3d-000000000001', span: 2, girder: 'G5', point: 3, measured_edge_width: 4.51, measured_drop_from_girder_top: 0.3, note: 'a', typedAt: '2026-12-01T15:00:00.000Z', attempts: 2, lastError: 'x' },
-      { key: '0b6c1f8e-1111-4a5b-9c3d-000000000002', span: 2, girder: 'G5', point: 4, measured_edge_width: null, measured_drop_from_girder_top: 0.31, note: '', typedAt: '2026-12-01T15:01:00.000Z', attempts: 0, lastError: null },
+      {
+        key: '0b6c1f8e-1111-4a5b-9c3d-000000000001',
+        span: 2,
+        girder: 'G5',
+        point: 3,
+        measured_edge_width: 4.51,
+        measured_drop_from_girder_top: 0.3,
+        note: 'a',
+        typedAt: '2026-12-01T15:00:00.000Z',
+        attempts: 2,
+        lastError: 'x',
+      },
+      {
+        key: '0b6c1f8e-1111-4a5b-9c3d-000000000002',
+        span: 2,
+        girder: 'G5',
+        point: 4,
+        measured_edge_width: null,
+        measured_drop_from_girder_top: 0.31,
+        note: '',
+        typedAt: '2026-12-01T15:01:00.000Z',
+        attempts: 0,
+        lastError: null,
+      },
     ];
     const store = storage({ [`${LEGACY_PREFIX}5`]: JSON.stringify(old), 'other.key': 'kept' });
     expect(await migrateLegacyQueue(ann, store)).toBe(2);

@@ -31,8 +31,7 @@ function expectNear(actual: ArrayLike<number>, at: number, want: [number, number
   for (let k = 0; k < 3; k++) expect(Math.abs(actual[at + k] - want[k])).toBeLessThan(tol);
 }
 
-const exteriorRows = (side: 'left' | 'right', span: number): OffsetPoint[] =>
-  table.points.filter((p) => p.side === side && p.span === span).sort((a, b) => a.point - b.point);
+const exteriorRows = (side: 'left' | 'right', span: number): OffsetPoint[] => table.points.filter((p) => p.side === side && p.span === span).sort((a, b) => a.point - b.point);
 
 describe('scene frame', () => {
   it('puts the origin inside the bridge so float32 keeps hundredths of a foot', () => {
@@ -289,7 +288,11 @@ describe('brackets', () => {
     const placements = placeBrackets(table, 4);
     const inst = buildBracketInstances(placements, f, defaultBracketDims('ft', 6));
     const side = 'left';
-    const tops = (span: number) => placements.map((p, i) => ({ p, i })).filter(({ p }) => p.side === side && p.span === span).map(({ i }) => [inst.postTops[i * 3], inst.postTops[i * 3 + 2]]);
+    const tops = (span: number) =>
+      placements
+        .map((p, i) => ({ p, i }))
+        .filter(({ p }) => p.side === side && p.span === span)
+        .map(({ i }) => [inst.postTops[i * 3], inst.postTops[i * 3 + 2]]);
     const dir = (pts: number[][]) => Math.atan2(pts[pts.length - 1][1] - pts[0][1], pts[pts.length - 1][0] - pts[0][0]);
     for (const span of [1, 2]) {
       const pts = tops(span);
@@ -334,9 +337,7 @@ describe('bents', () => {
     expect(b.columnCount).toBe(9);
     for (let i = 0; i < 3; i++) {
       const top = applyMatrix(b.caps, i, 0, 0.5, 0)[1];
-      const tops = table.points
-        .filter((p) => (p.span === i && p.point === 20) || (p.span === i + 1 && p.point === 0))
-        .map((p) => (p.top_of_girder ?? p.bottom_of_slab) - f.refElevation - 6);
+      const tops = table.points.filter((p) => (p.span === i && p.point === 20) || (p.span === i + 1 && p.point === 0)).map((p) => (p.top_of_girder ?? p.bottom_of_slab) - f.refElevation - 6);
       expect(Math.abs(top - Math.min(...tops))).toBeLessThan(TOL);
       expect(applyMatrix(b.columns, i * 3, -0.5, 0, 0)[1]).toBeCloseTo(b.groundY, 3);
     }

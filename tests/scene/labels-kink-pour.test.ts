@@ -22,7 +22,16 @@ describe('label layout', () => {
   it('never shows two overlapping labels, keeps every shown label inside the picture and clear of the picked point', () => {
     fc.assert(
       fc.property(
-        fc.array(fc.record({ x: fc.double({ min: -50, max: 450, noNaN: true }), y: fc.double({ min: -50, max: 350, noNaN: true }), d: fc.double({ min: 1, max: 1000, noNaN: true }), w: fc.integer({ min: 20, max: 160 }), front: fc.boolean() }), { maxLength: 40 }),
+        fc.array(
+          fc.record({
+            x: fc.double({ min: -50, max: 450, noNaN: true }),
+            y: fc.double({ min: -50, max: 350, noNaN: true }),
+            d: fc.double({ min: 1, max: 1000, noNaN: true }),
+            w: fc.integer({ min: 20, max: 160 }),
+            front: fc.boolean(),
+          }),
+          { maxLength: 40 },
+        ),
         fc.option(fc.record({ x: fc.double({ min: 0, max: 390, noNaN: true }), y: fc.double({ min: 0, max: 300, noNaN: true }) })),
         (labels, pick) => {
           const buf = labelBuffers(labels.length);
@@ -124,7 +133,13 @@ describe('before and after the pour (data contract definitions, worked by hand)'
 
 describe('flared deck lines', () => {
   const base = fixtureBridge('chord');
-  const deck = { ...base.deck, right_edge_offset: [{ station: 1100, offset: 23 }, { station: 1300, offset: 31 }] } as typeof base.deck;
+  const deck = {
+    ...base.deck,
+    right_edge_offset: [
+      { station: 1100, offset: 23 },
+      { station: 1300, offset: 31 },
+    ],
+  } as typeof base.deck;
 
   it('follow the flare linearly between its stations and hold it beyond them', () => {
     // Halfway: 23 + (31 − 23)/2 = 27; gutter 1.5 inside.

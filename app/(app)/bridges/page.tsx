@@ -40,10 +40,7 @@ export default async function BridgesPage({ searchParams }: { searchParams: Sear
   const canCreate = roleAllows(user.role, ['engineer']);
   const parsed = bridgeListQuerySchema.safeParse(raw);
   const query = parsed.success ? parsed.data : bridgeListQuerySchema.parse({});
-  const [page, districts] = await Promise.all([
-    listBridgePage(query).catch(() => listBridgePage({ ...query, cursor: undefined })),
-    listDistricts(),
-  ]);
+  const [page, districts] = await Promise.all([listBridgePage(query).catch(() => listBridgePage({ ...query, cursor: undefined })), listDistricts()]);
   const filtered = Boolean(query.q || query.stage || query.district || query.attention);
   const { cursor: _cursor, ...kept } = raw;
   return (

@@ -10,10 +10,7 @@ export default async function LearnPage() {
   await requireUser('/learn');
   return (
     <>
-      <PageHeader
-        title="Why overhang forms look the way they do"
-        subtitle="Six short steps on a sandbox bridge. Move the sliders and the numbers and the picture are worked out again."
-      />
+      <PageHeader title="Why overhang forms look the way they do" subtitle="Six short steps on a sandbox bridge. Move the sliders and the numbers and the picture are worked out again." />
       <div className="space-y-6">
         <Walkthrough />
         <SafetyCaution />

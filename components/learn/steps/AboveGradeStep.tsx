@@ -16,15 +16,15 @@ export const aboveGradeStep: Step = {
     return (
       <>
         <p>
-          The girders carry the wet deck concrete only once it is placed, and they sag under it. The plans give that dead-load deflection at the tenth points; the forms and
-          the screed are set <strong>high</strong> by it before the pour, so that the girders, the forms and the finished deck come down to grade together.
+          The girders carry the wet deck concrete only once it is placed, and they sag under it. The plans give that dead-load deflection at the tenth points; the forms and the screed are set{' '}
+          <strong>high</strong> by it before the pour, so that the girders, the forms and the finished deck come down to grade together.
         </p>
         {m && m.form_target !== null && m.edge_bottom !== null ? (
           <p>
             At midspan of span {SPAN} the outside girder will still come down <strong className="tabular">{inches(d * 12)}</strong>. So the form edge is set at{' '}
-            <strong className="tabular">{formatLength(m.form_target, 'ft')}</strong>: the edge bottom {formatLength(m.edge_bottom, 'ft')}, plus the form settlement, plus that
-            deflection; and the screed over the girder strikes <strong className="tabular">{formatLength(m.screed_grade ?? m.top_of_deck + d, 'ft')}</strong> where the
-            finished deck will be {formatLength(m.top_of_deck, 'ft')}.
+            <strong className="tabular">{formatLength(m.form_target, 'ft')}</strong>: the edge bottom {formatLength(m.edge_bottom, 'ft')}, plus the form settlement, plus that deflection; and the
+            screed over the girder strikes <strong className="tabular">{formatLength(m.screed_grade ?? m.top_of_deck + d, 'ft')}</strong> where the finished deck will be{' '}
+            {formatLength(m.top_of_deck, 'ft')}.
           </p>
         ) : null}
         <Slider
@@ -43,8 +43,8 @@ export const aboveGradeStep: Step = {
           </button>
         </div>
         <p>
-          Move the slider: the girders, the brackets and the form edge ride down together. Check targets that include deflection against the plans&apos; table; a form set to
-          the finished grade ends low by exactly the sag.
+          Move the slider: the girders, the brackets and the form edge ride down together. Check targets that include deflection against the plans&apos; table; a form set to the finished grade ends
+          low by exactly the sag.
         </p>
       </>
     );

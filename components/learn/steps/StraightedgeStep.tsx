@@ -13,17 +13,16 @@ export const straightedgeStep: Step = {
   Body: ({ n }) => (
     <>
       <p>
-        An old habit: lay a straightedge on the deck forms and carry their grade out to set the overhang. Any error in the deck forms grows on the way out, and the overhang
-        is not on that grade anyway — the slab changes thickness to the edge and is level under the barrier.
+        An old habit: lay a straightedge on the deck forms and carry their grade out to set the overhang. Any error in the deck forms grows on the way out, and the overhang is not on that grade anyway
+        — the slab changes thickness to the edge and is level under the barrier.
       </p>
       {n.straight ? (
         <p>
           With the deck form just 1/4 in high at the exterior girder and the next girder {ft(n.straight.bay)} in, the error at the edge is already{' '}
           <strong className="tabular">{inches(n.straight.magnified * 12)}</strong>, and the straightedge (amber bar) puts the form edge at{' '}
-          <strong className="tabular">{formatLength(n.straight.atEdge, 'ft')}</strong> where the table says{' '}
-          <strong className="tabular">{formatLength(n.straight.target, 'ft')}</strong> (green bar): off by{' '}
-          <strong className="tabular">{inches(Math.abs(n.straight.atEdge - n.straight.target) * 12)}</strong>. Always go back to the girder: the buildup and the drop from
-          girder top. (Elevations drawn 5×, the slab left off so the forms show.)
+          <strong className="tabular">{formatLength(n.straight.atEdge, 'ft')}</strong> where the table says <strong className="tabular">{formatLength(n.straight.target, 'ft')}</strong> (green bar):
+          off by <strong className="tabular">{inches(Math.abs(n.straight.atEdge - n.straight.target) * 12)}</strong>. Always go back to the girder: the buildup and the drop from girder top.
+          (Elevations drawn 5×, the slab left off so the forms show.)
         </p>
       ) : null}
     </>

@@ -12,13 +12,12 @@ export const stringLineStep: Step = {
   Body: ({ n }) => (
     <>
       <p>
-        Long concrete girders are never perfectly straight: they bow sideways (sweep). A common limit is about 1/8 in per 10 ft of length (from memory of precast
-        tolerances) — for this <span className="tabular">{ft(n.girderLength)}</span> girder up to <strong className="tabular">{inches(n.sweepLimitIn)}</strong>.
+        Long concrete girders are never perfectly straight: they bow sideways (sweep). A common limit is about 1/8 in per 10 ft of length (from memory of precast tolerances) — for this{' '}
+        <span className="tabular">{ft(n.girderLength)}</span> girder up to <strong className="tabular">{inches(n.sweepLimitIn)}</strong>.
       </p>
       <p>
-        The edge widths are measured from the girder&apos;s straight centreline between its end centres. Stretch a <strong>string line</strong> (red) between the centres of
-        the girder ends and measure from the string. Measuring from the bowed girder would copy the bow into the deck edge. The bow here is drawn {SWEEP_DRAWN}× its size so
-        you can see it.
+        The edge widths are measured from the girder&apos;s straight centreline between its end centres. Stretch a <strong>string line</strong> (red) between the centres of the girder ends and measure
+        from the string. Measuring from the bowed girder would copy the bow into the deck edge. The bow here is drawn {SWEEP_DRAWN}× its size so you can see it.
       </p>
     </>
   ),

@@ -9,19 +9,11 @@ export const metadata: Metadata = { title: 'Users' };
 export default async function UsersPage() {
   const user = await requireUser('/admin/users');
   if (user.role !== 'admin') {
-    return (
-      <RoleNotice
-        title="Administrators only (403)"
-        message="Only an administrator can see and change user accounts. Ask an administrator if your role or password needs changing."
-      />
-    );
+    return <RoleNotice title="Administrators only (403)" message="Only an administrator can see and change user accounts. Ask an administrator if your role or password needs changing." />;
   }
   return (
     <>
-      <PageHeader
-        title="Users"
-        subtitle="Engineers create and revise bridges, inspectors record field checks, crew members read. Administrators can do everything."
-      />
+      <PageHeader title="Users" subtitle="Engineers create and revise bridges, inspectors record field checks, crew members read. Administrators can do everything." />
       <UserAdmin selfId={user.id} />
     </>
   );

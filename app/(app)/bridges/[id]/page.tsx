@@ -47,8 +47,7 @@ export default async function BridgePage({ params }: { params: Params }) {
           <h1 className="text-2xl font-bold text-concrete-900">{bridge.name}</h1>
           {place ? <p className="mt-0.5 font-semibold text-concrete-700">{place}</p> : null}
           <p className="mt-1 text-sm text-concrete-600">
-            Units: {unitName} · Current revision <span className="tabular font-semibold text-concrete-800">{bridge.revision}</span> · Updated{' '}
-            {dateTimeText(bridge.updatedAt)}
+            Units: {unitName} · Current revision <span className="tabular font-semibold text-concrete-800">{bridge.revision}</span> · Updated {dateTimeText(bridge.updatedAt)}
           </p>
         </div>
         {user.role === 'admin' ? <DeleteBridgeButton bridgeId={bridge.id} name={bridge.name} /> : null}

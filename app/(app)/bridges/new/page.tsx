@@ -10,12 +10,7 @@ export const metadata: Metadata = { title: 'New bridge' };
 export default async function NewBridgePage() {
   const user = await requireUser('/bridges/new');
   if (!roleAllows(user.role, ['engineer'])) {
-    return (
-      <RoleNotice
-        title="Your role cannot create bridges"
-        message="Engineers and administrators create bridges. Ask an engineer on your project to add the bridge you need."
-      />
-    );
+    return <RoleNotice title="Your role cannot create bridges" message="Engineers and administrators create bridges. Ask an engineer on your project to add the bridge you need." />;
   }
   return (
     <>

@@ -77,8 +77,8 @@ export default async function ChecksPage({ params }: { params: Params }) {
           <SignOffPanel bridgeId={bridge.id} units={units} spans={overview.spans} canSign={canInspect} />
         )}
         <p className="mt-2 max-w-3xl text-sm text-concrete-600">
-          A span can be signed off when every girder point of both exterior girders has a passing latest edge-width check, and a passing level-bar check
-          where the top of girder was surveyed, all against the current revision.
+          A span can be signed off when every girder point of both exterior girders has a passing latest edge-width check, and a passing level-bar check where the top of girder was surveyed, all
+          against the current revision.
         </p>
       </section>
 

@@ -35,8 +35,8 @@ export default async function EditGeometryPage({ params }: { params: Params }) {
         <div>
           <h1 className="text-2xl font-bold text-concrete-900">Edit geometry</h1>
           <p className="mt-1 text-concrete-600">
-            {bridge.name} · opened at revision <span className="tabular font-semibold text-concrete-800">{bridge.revision}</span> · lengths in {bridge.units === 'm' ? 'metres (m)' : 'feet (ft)'} · stations as{' '}
-            {bridge.units === 'm' ? '1+234.567' : '12+34.56'} or plain numbers
+            {bridge.name} · opened at revision <span className="tabular font-semibold text-concrete-800">{bridge.revision}</span> · lengths in {bridge.units === 'm' ? 'metres (m)' : 'feet (ft)'} ·
+            stations as {bridge.units === 'm' ? '1+234.567' : '12+34.56'} or plain numbers
           </p>
         </div>
         <Link href={`/bridges/${bridge.id}/history`} className="btn-secondary">

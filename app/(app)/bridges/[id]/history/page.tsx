@@ -52,9 +52,7 @@ export default async function HistoryPage({ params, searchParams }: { params: Pa
       <div className="space-y-6">
         <HistoryRevisionList bridgeId={bridge.id} revisions={revisions} current={bridge.revision} from={from} to={to} />
         {revisions.length < 2 ? (
-          <p className="card p-4 text-concrete-700">
-            This bridge has one revision so far. Each save in the geometry editor adds a revision; then this page shows what changed between any two.
-          </p>
+          <p className="card p-4 text-concrete-700">This bridge has one revision so far. Each save in the geometry editor adds a revision; then this page shows what changed between any two.</p>
         ) : (
           <>
             <HistoryCompareForm bridgeId={bridge.id} revisions={revisions} from={from ?? to} to={to} />

@@ -38,9 +38,8 @@ export default async function OffsetsPage({ params }: { params: Params }) {
         <div>
           <h1 className="text-2xl font-bold text-concrete-900 print:text-lg">Offset table: {bridge.name}</h1>
           <p className="mt-1 text-concrete-600 print:text-xs">
-            Revision <span className="tabular font-semibold text-concrete-800">{bridge.revision}</span> · lengths and elevations in {bridge.units},
-            shown to {decimals} (feet-inches to the nearest 1/8&quot; when chosen; elevations stay decimal) · offsets left (LT) or right (RT) of the
-            alignment
+            Revision <span className="tabular font-semibold text-concrete-800">{bridge.revision}</span> · lengths and elevations in {bridge.units}, shown to {decimals} (feet-inches to the nearest
+            1/8&quot; when chosen; elevations stay decimal) · offsets left (LT) or right (RT) of the alignment
           </p>
         </div>
         {roleAllows(user.role, ['engineer', 'inspector']) ? (
@@ -51,9 +50,9 @@ export default async function OffsetsPage({ params }: { params: Params }) {
       </div>
       <SafetyCaution className="mb-6 break-inside-avoid print:mb-3" />
       <p className="mb-6 max-w-3xl text-sm text-concrete-700 print:mb-3 print:max-w-none print:text-xs">
-        Edge width is the horizontal distance from the girder centreline to the deck edge, square to the girder; on straight girders measure it from a string line between the girder&apos;s end centres, not from the girder. Edge drop runs from the bottom
-        of slab over the girder to the bottom outside edge of the overhang. The form target includes the form settlement allowance. Buildup and
-        drop from girder top appear where the top of girder has been surveyed; set the form from the girder, not from the deck forms.
+        Edge width is the horizontal distance from the girder centreline to the deck edge, square to the girder; on straight girders measure it from a string line between the girder&apos;s end
+        centres, not from the girder. Edge drop runs from the bottom of slab over the girder to the bottom outside edge of the overhang. The form target includes the form settlement allowance. Buildup
+        and drop from girder top appear where the top of girder has been surveyed; set the form from the girder, not from the deck forms.
       </p>
       <CadDownloads bridgeId={bridge.id} revision={bridge.revision} />
       <div className="mt-6">

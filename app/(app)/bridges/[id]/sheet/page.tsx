@@ -24,9 +24,7 @@ export default async function SheetPage({ params, searchParams }: { params: Para
   const user = await requireUser(`/bridges/${id}/sheet`);
   const { span: spanText } = await searchParams;
   const view = await orNotFound(loadFieldView(id));
-  const crumbs = (
-    <BridgeBreadcrumb bridge={view.bridge} here="Field sheet" />
-  );
+  const crumbs = <BridgeBreadcrumb bridge={view.bridge} here="Field sheet" />;
   if (!view.ok) {
     return (
       <>
@@ -51,8 +49,7 @@ export default async function SheetPage({ params, searchParams }: { params: Para
         <div>
           <h1 className="text-2xl font-bold text-concrete-900 print:text-xl">Field sheet: {view.bridge.name}</h1>
           <p className="mt-1 text-concrete-700">
-            {span ? `Span ${span}` : `All spans (${spans.join(', ')})`} · computed from geometry revision{' '}
-            <span className="tabular font-semibold">{view.bridge.revision}</span> · printed {printedAt}
+            {span ? `Span ${span}` : `All spans (${spans.join(', ')})`} · computed from geometry revision <span className="tabular font-semibold">{view.bridge.revision}</span> · printed {printedAt}
           </p>
           <p className="text-sm text-concrete-600">
             Lengths and elevations in {units === 'm' ? 'metres' : 'feet'}; base rod {lengthText(view.settings.base_rod_length, units)}
@@ -90,8 +87,8 @@ export default async function SheetPage({ params, searchParams }: { params: Para
       <SafetyCaution className="mb-4 break-inside-avoid" />
       <div className="mb-6 max-w-4xl break-inside-avoid text-sm text-concrete-700">
         <p>
-          <strong>Edge width</strong>: girder centreline to deck edge, horizontal and square to the girder; measure it from a string line between the girder&apos;s end
-          centres, not from the girder. <strong>Form target</strong>: elevation of the form&apos;s bottom outside edge, settlement allowance included.
+          <strong>Edge width</strong>: girder centreline to deck edge, horizontal and square to the girder; measure it from a string line between the girder&apos;s end centres, not from the girder.{' '}
+          <strong>Form target</strong>: elevation of the form&apos;s bottom outside edge, settlement allowance included.
         </p>
         <p className="mt-1">
           <strong>Level-bar reading</strong>: top of girder minus form target, shown only where the top of girder was surveyed. {ROD_DEFINITION}

@@ -28,8 +28,7 @@ export default async function SurveyPage({ params }: { params: Params }) {
   const canImport = roleAllows(user.role, ['engineer', 'inspector']);
   // A template with every girder point of the current revision and the elevation left to fill in.
   const template = ['girder,span,point,elevation'];
-  for (let span = 1; span <= framing.spanCount; span++)
-    for (const g of framing.girders) for (let k = 0; k <= framing.pointsPerSpan; k++) template.push(`${g},${span},${k},`);
+  for (let span = 1; span <= framing.spanCount; span++) for (const g of framing.girders) for (let k = 0; k <= framing.pointsPerSpan; k++) template.push(`${g},${span},${k},`);
   const templateHref = `data:text/csv;charset=utf-8,${encodeURIComponent(template.join('\n') + '\n')}`;
 
   return (
@@ -39,8 +38,8 @@ export default async function SurveyPage({ params }: { params: Params }) {
         <div>
           <h1 className="text-2xl font-bold text-concrete-900">Top-of-girder survey: {bridge.name}</h1>
           <p className="mt-1 max-w-3xl text-concrete-600">
-            Revision <span className="tabular font-semibold text-concrete-800">{bridge.revision}</span> · {framing.girders.length} girders,{' '}
-            {framing.spanCount} {framing.spanCount === 1 ? 'span' : 'spans'}, points 0 to {framing.pointsPerSpan} · elevations in {bridge.units}
+            Revision <span className="tabular font-semibold text-concrete-800">{bridge.revision}</span> · {framing.girders.length} girders, {framing.spanCount}{' '}
+            {framing.spanCount === 1 ? 'span' : 'spans'}, points 0 to {framing.pointsPerSpan} · elevations in {bridge.units}
           </p>
         </div>
         <div className="flex flex-wrap gap-2">
@@ -53,16 +52,14 @@ export default async function SurveyPage({ params }: { params: Params }) {
         </div>
       </div>
       <p className="mb-6 max-w-3xl text-sm text-concrete-700">
-        The buildup over each girder point is the bottom of slab minus the surveyed top of girder, and the level-bar reading (drop from girder top) is
-        measured from that same girder top. Survey the girders after erection and set every deck grade from the buildup, not from another form.
+        The buildup over each girder point is the bottom of slab minus the surveyed top of girder, and the level-bar reading (drop from girder top) is measured from that same girder top. Survey the
+        girders after erection and set every deck grade from the buildup, not from another form.
       </p>
       <div className="space-y-6">
         {canImport ? (
           <SurveyImportForm bridgeId={bridge.id} units={bridge.units as Units} />
         ) : (
-          <p className="card p-4 text-sm text-concrete-700">
-            Your role ({user.role}) can read the stored survey. Engineers and inspectors import survey files.
-          </p>
+          <p className="card p-4 text-sm text-concrete-700">Your role ({user.role}) can read the stored survey. Engineers and inspectors import survey files.</p>
         )}
         <SurveyValuesTable listing={listing} />
         <SurveyImportLog imports={listing.imports} />

@@ -3,6 +3,4 @@ import { fileResponse } from '@/lib/api/file-response';
 import { readQuery } from '@/lib/api/query';
 import { fieldSheetPdfForBridge, fieldSheetPdfQuerySchema } from '@/lib/services/exports';
 
-export const GET = withRole<{ id: string }>('signed-in', undefined, async ({ req, params }) =>
-  fileResponse(await fieldSheetPdfForBridge(params.id, readQuery(req, fieldSheetPdfQuerySchema))),
-);
+export const GET = withRole<{ id: string }>('signed-in', undefined, async ({ req, params }) => fileResponse(await fieldSheetPdfForBridge(params.id, readQuery(req, fieldSheetPdfQuerySchema))));

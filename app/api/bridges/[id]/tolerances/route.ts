@@ -5,6 +5,4 @@ type P = { id: string };
 
 export const GET = withRole<P>('signed-in', undefined, async ({ params }) => ok(await getFieldSettings(params.id)));
 
-export const PATCH = withRole<P, typeof updateFieldSettingsSchema>(['engineer'], updateFieldSettingsSchema, async ({ user, params, body }) =>
-  ok(await updateFieldSettings(user, params.id, body)),
-);
+export const PATCH = withRole<P, typeof updateFieldSettingsSchema>(['engineer'], updateFieldSettingsSchema, async ({ user, params, body }) => ok(await updateFieldSettings(user, params.id, body)));
