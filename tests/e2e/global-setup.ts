@@ -47,7 +47,9 @@ export default async function setup(project: TestProject) {
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'chordline-e2e-'));
   const env = { ...process.env, DATA_DIR: dataDir, NEXT_DIST_DIR: distDir, NEXT_TELEMETRY_DISABLED: '1' };
   delete (env as Record<string, string | undefined>).CHORDLINE_NO_DEMO;
-  execFileSync('npx', ['next', 'build'], { cwd: root, env, stdio: 'inherit' });
+  // E2E_REUSE_BUILD=1 (never in CI) serves an earlier build of the same folder, for quick reruns while working.
+  const reuse = process.env.E2E_REUSE_BUILD === '1' && !process.env.CI && fs.existsSync(path.join(root, distDir, 'BUILD_ID'));
+  if (!reuse) execFileSync('npx', ['next', 'build'], { cwd: root, env, stdio: 'inherit' });
   execFileSync('npx', ['tsx', 'lib/cli/prepare.ts'], { cwd: root, env, stdio: 'inherit' });
   const port = await freePort();
   const baseUrl = `http://127.0.0.1:${port}`;
