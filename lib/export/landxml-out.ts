@@ -8,6 +8,7 @@
  */
 import { createAlignment, directionOf, rightNormalOf, type BridgeDescription, type PlanPoint } from '@/lib/geometry';
 import { atLeast, type Units } from '@/lib/units';
+import { PARALLEL_DETERMINANT, nearlyZero } from '@/lib/units';
 
 export interface LandXmlOutInput {
   /** Name for the Project, Alignment and ProfAlign. */
@@ -36,7 +37,7 @@ function tangentsMeet(a: PlanPoint, ba: number, b: PlanPoint, bb: number): PlanP
   const d0 = directionOf(ba);
   const d1 = directionOf(bb);
   const det = d0.x * -d1.y - d0.y * -d1.x;
-  if (Math.abs(det) < 1e-12) return null;
+  if (nearlyZero(det, PARALLEL_DETERMINANT)) return null;
   const t = ((b.x - a.x) * -d1.y - (b.y - a.y) * -d1.x) / det;
   return { x: a.x + t * d0.x, y: a.y + t * d0.y };
 }

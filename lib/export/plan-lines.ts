@@ -78,7 +78,7 @@ function edgeCorner(al: Alignment, bent: BridgeDescription['bents'][number], spe
     const next = bentLinePoint(al, bent, edgeOffset(spec, p.station) + shift);
     const moved = Math.hypot(next.x - p.x, next.y - p.y);
     p = next;
-    if (moved < 1e-10) break;
+    if (nearlyZero(moved)) break;
   }
   return p;
 }

@@ -1,8 +1,13 @@
 /**
- * The engine's one source of numerical tolerances: named constants behind comparison helpers, so
- * that no bare epsilon is scattered through the geometry. Lengths are in the bridge's unit; the
+ * The engine's numerical tolerances: named constants behind comparison helpers, so that no bare
+ * epsilon is scattered through the geometry. The length tolerance and `nearlyEqual` are the product's
+ * one length tolerance from lib/units/tolerance (re-exported here so the engine names it once);
+ * the solver's relative tolerances below are the engine's own. Lengths are in the bridge's unit; the
  * relative tolerances are fractions of a scale the caller names.
  */
+import { LENGTH_TOLERANCE, nearlyEqual } from '@/lib/units/tolerance';
+
+export { nearlyEqual };
 
 /**
  * Relative step at which a Newton solve on plan coordinates counts as converged: a fraction of the
@@ -25,8 +30,8 @@ export const RELATIVE_ROUNDING = 1e-9;
 /** Smallest |cos| between a ray and the offset lines it must cross before it counts as parallel. */
 export const PARALLEL_SLOPE = 1e-9;
 
-/** Length (bridge units) below which two lengths, stations or elevations are the same: noise, not a finding. */
-export const LENGTH_NOISE = 1e-9;
+/** Length (bridge units) below which two lengths, stations or elevations are the same: noise, not a finding (the product's one length tolerance). */
+export const LENGTH_NOISE = LENGTH_TOLERANCE;
 
 /**
  * How far (length units) a bent may lie outside the alignment's first and last stations and still
@@ -36,11 +41,6 @@ export const ON_ALIGNMENT = 1e-6;
 
 /** Relative difference of curvature at a spiral–arc join above which the engine warns (0.1 %). */
 export const CURVATURE_JOIN_RELATIVE = 1e-3;
-
-/** True when |a − b| is at most `tol` (default {@link LENGTH_NOISE}). */
-export function nearlyEqual(a: number, b: number, tol: number = LENGTH_NOISE): boolean {
-  return Math.abs(a - b) <= tol;
-}
 
 /** True when a is less than b by more than `tol` (default {@link LENGTH_NOISE}): a real "before", not noise. */
 export function definitelyLess(a: number, b: number, tol: number = LENGTH_NOISE): boolean {

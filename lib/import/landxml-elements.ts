@@ -11,6 +11,7 @@ import type { AlignmentElementInput } from '@/lib/geometry';
 import { clothoidDelta, clothoidTurn } from './clothoid';
 import { angleDiff, azimuth, dist, fail, finiteAttr, fmt, normalAngle, pointOf, TWO_PI, type Pt } from './landxml-points';
 import { childNamed, type XmlNode } from './xml-tree';
+import { POINT_TOLERANCE } from '@/lib/units';
 
 /** Largest disagreement between a length/radius attribute and the element's points, in the file's unit. */
 export const ATTRIBUTE_TOLERANCE = 0.01;
@@ -20,7 +21,7 @@ export const JOIN_TOLERANCE = 0.005;
  * When a stated length or radius agrees with the element's points this closely (file units), the
  * stated value is used: the difference is only the rounding of the coordinates in the file.
  */
-export const SNAP_TOLERANCE = 1e-6;
+export const SNAP_TOLERANCE = POINT_TOLERANCE;
 /** A radius at or beyond this (file units) is a tangent end of a spiral. */
 export const INFINITE_RADIUS = 1e9;
 

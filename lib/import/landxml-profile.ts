@@ -9,6 +9,7 @@ import type { PviInput } from '@/lib/geometry';
 import { fmt, stationWords, type LengthUnit } from './landxml-points';
 import { childNamed, childrenNamed, type XmlNode } from './xml-tree';
 import { numbersIn } from './landxml-points';
+import { PARALLEL_DETERMINANT, POINT_TOLERANCE, atLeast, atMost, nearlyZero } from '@/lib/units';
 
 /** Largest accepted vertical difference circle ↔ parabola: 0.001 ft, or 0.3 mm in a metric file. */
 export const circleTolerance = (units: LengthUnit) => (units === 'm' ? 0.0003048 : 0.001);
@@ -109,7 +110,7 @@ function circlesToParabolas(rows: Row[], units: LengthUnit, notes: string[], pro
     }
     const g1 = (r.elevation - rows[i - 1].elevation) / (r.station - rows[i - 1].station);
     const g2 = (rows[i + 1].elevation - r.elevation) / (rows[i + 1].station - r.station);
-    if (!Number.isFinite(g1) || !Number.isFinite(g2) || Math.abs(g2 - g1) < 1e-12) {
+    if (!Number.isFinite(g1) || !Number.isFinite(g2) || nearlyZero(g2 - g1, PARALLEL_DETERMINANT)) {
       notes.push(`${at}: the grades on both sides are the same, so the curve was read as a plain PVI.`);
       return pvi;
     }
@@ -141,7 +142,7 @@ function overlapProblems(pvis: PviInput[], units: LengthUnit): string[] {
     }
     const prevEnd = pvis[i - 1].station + (pvis[i - 1].curve_length ?? 0) / 2;
     const start = pvis[i].station - (pvis[i].curve_length ?? 0) / 2;
-    if (start < prevEnd - 1e-9) out.push(`The vertical curves at ${stationWords(pvis[i - 1].station, units)} and ${stationWords(pvis[i].station, units)} overlap.`);
+    if (!atLeast(start, prevEnd)) out.push(`The vertical curves at ${stationWords(pvis[i - 1].station, units)} and ${stationWords(pvis[i].station, units)} overlap.`);
   }
   return out;
 }
@@ -166,8 +167,8 @@ export function readProfile(alignmentNode: XmlNode, units: LengthUnit, startStat
   const first = pvis[0].station;
   const last = pvis[pvis.length - 1].station;
   const gaps: string[] = [];
-  if (first > startStation + 1e-6) gaps.push(`starts at ${stationWords(first, units)}, after the alignment's start (${stationWords(startStation, units)})`);
-  if (last < endStation - 1e-6) gaps.push(`ends at ${stationWords(last, units)}, before the alignment's end (${stationWords(endStation, units)})`);
+  if (!atMost(first, startStation, POINT_TOLERANCE)) gaps.push(`starts at ${stationWords(first, units)}, after the alignment's start (${stationWords(startStation, units)})`);
+  if (!atLeast(last, endStation, POINT_TOLERANCE)) gaps.push(`ends at ${stationWords(last, units)}, before the alignment's end (${stationWords(endStation, units)})`);
   if (gaps.length > 0) notes.push(`The profile does not cover the whole alignment: it ${gaps.join(' and ')}; beyond its ends the grade runs straight on.`);
   return { profile: { pvis }, name, notes, leftOut: null };
 }

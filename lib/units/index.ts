@@ -3,7 +3,7 @@
  * and sheet outside the engine turns a number in a bridge's units into text or text back into a number.
  */
 export { decimalsFor, stationBlock, type Units } from './units';
-export { LENGTH_TOLERANCE, POINT_TOLERANCE, atLeast, atMost, nearlyEqual, nearlyZero, safeDivisor } from './tolerance';
+export { LENGTH_TOLERANCE, PARALLEL_DETERMINANT, POINT_TOLERANCE, atLeast, atMost, nearlyEqual, nearlyZero, safeDivisor } from './tolerance';
 export { differenceText, enteredLengthText, lengthText, readingLength, slopeText, tapeAndDecimalLength, tapeLength } from './length-text';
 export { offsetText, stationsAlong, stationText } from './station-text';
 export { deviationText, toleranceText, type MeasureKind } from './deviation-text';

@@ -8,6 +8,9 @@ export const LENGTH_TOLERANCE = 1e-9;
 /** A looser tolerance for points that coincide in a drawing (scene vertices, sketch coordinates). */
 export const POINT_TOLERANCE = 1e-6;
 
+/** Below this a determinant of two unit directions (or a difference of two grades) is zero: the lines are parallel. */
+export const PARALLEL_DETERMINANT = 1e-12;
+
 /** True when |a − b| is within `tolerance` (default LENGTH_TOLERANCE). */
 export function nearlyEqual(a: number, b: number, tolerance = LENGTH_TOLERANCE): boolean {
   return Math.abs(a - b) <= tolerance;
