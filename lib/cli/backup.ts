@@ -1,11 +1,13 @@
 /** `npm run backup`: a consistent copy of the SQLite database and the uploads under DATA_DIR/backups. */
 import { db, closeDb } from '@/lib/db/connection';
-import { backupSqlite } from '@/lib/backup/backup';
+import { backupSqlite, uploadsBackupNote } from '@/lib/backup/backup';
 
 async function main() {
   const target = await backupSqlite(await db());
   await closeDb();
   console.log(`[chordline] backup written to ${target}`);
+  const note = uploadsBackupNote();
+  if (note) console.log(`[chordline] ${note}`);
 }
 
 main().catch((err) => {

@@ -4,7 +4,7 @@ import type { SessionUser } from '@/lib/auth/session';
 import { db } from '@/lib/db/connection';
 import { filePart, readMultipart } from '@/lib/uploads/multipart';
 import { sniffType } from '@/lib/uploads/sniff';
-import { neutraliseName, readUpload, removeUpload, saveUpload } from '@/lib/uploads/store';
+import { neutraliseName, openUpload, readUpload, removeUpload, saveUpload } from '@/lib/uploads/store';
 import { thumbnailOf } from '@/lib/uploads/thumbnail';
 import { photoPixelProblem } from '@/lib/uploads/pixels';
 import { HttpError as PhotoLimitError } from '@/lib/api/errors';
@@ -153,7 +153,7 @@ export const attachmentQuerySchema = z.object({
 });
 
 /**
- * The stored file as a response: the sniffed content type, nosniff, images inline and PDFs as a
+ * The stored file as a response, streamed from the file store (disk or bucket): the sniffed content type, nosniff, images inline and PDFs as a
  * download, a sandboxing CSP, private caching. With size "thumb", a photo's thumbnail (a JPEG at
  * most 320 px on its longer side) or, when none can be made, the photo itself; PDFs have none (400).
  */
@@ -164,20 +164,21 @@ export async function attachmentResponse(id: string, size: 'full' | 'thumb' = 'f
   if (!a) throw new NotFoundError('There is no attachment with that id.');
   const image = a.contentType.startsWith('image/');
   if (size === 'thumb' && !image) throw new ValidationError('Only photos have thumbnails; ask for the file itself.', { size: ['Leave size out for a PDF.'] });
+  const gone = () => new NotFoundError('The file of this attachment is missing from the server.');
   const original = async () => {
-    try {
-      return await readUpload(a.storedName);
-    } catch {
-      throw new NotFoundError('The file of this attachment is missing from the server.');
-    }
+    const bytes = await readUpload(a.storedName);
+    if (!bytes) throw gone();
+    return bytes;
   };
   const thumb = size === 'thumb' ? await thumbnailOf(a.storedName, original) : null;
-  const bytes = thumb ?? (await original());
-  return new Response(new Uint8Array(bytes), {
+  // The full file is streamed from the store (disk or bucket), never read whole into memory.
+  const file = thumb ? { body: new Uint8Array(thumb), size: thumb.byteLength } : await openUpload(a.storedName);
+  if (!file) throw gone();
+  return new Response(file.body, {
     status: 200,
     headers: {
       'Content-Type': thumb ? 'image/jpeg' : a.contentType,
-      'Content-Length': String(bytes.byteLength),
+      'Content-Length': String(file.size),
       'X-Content-Type-Options': 'nosniff',
       'Content-Disposition': contentDisposition(image ? 'inline' : 'attachment', a.originalName),
       'Content-Security-Policy': "default-src 'none'; sandbox",

@@ -1,12 +1,10 @@
 import crypto from 'node:crypto';
-import fs from 'node:fs/promises';
-import path from 'node:path';
-import { dataDir } from '@/lib/config';
-import { PRIVATE_DIR_MODE, PRIVATE_FILE_MODE } from '@/lib/db/private-files';
+import { fileStore, type OpenedFile } from '@/lib/storage';
+import { diskAreaDir } from '@/lib/storage/disk';
 
-/** Folder of stored uploads: DATA_DIR/uploads. */
+/** Folder of stored uploads when they stay on disk: DATA_DIR/uploads. */
 export function uploadsDir(): string {
-  return path.join(dataDir(), 'uploads');
+  return diskAreaDir('uploads');
 }
 
 const STORED = /^[a-f0-9]{32}\.(jpg|png|webp|pdf)$/;
@@ -33,23 +31,29 @@ export function neutraliseName(name: string): string {
   return clean || 'upload';
 }
 
-/** Writes the bytes under a generated name (32 hex digits + extension) and returns that name. */
+const CONTENT_TYPES: Record<string, string> = { jpg: 'image/jpeg', png: 'image/png', webp: 'image/webp', pdf: 'application/pdf' };
+
+/** Writes the bytes under a generated name (32 hex digits + extension) to the file store and returns that name. */
 export async function saveUpload(bytes: Uint8Array, ext: string): Promise<string> {
-  const dir = uploadsDir();
-  await fs.mkdir(dir, { recursive: true, mode: PRIVATE_DIR_MODE });
   const name = `${crypto.randomBytes(16).toString('hex')}.${ext}`;
-  await fs.writeFile(path.join(dir, name), bytes, { flag: 'wx', mode: PRIVATE_FILE_MODE });
+  await fileStore().put('uploads', name, bytes, CONTENT_TYPES[ext] ?? 'application/octet-stream');
   return name;
 }
 
-/** Reads a stored upload by its generated name; refuses any name this module did not generate. */
-export async function readUpload(storedName: string): Promise<Buffer> {
+/** Reads a stored upload whole by its generated name; refuses any name this module did not generate; null when it is gone. */
+export async function readUpload(storedName: string): Promise<Buffer | null> {
   if (!STORED.test(storedName)) throw new Error('Not a stored upload name');
-  return fs.readFile(path.join(uploadsDir(), storedName));
+  return fileStore().read('uploads', storedName);
 }
 
-/** Removes a stored upload (used when the database write after it fails). */
+/** Opens a stored upload as a stream with its length (for downloads); null when it is gone. */
+export async function openUpload(storedName: string): Promise<OpenedFile | null> {
+  if (!STORED.test(storedName)) throw new Error('Not a stored upload name');
+  return fileStore().open('uploads', storedName);
+}
+
+/** Removes a stored upload (when the database write after it fails, or its attachment goes). */
 export async function removeUpload(storedName: string): Promise<void> {
   if (!STORED.test(storedName)) return;
-  await fs.rm(path.join(uploadsDir(), storedName), { force: true });
+  await fileStore().remove('uploads', storedName);
 }

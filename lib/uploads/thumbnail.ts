@@ -1,10 +1,7 @@
-import crypto from 'node:crypto';
-import fs from 'node:fs/promises';
-import path from 'node:path';
 import { Worker } from 'node:worker_threads';
-import { dataDir } from '@/lib/config';
+import { fileStore } from '@/lib/storage';
+import { diskAreaDir } from '@/lib/storage/disk';
 import { MAX_PHOTO_MEGAPIXELS, photoPixels } from './pixels';
-import { PRIVATE_DIR_MODE, PRIVATE_FILE_MODE } from '@/lib/db/private-files';
 
 /** Longest side of a thumbnail, pixels: sharp on a phone's 2× screen at the 160 px the lists show. */
 export const THUMBNAIL_SIDE = 320;
@@ -61,45 +58,47 @@ export function makeThumbnail(bytes: Uint8Array): Promise<Buffer> {
   return run;
 }
 
-/** Folder of made thumbnails. */
+/** Folder of made thumbnails when files stay on disk (DATA_DIR/cache/thumbs). */
 export function thumbsDir(): string {
-  return path.join(dataDir(), 'cache', 'thumbs');
+  return diskAreaDir('thumbs');
 }
 
-const STORED = /^([a-f0-9]{32})\.(jpg|png|webp)$/;
+const STORED = /^([a-f0-9]{32})\.(jpg|png|webp|pdf)$/;
 const DECODABLE = new Set(['jpg', 'png']);
 
+/** The thumbnail's name for a stored upload's name: the same 32 hex digits, always .jpg. */
+function thumbName(storedName: string): string | null {
+  const m = STORED.exec(storedName);
+  return m ? `${m[1]}.jpg` : null;
+}
+
 /**
- * The thumbnail of a stored photo, made on first request and kept beside the uploads
- * (DATA_DIR/cache/thumbs/<generated name>.jpg: a cache, left out of backups, made again when missing). Returns null when the photo cannot be decoded
- * (WebP, or damaged bytes); the caller then serves the photo itself.
+ * The thumbnail of a stored photo, made on first request and kept in the file store's thumbnail area
+ * (DATA_DIR/cache/thumbs/<generated name>.jpg, or cache/thumbs/ in the bucket: a cache, left out of
+ * backups, made again when missing). Returns null when the photo cannot be decoded (WebP, or damaged
+ * bytes); the caller then serves the photo itself.
  */
 export async function thumbnailOf(storedName: string, original: () => Promise<Buffer>): Promise<Buffer | null> {
   const m = STORED.exec(storedName);
-  if (!m) throw new Error('Not a stored photo name');
+  if (!m || m[2] === 'pdf') throw new Error('Not a stored photo name');
   if (!DECODABLE.has(m[2])) return null;
-  const dir = thumbsDir();
-  const file = path.join(dir, `${m[1]}.jpg`);
-  try {
-    return await fs.readFile(file);
-  } catch {
-    // Not made yet.
-  }
+  const name = `${m[1]}.jpg`;
+  const store = fileStore();
+  const kept = await store.read('thumbs', name).catch(() => null);
+  if (kept) return kept;
   let thumb: Buffer;
   try {
     thumb = await makeThumbnail(await original());
   } catch {
     return null;
   }
-  // Keep it for next time: write to a unique temporary name and rename, so a concurrent reader never
-  // sees half a file. A cache that cannot be written costs only a decode next time.
-  const tmp = `${file}.${process.pid}.${crypto.randomBytes(6).toString('hex')}.tmp`;
-  try {
-    await fs.mkdir(dir, { recursive: true, mode: PRIVATE_DIR_MODE });
-    await fs.writeFile(tmp, thumb, { mode: PRIVATE_FILE_MODE });
-    await fs.rename(tmp, file);
-  } catch {
-    await fs.rm(tmp, { force: true }).catch(() => undefined);
-  }
+  // Keep it for next time. A cache that cannot be written costs only a decode next time.
+  await store.put('thumbs', name, thumb, 'image/jpeg').catch(() => undefined);
   return thumb;
+}
+
+/** Removes a stored upload's thumbnail, if one was made. */
+export async function removeThumbnail(storedName: string): Promise<void> {
+  const name = thumbName(storedName);
+  if (name) await fileStore().remove('thumbs', name);
 }
