@@ -1,6 +1,6 @@
 'use client';
 
-import { useCallback, useId, useRef, useState } from 'react';
+import { useCallback, useId, useMemo, useRef, useState } from 'react';
 import useSWR from 'swr';
 import { fetcher, type ApiError } from '@/lib/client/api-client';
 import type { CheckRow } from '@/components/checks/check-types';
@@ -15,6 +15,7 @@ import FieldQueuePanel from './FieldQueuePanel';
 import FieldTargetCard from './FieldTargetCard';
 import KeepOnPhoneBar from './KeepOnPhoneBar';
 import { bracketKey } from './field-verdicts';
+import { bracketsHaveDeflections } from './has-deflections';
 import type { FieldData } from './keep-for-field';
 import { useBracketVerdicts } from './use-bracket-verdicts';
 import { useFieldData } from './use-field-data';
@@ -38,6 +39,7 @@ export default function FieldMode({ canRecord, user, renderedAt, ...server }: Pr
   const group = girders.find((g) => g.girder === girder) ?? girders[0] ?? groups[0];
   const row = group.rows[Math.min(index, group.rows.length - 1)];
   const resultRef = useRef<HTMLDivElement>(null);
+  const deflections = useMemo(() => bracketsHaveDeflections(groups), [groups]);
 
   const {
     data: checks,
@@ -86,7 +88,7 @@ export default function FieldMode({ canRecord, user, renderedAt, ...server }: Pr
           }}
           onPoint={go}
         />
-        <FieldTargetCard headingId={`${id}-bracket`} row={row} lastPoint={group.rows[group.rows.length - 1].point} units={units} />
+        <FieldTargetCard headingId={`${id}-bracket`} row={row} lastPoint={group.rows[group.rows.length - 1].point} units={units} deflections={deflections} />
 
         <div ref={resultRef} className="scroll-mt-2">
           <FieldResult verdict={current} units={units} widthTolerance={tolerances.width} readingTolerance={tolerances.reading} currentRevision={bridge.revision} />

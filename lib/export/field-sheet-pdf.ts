@@ -15,6 +15,10 @@ export interface SheetPdfRow {
   /** Edge width as the crew tapes it: feet-inches to 1/8 in, or metres with unit. */
   edge_width_text: string;
   form_target: number;
+  /** Dead-load deflection still to come at the girder point (bridge units, positive down). */
+  deflection?: number;
+  /** Top of deck over the girder plus the deflection (bridge units, elevation). */
+  screed_grade?: number;
   reading: number | null;
   girder_rod: number | null;
   form_rod: number | null;
@@ -47,6 +51,8 @@ export interface FieldSheetPdfInput {
   paper: Paper;
   caution: string;
   rodDefinition: string;
+  /** Given when the bridge has a deflection table: what the deflection and screed-grade columns mean; the columns are added. */
+  deflectionDefinition?: string;
 }
 
 /** One sentence on where a span stands with its sign-off. */
@@ -62,7 +68,7 @@ export function signOffText(s: SpanSignOffState, currentRevision: number): strin
   return `Not signed off: ${now}`;
 }
 
-function groupTable(g: SheetPdfGroup, units: Units): PdfTable {
+function groupTable(g: SheetPdfGroup, units: Units, deflections: boolean): PdfTable {
   const num = (v: number | null) => (v === null ? '—' : lengthText(v, units, false));
   const columns: PdfColumn[] = [
     { label: 'Pt', share: 0.45, bold: true },
@@ -74,6 +80,12 @@ function groupTable(g: SheetPdfGroup, units: Units): PdfTable {
     { label: `Form rod (${units})`, share: 0.85 },
     { label: `Extra on both (${units})`, share: 0.85 },
     { label: `Form target elev. (${units})`, share: 1 },
+    ...(deflections
+      ? [
+          { label: `Deflection (${units})`, share: 0.85 },
+          { label: `Screed grade (${units})`, share: 1 },
+        ]
+      : []),
     { label: 'Measured width', share: 1, blank: true },
     { label: 'Measured reading', share: 1, blank: true },
     { label: 'OK / initials', share: 0.85, blank: true },
@@ -93,6 +105,7 @@ function groupTable(g: SheetPdfGroup, units: Units): PdfTable {
         num(r.form_rod),
         num(r.extra_rod),
         num(r.form_target),
+        ...(deflections ? [num(r.deflection ?? 0), num(r.screed_grade ?? null)] : []),
         '',
         '',
         '',
@@ -110,7 +123,8 @@ export async function fieldSheetPdf(input: FieldSheetPdfInput): Promise<Buffer> 
     `Edge width: girder centreline to deck edge, horizontal and square to the girder; measure it from a string line between the girder's end centres, not from the girder. Form target: elevation of the form's bottom outside edge, settlement allowance included. Level-bar reading: top of girder minus form target, shown only where the top of girder was surveyed. Base rod ${lengthText(input.baseRodLength, units)}.`,
     { size: 8.5, gap: 3 },
   );
-  paragraph(sheet, input.rodDefinition, { size: 8.5, gap: 8 });
+  paragraph(sheet, input.rodDefinition, { size: 8.5, gap: input.deflectionDefinition ? 3 : 8 });
+  if (input.deflectionDefinition) paragraph(sheet, input.deflectionDefinition, { size: 8.5, gap: 8 });
   cautionBox(sheet, input.caution);
   drawTable(sheet, {
     caption: `Sign-off by span (geometry revision ${input.currentRevision})`,
@@ -121,7 +135,7 @@ export async function fieldSheetPdf(input: FieldSheetPdfInput): Promise<Buffer> 
     ],
     rows: input.spans.map((s) => [String(s.span), String(s.brackets), signOffText(s, input.currentRevision)]),
   });
-  for (const g of input.groups) drawTable(sheet, groupTable(g, units));
+  for (const g of input.groups) drawTable(sheet, groupTable(g, units, Boolean(input.deflectionDefinition)));
   if (input.groups.length === 0) paragraph(sheet, 'This revision has no exterior girder points.', { size: 10 });
   return finishSheet(sheet);
 }

@@ -15,7 +15,7 @@ import { paperFor, type Paper } from '@/lib/export/pdf-document';
 import { planDxf } from '@/lib/export/plan-dxf';
 import { planLines } from '@/lib/export/plan-lines';
 import { getBridge, getRevisionDescription } from './bridges';
-import { loadFieldSheet, safeFileName, SHEET_CAUTION } from './field-sheet';
+import { DEFLECTION_DEFINITION, loadFieldSheet, safeFileName, SHEET_CAUTION } from './field-sheet';
 import { offsetsForBridge } from './offsets';
 import { signOffOverview } from './signoff';
 
@@ -100,6 +100,7 @@ export async function fieldSheetPdfForBridge(id: string, query: { span: number |
     paper: paperFor(sheet.units, query.paper),
     caution: sheet.caution,
     rodDefinition: sheet.rod_definition,
+    deflectionDefinition: sheet.deflections ? DEFLECTION_DEFINITION : undefined,
   });
   return { filename: `${stem(bridge)}-field-sheet${query.span ? `-span${query.span}` : ''}.pdf`, contentType: 'application/pdf', body };
 }

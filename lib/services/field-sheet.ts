@@ -18,6 +18,10 @@ export const SHEET_CAUTION =
 export const ROD_DEFINITION =
   'Level bar: a bar laid level across the overhang with a rod at each end. The girder rod stands on the top of the girder; the form rod reaches down to the bottom outside edge of the form. Form rod minus girder rod is the level-bar reading (top of girder minus form target). The girder rod is the base length; when the reading is negative the form rod would be shorter than the base (or negative), so both rods get the same extra length, shown.';
 
+/** What the deflection and screed-grade columns mean, printed when the bridge has deflections (domain.md, "Dead-load deflection", "Screed grade"). */
+export const DEFLECTION_DEFINITION =
+  "Deflection: the dead-load deflection the girder will still undergo when the deck is poured (from the plans' deflection table); form targets and level-bar readings include it, so the forms are set that much high. Screed grade: top of deck over the girder plus the deflection, the grade the screed strikes before the pour so that the deck ends at grade.";
+
 /**
  * Rod lengths of a level bar for one reading.
  * @param reading drop from girder top to form target (bridge units; positive when the form edge is lower).

@@ -11,8 +11,9 @@ import { requireUser } from '@/lib/auth/server-session';
 import { roleAllows } from '@/lib/auth/roles';
 import { loadFieldView } from '@/lib/services/field-view';
 import { orNotFound } from '../load-bridge';
-import { ROD_DEFINITION } from '@/lib/services/field-sheet';
+import { DEFLECTION_DEFINITION, ROD_DEFINITION } from '@/lib/services/field-sheet';
 import BridgeBreadcrumb from '@/components/BridgeBreadcrumb';
+import { bracketsHaveDeflections } from '@/components/field/has-deflections';
 
 export const metadata: Metadata = { title: 'Field sheet' };
 
@@ -41,6 +42,8 @@ export default async function SheetPage({ params, searchParams }: { params: Para
   const units = view.settings.units;
   const csvHref = `/api/bridges/${view.bridge.id}/field-sheet.csv${span ? `?span=${span}` : ''}`;
   const printedAt = dateTimeText(new Date().toISOString());
+  // Judged over the whole bridge, so every table has the same columns.
+  const deflections = bracketsHaveDeflections(view.groups);
 
   return (
     <>
@@ -93,10 +96,15 @@ export default async function SheetPage({ params, searchParams }: { params: Para
         <p className="mt-1">
           <strong>Level-bar reading</strong>: top of girder minus form target, shown only where the top of girder was surveyed. {ROD_DEFINITION}
         </p>
+        {deflections ? (
+          <p className="mt-1" data-testid="sheet-deflection-note">
+            {DEFLECTION_DEFINITION}
+          </p>
+        ) : null}
       </div>
 
       {groups.map((g) => (
-        <SheetTable key={`${g.span}-${g.girder}`} group={g} units={units} />
+        <SheetTable key={`${g.span}-${g.girder}`} group={g} units={units} deflections={deflections} />
       ))}
 
       <p className="mb-6 hidden text-xs text-concrete-600 print:block">
