@@ -1,4 +1,4 @@
-import { fieldLabel } from '@/lib/services/revision-diff';
+import { fieldLabel } from '@/lib/services/revision-field-labels';
 
 /** A person's name for an API field path: "description.alignment.elements.1.radius" → "Alignment element 2 · radius". */
 function labelOf(path: string): string {

@@ -4,7 +4,7 @@ import PlanSketch from '@/components/editor/PlanSketch';
 import PlanSketchSpanTable from '@/components/editor/PlanSketchSpanTable';
 import type { DraftCheck } from '@/lib/editor/check-draft';
 import type { BridgeDescription } from '@/lib/geometry';
-import { fieldLabel } from '@/lib/services/revision-diff';
+import { fieldLabel } from '@/lib/services/revision-field-labels';
 
 /** A person's name for a field, using the bent and girder names as typed so far. */
 function labelOf(path: string, check: DraftCheck): string {

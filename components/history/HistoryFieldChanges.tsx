@@ -1,5 +1,6 @@
 import { offsetText, stationText, type Units } from '@/lib/units';
-import { fieldKind, fieldLabel, type FieldChange, type Scalar } from '@/lib/services/revision-diff';
+import { type FieldChange, type Scalar } from '@/lib/services/revision-diff';
+import { fieldKind, fieldLabel } from '@/lib/services/revision-field-labels';
 import type { BridgeDescription } from '@/lib/geometry';
 
 function valueText(path: string, value: Scalar | undefined, units: Units): string {

@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { demoBridges } from '@/lib/demo/bridges';
 import { computeOffsetTable, type BridgeDescription } from '@/lib/geometry';
-import { diffFields, diffRevisions, fieldKind, fieldLabel } from '@/lib/services/revision-diff';
+import { diffFields, diffRevisions } from '@/lib/services/revision-diff';
+import { fieldKind, fieldLabel } from '@/lib/services/revision-field-labels';
 
 const copy = (d: BridgeDescription): BridgeDescription => JSON.parse(JSON.stringify(d));
 
