@@ -7,6 +7,7 @@ import * as m0006 from './0006-session-security';
 import * as m0005 from './0005-bridge-record';
 import * as m0007 from './0007-attachment-client-key';
 import * as m0008 from './0008-bridge-search';
+import * as m0009 from './0009-one-time-tokens';
 
 export type Migration = {
   name: string;
@@ -27,4 +28,5 @@ export const migrations: Migration[] = [
   { name: '0006-session-security', ...m0006 },
   { name: '0007-attachment-client-key', ...m0007 },
   { name: '0008-bridge-search', ...m0008 },
+  { name: '0009-one-time-tokens', ...m0009 },
 ];

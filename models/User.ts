@@ -13,6 +13,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   /** Removed accounts stay as rows (their checks and revisions keep their author) but never sign in. */
   declare removedAt: CreationOptional<Date | null>;
   declare lastSeenAt: CreationOptional<Date | null>;
+  /** Set while an invited person has not yet chosen a password from the e-mailed link. */
+  declare invitedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -28,6 +30,7 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         disabledAt: { type: DataTypes.DATE, allowNull: true, field: 'disabled_at' },
         removedAt: { type: DataTypes.DATE, allowNull: true, field: 'removed_at' },
         lastSeenAt: { type: DataTypes.DATE, allowNull: true, field: 'last_seen_at' },
+        invitedAt: { type: DataTypes.DATE, allowNull: true, field: 'invited_at' },
         createdAt: { type: DataTypes.DATE, field: 'created_at' },
         updatedAt: { type: DataTypes.DATE, field: 'updated_at' },
       },

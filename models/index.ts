@@ -10,11 +10,15 @@ import { OutboxMessage } from './OutboxMessage';
 import { GirderSurvey } from './GirderSurvey';
 import { SurveyImport } from './SurveyImport';
 import { SignInFailure } from './SignInFailure';
+import { OneTimeToken } from './OneTimeToken';
+import { AuthRequest } from './AuthRequest';
 
 export { User, Bridge, GeometryRevision, AuditEvent };
 export { FieldCheck, Attachment, SignOff, OutboxMessage };
 export { GirderSurvey, SurveyImport };
 export { SignInFailure };
+export { OneTimeToken, AuthRequest };
+export type { TokenPurpose } from './OneTimeToken';
 
 /** Binds every model to the connection and declares the associations. Call once per connection. */
 export function initModels(sequelize: Sequelize): void {
@@ -46,4 +50,9 @@ export function initModels(sequelize: Sequelize): void {
 
   // Sign-in throttle (issue 11).
   SignInFailure.initModel(sequelize);
+
+  // Invites and password resets by e-mail (issue 14).
+  OneTimeToken.initModel(sequelize);
+  AuthRequest.initModel(sequelize);
+  OneTimeToken.belongsTo(User, { foreignKey: 'userId', as: 'user', onDelete: 'CASCADE' });
 }

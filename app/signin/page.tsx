@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import Link from 'next/link';
 import { redirect } from 'next/navigation';
 import SessionProvider from '@/components/SessionProvider';
 import SignInForm from '@/components/signin/SignInForm';
@@ -38,9 +39,13 @@ export default async function SignInPage({ searchParams }: { searchParams: Searc
         <main className="flex flex-1 items-center justify-center px-6 py-10">
           <div className="w-full max-w-sm">
             <h2 className="text-2xl font-bold text-concrete-900">Sign in</h2>
-            <p className="mb-6 mt-1 text-sm text-concrete-600">Use the e-mail and password your administrator gave you.</p>
+            <p className="mb-6 mt-1 text-sm text-concrete-600">Use your e-mail address and your Chordline password.</p>
             <SignInForm callbackUrl={callbackUrl} initialError={first(params.error)} />
-            <p className="mt-6 text-sm text-concrete-600">Forgot your password? An administrator can set a new one for you.</p>
+            <p className="mt-6 text-sm">
+              <Link href="/forgot-password" className="font-semibold text-brand-700 underline-offset-2 hover:underline">
+                Forgot password?
+              </Link>
+            </p>
           </div>
         </main>
       </div>

@@ -1,13 +1,13 @@
 'use client';
 
 import useSWR from 'swr';
-import AddUserForm from '@/components/admin/AddUserForm';
+import InviteUserForm from '@/components/admin/InviteUserForm';
 import { fetcher, type ApiError } from '@/lib/client/api-client';
 import { LoadFailed, Loading } from '@/components/LoadState';
 import type { PublicUserRow } from '@/components/admin/public-user';
 import UserRow from '@/components/admin/UserRow';
 
-/** The administrator's user list (GET /api/admin/users) and the form to add one. */
+/** The administrator's user list (GET /api/admin/users) and the form to invite a person by e-mail. */
 export default function UserAdmin({ selfId }: { selfId: number }) {
   const { data, error, isLoading, mutate } = useSWR<PublicUserRow[], ApiError>('/api/admin/users', fetcher);
   return (
@@ -29,7 +29,7 @@ export default function UserAdmin({ selfId }: { selfId: number }) {
                   Role
                 </th>
                 <th scope="col" className="px-4 py-3 font-semibold">
-                  Password
+                  Sign-in
                 </th>
                 <th scope="col" className="px-4 py-3 font-semibold">
                   Access
@@ -44,7 +44,7 @@ export default function UserAdmin({ selfId }: { selfId: number }) {
           </table>
         </div>
       )}
-      <AddUserForm />
+      <InviteUserForm />
     </div>
   );
 }

@@ -7,33 +7,28 @@ import { ApiError, sendJson } from '@/lib/client/api-client';
 import type { PublicUserRow } from '@/components/admin/public-user';
 import { dateTimeText } from '@/lib/units';
 import UserAccessControls from '@/components/admin/UserAccessControls';
+import UserPasswordCell from '@/components/admin/UserPasswordCell';
 
-/** One user: change the role, set a new password (PATCH /api/admin/users/[id]), disable or remove the account. */
+/** One user: change the role (PATCH /api/admin/users/[id]), the invite or reset link, disable or remove the account. */
 export default function UserRow({ user, isSelf }: { user: PublicUserRow; isSelf: boolean }) {
   const id = useId();
   const [role, setRole] = useState(user.role);
-  const [password, setPassword] = useState('');
-  const [resetting, setResetting] = useState(false);
-  const [errors, setErrors] = useState<{ role?: string; password?: string }>({});
+  const [error, setError] = useState<string | null>(null);
   const [done, setDone] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
 
-  async function patch(body: { role: string } | { password: string }, key: 'role' | 'password', ok: string) {
+  async function saveRole() {
     setBusy(true);
-    setErrors({});
+    setError(null);
     setDone(null);
     try {
-      await sendJson(`/api/admin/users/${user.id}`, 'PATCH', body);
+      await sendJson(`/api/admin/users/${user.id}`, 'PATCH', { role });
       await mutate('/api/admin/users');
-      setDone(ok);
-      if (key === 'password') {
-        setPassword('');
-        setResetting(false);
-      }
+      setDone(`Role changed to ${isRole(role) ? ROLE_LABELS[role] : role}.`);
     } catch (err) {
       const e = err as ApiError;
-      setErrors({ [key]: e.fields?.[key]?.join(' ') ?? e.message });
-      if (key === 'role') setRole(user.role);
+      setError(e.fields?.role?.join(' ') ?? e.message);
+      setRole(user.role);
     }
     setBusy(false);
   }
@@ -46,9 +41,9 @@ export default function UserRow({ user, isSelf }: { user: PublicUserRow; isSelf:
           {isSelf ? <span className="ml-2 text-xs font-normal text-concrete-600">(you)</span> : null}
           {user.disabled ? <span className="ml-2 rounded bg-fail-100 px-1.5 py-0.5 text-xs font-semibold text-fail-600">Disabled</span> : null}
         </div>
-        <div className="text-sm text-concrete-600">{user.email}</div>
+        <div className="break-all text-sm text-concrete-600">{user.email}</div>
         <div className="text-xs text-concrete-500">
-          Added {dateTimeText(user.createdAt)}
+          {user.invitePending ? 'Invited' : 'Added'} {dateTimeText(user.createdAt)}
           {user.lastSeenAt ? ` · last seen ${dateTimeText(user.lastSeenAt)}` : ''}
         </div>
       </td>
@@ -57,7 +52,7 @@ export default function UserRow({ user, isSelf }: { user: PublicUserRow; isSelf:
           className="flex flex-wrap items-start gap-2"
           onSubmit={(e) => {
             e.preventDefault();
-            void patch({ role }, 'role', `Role changed to ${isRole(role) ? ROLE_LABELS[role] : role}.`);
+            void saveRole();
           }}
         >
           <label htmlFor={`${id}-role`} className="sr-only">
@@ -68,8 +63,8 @@ export default function UserRow({ user, isSelf }: { user: PublicUserRow; isSelf:
             value={role}
             onChange={(e) => setRole(e.target.value)}
             className="field-input mt-0 w-auto"
-            aria-invalid={errors.role ? true : undefined}
-            aria-describedby={errors.role ? `${id}-role-error` : undefined}
+            aria-invalid={error ? true : undefined}
+            aria-describedby={error ? `${id}-role-error` : undefined}
           >
             {ROLES.map((r) => (
               <option key={r} value={r}>
@@ -80,82 +75,22 @@ export default function UserRow({ user, isSelf }: { user: PublicUserRow; isSelf:
           <button type="submit" className="btn-secondary" disabled={busy || role === user.role}>
             Save role
           </button>
-          {errors.role ? (
+          {error ? (
             <p id={`${id}-role-error`} className="field-error w-full">
-              {errors.role}
+              {error}
+            </p>
+          ) : null}
+          {done ? (
+            <p role="status" className="w-full text-sm text-pass-700">
+              {done}
             </p>
           ) : null}
         </form>
       </td>
       <td className="px-4 py-3">
-        {resetting ? (
-          <form
-            className="flex flex-wrap items-start gap-2"
-            onSubmit={(e) => {
-              e.preventDefault();
-              if (password.length < 10) {
-                setErrors({ password: 'Use at least 10 characters.' });
-                return;
-              }
-              void patch({ password }, 'password', 'New password set. Give it to the user by a separate, safe route.');
-            }}
-          >
-            <label htmlFor={`${id}-password`} className="sr-only">
-              New password for {user.name}
-            </label>
-            <input
-              id={`${id}-password`}
-              type="password"
-              autoComplete="new-password"
-              autoFocus
-              placeholder="At least 10 characters"
-              value={password}
-              onChange={(e) => setPassword(e.target.value)}
-              className="field-input mt-0 w-56"
-              aria-invalid={errors.password ? true : undefined}
-              aria-describedby={errors.password ? `${id}-password-error` : undefined}
-            />
-            <button type="submit" className="btn-primary" disabled={busy}>
-              Set password
-            </button>
-            <button
-              type="button"
-              className="btn-secondary"
-              onClick={() => {
-                setResetting(false);
-                setPassword('');
-                setErrors({});
-              }}
-            >
-              Cancel
-            </button>
-            {errors.password ? (
-              <p id={`${id}-password-error`} className="field-error w-full">
-                {errors.password}
-              </p>
-            ) : null}
-          </form>
-        ) : (
-          <button
-            type="button"
-            className="btn-secondary"
-            onClick={() => {
-              setResetting(true);
-              setDone(null);
-            }}
-          >
-            Reset password
-          </button>
-        )}
-        {done ? (
-          <p role="status" className="mt-1 text-sm text-pass-700">
-            {done}
-          </p>
-        ) : null}
+        <UserPasswordCell user={user} />
       </td>
-      <td className="px-4 py-3">
-        <UserAccessControls user={user} isSelf={isSelf} />
-      </td>
+      <td className="px-4 py-3">{user.invitePending ? <p className="text-sm text-concrete-600">Not signed in yet.</p> : <UserAccessControls user={user} isSelf={isSelf} />}</td>
     </tr>
   );
 }

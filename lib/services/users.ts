@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { User } from '@/models';
+import { Op } from 'sequelize';
+import { OneTimeToken, User } from '@/models';
 import { db } from '@/lib/db/connection';
 import { NotFoundError, ValidationError } from '@/lib/errors';
 import { hashPassword } from '@/lib/auth/password';
@@ -9,31 +10,48 @@ import { clearFailures } from '@/lib/auth/throttle';
 import { cleanName } from '@/lib/text/clean';
 import { audit } from './audit';
 
-const password = z.string().min(10, 'Use at least 10 characters.').max(200, 'Keep the password under 200 characters.');
+/** The password rules, the same wherever a password is chosen (admin, invite link, reset link). */
+export const passwordSchema = z.string().min(10, 'Use at least 10 characters.').max(200, 'Keep the password under 200 characters.');
 const role = z.enum(ROLES, { error: `Role must be one of: ${ROLES.join(', ')}.` });
 
 export const createUserSchema = z.object({
   email: z.email('Enter a valid e-mail address.').trim().toLowerCase(),
   name: z.string().transform(cleanName).pipe(z.string().min(1, 'Enter a name.').max(120, 'Keep the name under 120 characters.')),
   role,
-  password,
+  password: passwordSchema,
 });
 
 export const updateUserSchema = z
   .object({
     name: z.string().transform(cleanName).pipe(z.string().min(1, 'Enter a name.').max(120)).optional(),
     role: role.optional(),
-    password: password.optional(),
+    password: passwordSchema.optional(),
     disabled: z.boolean({ error: 'disabled must be true or false.' }).optional(),
   })
   .refine((v) => v.name !== undefined || v.role !== undefined || v.password !== undefined || v.disabled !== undefined, {
     message: 'Change the name, the role, the password or whether the account is disabled.',
   });
 
-/** The only shape a user ever leaves the server in: no password hash. */
-export type PublicUser = { id: number; email: string; name: string; role: string; createdAt: string; disabled: boolean; lastSeenAt: string | null };
+/**
+ * The only shape a user ever leaves the server in: no password hash. `invitePending` while an invited
+ * person has not chosen a password; `inviteExpiresAt` is when their newest invite link stops working
+ * (null when there is none).
+ */
+export type PublicUser = {
+  id: number;
+  email: string;
+  name: string;
+  role: string;
+  createdAt: string;
+  disabled: boolean;
+  lastSeenAt: string | null;
+  invitePending: boolean;
+  inviteExpiresAt: string | null;
+  /** True when the pending invite's link no longer works (re-send it). */
+  inviteExpired: boolean;
+};
 
-function publicUser(u: User): PublicUser {
+export function publicUser(u: User, inviteExpiresAt: Date | null = null): PublicUser {
   return {
     id: u.id,
     email: u.email,
@@ -42,13 +60,22 @@ function publicUser(u: User): PublicUser {
     createdAt: u.createdAt.toISOString(),
     disabled: u.disabledAt != null,
     lastSeenAt: u.lastSeenAt ? u.lastSeenAt.toISOString() : null,
+    invitePending: u.invitedAt != null,
+    inviteExpiresAt: u.invitedAt != null && inviteExpiresAt ? inviteExpiresAt.toISOString() : null,
+    inviteExpired: u.invitedAt != null && (!inviteExpiresAt || inviteExpiresAt.getTime() <= Date.now()),
   };
 }
 
 /** Every account that has not been removed (removed ones stay only as the author of their work). */
 export async function listUsers(): Promise<PublicUser[]> {
   await db();
-  return (await User.findAll({ where: { removedAt: null }, order: [['email', 'ASC']] })).map(publicUser);
+  const users = await User.findAll({ where: { removedAt: null }, order: [['email', 'ASC']] });
+  const pending = users.filter((u) => u.invitedAt != null).map((u) => u.id);
+  const links = pending.length ? await OneTimeToken.findAll({ where: { userId: { [Op.in]: pending }, purpose: 'invite' }, attributes: ['userId', 'expiresAt', 'usedAt'] }) : [];
+  // The newest invite link of each pending person (an earlier one is marked used when the invite is re-sent).
+  const expires = new Map<number, Date>();
+  for (const l of links) if (l.usedAt == null && (expires.get(l.userId)?.getTime() ?? 0) < l.expiresAt.getTime()) expires.set(l.userId, l.expiresAt);
+  return users.map((u) => publicUser(u, expires.get(u.id) ?? null));
 }
 
 export async function createUser(actor: SessionUser | null, input: z.infer<typeof createUserSchema>): Promise<PublicUser> {
@@ -85,6 +112,8 @@ export async function updateUser(actor: SessionUser, id: string, input: z.infer<
   }
   if (input.password !== undefined) {
     user.passwordHash = await hashPassword(input.password);
+    // A password set by an administrator ends a pending invite (its link is revoked below).
+    user.invitedAt = null;
     changed.push('password');
   }
   if (input.disabled !== undefined && input.disabled !== (user.disabledAt != null)) {
@@ -96,7 +125,10 @@ export async function updateUser(actor: SessionUser, id: string, input: z.infer<
   await user.save();
   forgetSessionUser(user.id);
   // A reset password also lifts the sign-in slowdown on the account.
-  if (changed.includes('password')) await clearFailures(user.email);
+  if (changed.includes('password')) {
+    await clearFailures(user.email);
+    await OneTimeToken.update({ usedAt: new Date() }, { where: { userId: user.id, usedAt: null } });
+  }
   await audit(actor.id, 'user.update', 'user', user.id, { changed, role: user.role });
   return publicUser(user);
 }
@@ -120,6 +152,7 @@ export async function removeUser(actor: SessionUser, id: string): Promise<{ remo
   user.removedAt = new Date();
   await user.save();
   await endSessions(user.id);
+  await OneTimeToken.update({ usedAt: new Date() }, { where: { userId: user.id, usedAt: null } });
   await audit(actor.id, 'user.remove', 'user', user.id, { email: user.email });
   return { removed: true, id: user.id };
 }

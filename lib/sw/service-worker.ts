@@ -28,8 +28,8 @@ const okOnly = () => new CacheableResponsePlugin({ statuses: [200] });
 const NETWORK_TIMEOUT_SECONDS = 8;
 
 const runtimeCaching: RuntimeCaching[] = [
-  // Sign-in and session answers are never cached.
-  { matcher: ({ sameOrigin, url }) => sameOrigin && url.pathname.startsWith('/api/auth/'), handler: new NetworkOnly() },
+  // Sign-in and session answers, and the pages of e-mailed one-time links, are never cached.
+  { matcher: ({ sameOrigin, url }) => sameOrigin && /^\/(api\/auth|invite|reset)\//.test(url.pathname), handler: new NetworkOnly() },
   // Photos: their bytes never change under an id.
   {
     matcher: ({ sameOrigin, url }) => sameOrigin && url.pathname.startsWith('/api/attachments/'),

@@ -36,6 +36,15 @@ import * as surveyPreview from '@/app/api/bridges/[id]/survey/preview/route';
 // Geometry editor and LandXML import (issue 4, part A).
 import * as landxmlImport from '@/app/api/import/landxml/route';
 import * as revisionOne from '@/app/api/bridges/[id]/revisions/[revision]/route';
+// Invites and password resets by e-mail (issue 14).
+import * as inviteRoute from '@/app/api/admin/users/invite/route';
+import * as inviteOne from '@/app/api/admin/users/[id]/invite/route';
+import * as resetLinkRoute from '@/app/api/admin/users/[id]/reset-link/route';
+import * as passwordReset from '@/app/api/password-reset/route';
+import * as passwordLinks from '@/app/api/password-links/route';
+import { inviteUser } from '@/lib/services/invites';
+import { issueToken } from '@/lib/auth/one-time-token';
+import { db } from '@/lib/db/connection';
 
 type Expect = Record<Who, number>;
 const row = (anonymous: number, crew: number, inspector: number, engineer: number, admin: number): Expect => ({
@@ -188,7 +197,36 @@ const matrix: Record<string, Case> = {
     expect: row(401, 403, 403, 200, 200),
   },
   'GET /api/bridges/[id]/revisions/[revision]': { handler: revisionOne.GET, expect: READ, setup: async () => ({ params: { id: await newBridge(), revision: '1' } }) },
+  // Invites and password resets by e-mail (issue 14): administrators invite; anyone may ask for a reset link or use a link.
+  'POST /api/admin/users/invite': {
+    handler: inviteRoute.POST,
+    expect: row(401, 403, 403, 403, 201),
+    setup: async () => ({ body: { email: `invited-${++fresh}@test.invalid`, name: 'Invited person', role: 'crew' } }),
+  },
+  'POST /api/admin/users/[id]/invite': { handler: inviteOne.POST, expect: row(401, 403, 403, 403, 200), setup: async () => ({ params: { id: await pendingInvite() } }) },
+  'DELETE /api/admin/users/[id]/invite': { handler: inviteOne.DELETE, expect: row(401, 403, 403, 403, 200), setup: async () => ({ params: { id: await pendingInvite() } }) },
+  'POST /api/admin/users/[id]/reset-link': {
+    handler: resetLinkRoute.POST,
+    expect: row(401, 403, 403, 403, 202),
+    setup: async () => ({ params: { id: String((await createUser(null, { email: `reset-${++fresh}@test.invalid`, name: 'Resetting', role: 'crew', password: 'long-enough-password' })).id) } }),
+  },
+  'POST /api/password-reset': { handler: passwordReset.POST, expect: row(202, 202, 202, 202, 202), setup: async () => ({ body: { email: `asks-${++fresh}@test.invalid` } }) },
+  'POST /api/password-links': {
+    handler: passwordLinks.POST,
+    expect: row(200, 200, 200, 200, 200),
+    setup: async () => {
+      const u = await createUser(null, { email: `link-${++fresh}@test.invalid`, name: 'Link user', role: 'crew', password: 'long-enough-password' });
+      const { token } = await (await db()).transaction((transaction) => issueToken(u.id, 'reset', transaction));
+      return { body: { purpose: 'reset', token, password: 'chosen-from-link-1' } };
+    },
+  },
 };
+
+/** A pending invite's user id (the mail goes to the local outbox). */
+async function pendingInvite(): Promise<string> {
+  const answer = await inviteUser({ id: people.admin.id, email: people.admin.email, name: 'Matrix admin', role: 'admin' }, { email: `pending-${++fresh}@test.invalid`, name: 'Pending', role: 'crew' });
+  return String(answer.user.id);
+}
 
 beforeAll(async () => {
   people = await makeUsers();

@@ -4,11 +4,14 @@ import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 import type { TestProject } from 'vitest/node';
+import { startSmtpCapture } from './smtp-capture';
 
 declare module 'vitest' {
   interface ProvidedContext {
     baseUrl: string;
     dataDir: string;
+    /** Where the test SMTP server writes each message the app sends (see smtp-capture.ts). */
+    mailDir: string;
   }
 }
 
@@ -51,21 +54,24 @@ export default async function setup(project: TestProject) {
   const reuse = process.env.E2E_REUSE_BUILD === '1' && !process.env.CI && fs.existsSync(path.join(root, distDir, 'BUILD_ID'));
   if (!reuse) execFileSync('npx', ['next', 'build'], { cwd: root, env, stdio: 'inherit' });
   execFileSync('npx', ['tsx', 'lib/cli/prepare.ts'], { cwd: root, env, stdio: 'inherit' });
+  const mail = await startSmtpCapture();
   const port = await freePort();
   const baseUrl = `http://127.0.0.1:${port}`;
   const child = spawn('npx', ['next', 'start', '-p', String(port), '-H', '127.0.0.1'], {
     cwd: root,
-    env: { ...env, NEXTAUTH_URL: baseUrl },
+    env: { ...env, NEXTAUTH_URL: baseUrl, SMTP_URL: mail.url },
     stdio: ['ignore', 'inherit', 'inherit'],
     detached: true,
   });
   await waitForHealth(baseUrl, child, 60000);
   project.provide('baseUrl', baseUrl);
   project.provide('dataDir', dataDir);
+  project.provide('mailDir', mail.dir);
   return async () => {
     try {
       process.kill(-child.pid!, 'SIGTERM');
     } catch {}
+    await mail.close();
     fs.rmSync(dataDir, { recursive: true, force: true });
   };
 }

@@ -4,11 +4,24 @@ import { useId, useState } from 'react';
 import { mutate } from 'swr';
 import { ROLES, ROLE_LABELS } from '@/lib/auth/roles';
 import { ApiError, sendJson } from '@/lib/client/api-client';
+import { dateTimeText } from '@/lib/units';
+import type { PublicUserRow } from '@/components/admin/public-user';
 
-const EMPTY = { email: '', name: '', role: 'crew', password: '' };
+const EMPTY = { name: '', email: '', role: 'crew' };
 
-/** Adds a user through POST /api/admin/users; the server's field errors show at each field. */
-export default function AddUserForm() {
+type Answer = { user: PublicUserRow; via: 'smtp' | 'outbox' };
+
+/** What the administrator is told after a link was mailed: where it went and until when it works. */
+export function sentText(email: string, via: 'smtp' | 'outbox', what: string, expiresAt: string | null): string {
+  const until = expiresAt ? ` It works once, until ${dateTimeText(expiresAt)}.` : '';
+  return via === 'smtp' ? `${what} sent to ${email}.${until}` : `${what} for ${email} is in the Outbox (no mail server is set up): pass the link on from there.${until}`;
+}
+
+/**
+ * Invites a person by e-mail (POST /api/admin/users/invite): the account is made without a password
+ * and the person chooses their own from the one-time link (24 hours). Field errors show at each field.
+ */
+export default function InviteUserForm() {
   const id = useId();
   const [values, setValues] = useState(EMPTY);
   const [fields, setFields] = useState<Record<string, string[]>>({});
@@ -25,7 +38,6 @@ export default function AddUserForm() {
     setFields({});
     setMessage(null);
     const local: Record<string, string[]> = {};
-    if (values.password.length < 10) local.password = ['Use at least 10 characters.'];
     if (!values.email.trim()) local.email = ['Enter a valid e-mail address.'];
     if (!values.name.trim()) local.name = ['Enter a name.'];
     if (Object.keys(local).length) {
@@ -34,19 +46,21 @@ export default function AddUserForm() {
       return;
     }
     try {
-      const created = await sendJson<{ email: string }>('/api/admin/users', 'POST', values);
+      const sent = await sendJson<Answer>('/api/admin/users/invite', 'POST', { ...values, email: values.email.trim() });
       await mutate('/api/admin/users');
       setValues(EMPTY);
-      setMessage({ kind: 'ok', text: `Added ${created.email}. Give them the password by a separate, safe route.` });
+      setMessage({ kind: 'ok', text: sentText(sent.user.email, sent.via, 'Invite', sent.user.inviteExpiresAt) });
     } catch (err) {
       const e = err as ApiError;
       setFields(e.fields ?? {});
       setMessage({ kind: 'error', text: e.message });
+      // A mail failure still made the account (pending): show it in the list.
+      if (e.status === 502) await mutate('/api/admin/users');
     }
     setBusy(false);
   }
 
-  const field = (key: keyof typeof EMPTY, label: string, input: React.ReactNode, hint?: string) => {
+  const field = (key: keyof typeof EMPTY, label: string, input: React.ReactNode) => {
     const errors = fields[key];
     return (
       <div>
@@ -58,8 +72,6 @@ export default function AddUserForm() {
           <p id={`${id}-${key}-error`} className="field-error">
             {errors.join(' ')}
           </p>
-        ) : hint ? (
-          <p className="mt-1 text-xs text-concrete-600">{hint}</p>
         ) : null}
       </div>
     );
@@ -68,14 +80,21 @@ export default function AddUserForm() {
 
   return (
     <form onSubmit={onSubmit} noValidate className="card space-y-4 p-6">
-      <h2 className="text-lg font-bold text-concrete-900">Add a user</h2>
-      <div className="grid gap-4 sm:grid-cols-2">
+      <div>
+        <h2 className="text-lg font-bold text-concrete-900">Invite by e-mail</h2>
+        <p className="mt-1 text-sm text-concrete-600">The person gets a link to choose their own password. It works once, within 24 hours; until then the invite shows as pending below.</p>
+      </div>
+      <div className="grid gap-4 sm:grid-cols-3">
+        {field(
+          'name',
+          'Name',
+          <input id={`${id}-name`} maxLength={120} autoComplete="off" value={values.name} onChange={(e) => set('name', e.target.value)} className="field-input" {...aria('name')} />,
+        )}
         {field(
           'email',
           'E-mail',
-          <input id={`${id}-email`} type="email" autoComplete="off" value={values.email} onChange={(e) => set('email', e.target.value)} className="field-input" {...aria('email')} />,
+          <input id={`${id}-email`} type="email" maxLength={254} autoComplete="off" value={values.email} onChange={(e) => set('email', e.target.value)} className="field-input" {...aria('email')} />,
         )}
-        {field('name', 'Name', <input id={`${id}-name`} value={values.name} onChange={(e) => set('name', e.target.value)} className="field-input" {...aria('name')} />)}
         {field(
           'role',
           'Role',
@@ -87,20 +106,6 @@ export default function AddUserForm() {
             ))}
           </select>,
         )}
-        {field(
-          'password',
-          'Password',
-          <input
-            id={`${id}-password`}
-            type="password"
-            autoComplete="new-password"
-            value={values.password}
-            onChange={(e) => set('password', e.target.value)}
-            className="field-input"
-            {...aria('password')}
-          />,
-          'At least 10 characters.',
-        )}
       </div>
       {message ? (
         <p role={message.kind === 'error' ? 'alert' : 'status'} className={`text-sm ${message.kind === 'error' ? 'text-fail-600' : 'text-pass-700'}`}>
@@ -108,7 +113,7 @@ export default function AddUserForm() {
         </p>
       ) : null}
       <button type="submit" className="btn-primary" disabled={busy}>
-        {busy ? 'Adding…' : 'Add user'}
+        {busy ? 'Sending invite…' : 'Send invite'}
       </button>
     </form>
   );
