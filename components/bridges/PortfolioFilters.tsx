@@ -1,15 +1,25 @@
 import Link from 'next/link';
 import { STAGES, STAGE_LABELS } from '@/lib/services/bridge-record';
 import type { BridgeListQuery } from '@/lib/services/bridge-list';
+import FilterSelect, { type FilterOption } from '@/components/bridges/FilterSelect';
 
-const SORT_LABELS = { activity: 'Latest activity', name: 'Name A–Z', structure: 'Structure no.' } as const;
+const SORT_OPTIONS: FilterOption[] = [
+  { value: 'activity', label: 'Latest activity' },
+  { value: 'name', label: 'Name A–Z' },
+  { value: 'structure', label: 'Structure no.' },
+];
+const ATTENTION_OPTIONS: FilterOption[] = [
+  { value: 'failures', label: 'Out-of-tolerance checks' },
+  { value: 'signoff', label: 'Spans waiting for sign-off' },
+];
 
 /**
  * The portfolio's search and filters as a plain GET form: the server does the searching, so it works
  * before any script has loaded and every filtered list has its own address to bookmark or share.
  */
 export default function PortfolioFilters({ query, districts }: { query: Partial<BridgeListQuery>; districts: string[] }) {
-  const select = 'field-input mt-1 py-1.5';
+  // A district in the address that no bridge holds any more stays selectable, so the form shows what was asked.
+  const districtOptions = query.district && !districts.includes(query.district) ? [...districts, query.district] : districts;
   return (
     <form
       method="get"
@@ -24,55 +34,10 @@ export default function PortfolioFilters({ query, districts }: { query: Partial<
         </label>
         <input id="portfolio-q" name="q" type="search" defaultValue={query.q ?? ''} maxLength={100} placeholder="Name, structure number or route" className="field-input mt-1 py-1.5" />
       </div>
-      <div>
-        <label htmlFor="portfolio-stage" className="field-label">
-          Stage
-        </label>
-        <select id="portfolio-stage" name="stage" defaultValue={query.stage ?? ''} className={select}>
-          <option value="">Any stage</option>
-          {STAGES.map((s) => (
-            <option key={s} value={s}>
-              {STAGE_LABELS[s]}
-            </option>
-          ))}
-        </select>
-      </div>
-      <div>
-        <label htmlFor="portfolio-district" className="field-label">
-          District
-        </label>
-        <select id="portfolio-district" name="district" defaultValue={query.district ?? ''} className={select}>
-          <option value="">All districts</option>
-          {districts.map((d) => (
-            <option key={d} value={d}>
-              {d}
-            </option>
-          ))}
-          {query.district && !districts.includes(query.district) ? <option value={query.district}>{query.district}</option> : null}
-        </select>
-      </div>
-      <div>
-        <label htmlFor="portfolio-attention" className="field-label">
-          Attention
-        </label>
-        <select id="portfolio-attention" name="attention" defaultValue={query.attention ?? ''} className={select}>
-          <option value="">Every bridge</option>
-          <option value="failures">Out-of-tolerance checks</option>
-          <option value="signoff">Spans waiting for sign-off</option>
-        </select>
-      </div>
-      <div>
-        <label htmlFor="portfolio-sort" className="field-label">
-          Order
-        </label>
-        <select id="portfolio-sort" name="sort" defaultValue={query.sort ?? 'activity'} className={select}>
-          {Object.entries(SORT_LABELS).map(([value, label]) => (
-            <option key={value} value={value}>
-              {label}
-            </option>
-          ))}
-        </select>
-      </div>
+      <FilterSelect name="stage" label="Stage" value={query.stage ?? ''} anyLabel="Any stage" options={STAGES.map((s) => ({ value: s, label: STAGE_LABELS[s] }))} />
+      <FilterSelect name="district" label="District" value={query.district ?? ''} anyLabel="All districts" options={districtOptions.map((d) => ({ value: d, label: d }))} />
+      <FilterSelect name="attention" label="Attention" value={query.attention ?? ''} anyLabel="Every bridge" options={ATTENTION_OPTIONS} />
+      <FilterSelect name="sort" label="Order" value={query.sort ?? 'activity'} options={SORT_OPTIONS} />
       <div className="col-span-2 flex items-end gap-2 lg:col-span-1">
         <button type="submit" className="btn-primary">
           Show
