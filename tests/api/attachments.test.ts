@@ -32,7 +32,9 @@ beforeAll(async () => {
 
 // The same upload, thumbnail, download and delete tests run with the files on the local disk and in
 // object storage (a fake S3 server, s3rver from the npm registry, started here on a loopback port).
-describe.each(FILE_BACKENDS)('attachments stored on %s', (backend) => {
+// Uploads make their thumbnail while the uploader waits (a worker thread per decode): give the busy
+// machine room.
+describe.each(FILE_BACKENDS)('attachments stored on %s', { timeout: 120_000 }, (backend) => {
   let stop: () => Promise<void>;
   beforeAll(async () => {
     ({ probe, stop } = await useFileBackend(backend));
