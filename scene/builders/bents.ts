@@ -18,7 +18,7 @@ export interface BentInstances {
 }
 
 /**
- * Caps span from 2 flange widths outside the outer girders, their top one girder depth under the
+ * Caps span from 3 ft (0.9 m) outside the outer girders on each bent line, their top one girder depth under the
  * lowest girder top on that bent line; three columns per bent (two when the cap is short) down to
  * a ground `clearance` below the lowest cap.
  */
@@ -28,10 +28,15 @@ export function buildBents(desc: BridgeDescription, model: BridgeModel, table: P
   const capWidth = 4 * u;
   const colSize = 3 * u;
   const clearance = 16 * u;
-  const offsets = desc.girders.flatMap((g) => g.offsets);
-  const lo = Math.min(...offsets) - 3 * u;
-  const hi = Math.max(...offsets) + 3 * u;
   const nb = desc.bents.length;
+  // Each cap reaches 3 ft past the outer girders on its own bent line: girders that spread along a
+  // flared deck sit at different offsets on each bent, and a cap sized for all of them would stick
+  // out past the narrow end of the deck.
+  const reach = (b: number): [number, number] => {
+    const offsets = desc.girders.map((g) => g.offsets[b]);
+    return [Math.min(...offsets) - 3 * u, Math.max(...offsets) + 3 * u];
+  };
+  let widest = 0;
   const caps = new Float32Array(nb * 16);
   const labels = new Float32Array(nb * 3);
   const capEnds: Array<{ a: [number, number, number]; b: [number, number, number] }> = [];
@@ -45,6 +50,8 @@ export function buildBents(desc: BridgeDescription, model: BridgeModel, table: P
     }
     if (!Number.isFinite(minTop)) minTop = model.profile.elevationAt(desc.bents[b].station);
     const capY = sceneY(frame, minTop) - girderDepth - capDepth / 2;
+    const [lo, hi] = reach(b);
+    widest = Math.max(widest, hi - lo);
     const pa = bentLinePoint(model.alignment, desc.bents[b], lo);
     const pb = bentLinePoint(model.alignment, desc.bents[b], hi);
     const a: [number, number, number] = [pa.x - frame.originX, capY, -(pa.y - frame.originY)];
@@ -59,7 +66,7 @@ export function buildBents(desc: BridgeDescription, model: BridgeModel, table: P
     lowest = Math.min(lowest, capY - capDepth / 2);
   }
   const groundY = lowest - clearance;
-  const perBent = hi - lo > 30 * u ? 3 : 2;
+  const perBent = widest > 30 * u ? 3 : 2;
   const columns = new Float32Array(nb * perBent * 16);
   let k = 0;
   for (const { a, b } of capEnds) {
