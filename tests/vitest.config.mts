@@ -32,7 +32,8 @@ export default defineConfig({
         test: {
           name: 'e2e',
           root,
-          include: ['tests/e2e/**/*.test.ts'],
+          // The cluster test serves the same production build as the browser tests (built once by the global setup).
+          include: ['tests/e2e/**/*.test.ts', 'tests/cluster/**/*.test.ts'],
           environment: 'node',
           globalSetup: ['tests/e2e/global-setup.ts'],
           testTimeout: 120000,
