@@ -50,7 +50,7 @@ export default function UserPasswordCell({ user }: { user: PublicUserRow }) {
       {user.invitePending ? (
         <>
           <p className="text-sm">
-            <span className={`rounded px-1.5 py-0.5 text-xs font-semibold ${expired ? 'bg-fail-100 text-fail-600' : 'bg-caution-100 text-caution-700'}`}>
+            <span className={`whitespace-nowrap rounded px-1.5 py-0.5 text-xs font-semibold ${expired ? 'bg-fail-100 text-fail-600' : 'bg-caution-100 text-caution-700'}`}>
               {expired ? 'Invite expired' : 'Invite pending'}
             </span>
             {user.inviteExpiresAt ? (

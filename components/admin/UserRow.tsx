@@ -41,7 +41,7 @@ export default function UserRow({ user, isSelf }: { user: PublicUserRow; isSelf:
           {isSelf ? <span className="ml-2 text-xs font-normal text-concrete-600">(you)</span> : null}
           {user.disabled ? <span className="ml-2 rounded bg-fail-100 px-1.5 py-0.5 text-xs font-semibold text-fail-600">Disabled</span> : null}
         </div>
-        <div className="break-all text-sm text-concrete-600">{user.email}</div>
+        <div className="text-sm text-concrete-600">{user.email}</div>
         <div className="text-xs text-concrete-500">
           {user.invitePending ? 'Invited' : 'Added'} {dateTimeText(user.createdAt)}
           {user.lastSeenAt ? ` · last seen ${dateTimeText(user.lastSeenAt)}` : ''}

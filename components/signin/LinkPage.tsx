@@ -40,11 +40,11 @@ export default async function LinkPage({ purpose, token }: { purpose: 'invite' |
       intro={
         purpose === 'invite' ? (
           <>
-            Hello {holder.name}. Choose the password you will sign in with as <strong className="break-all text-concrete-900">{holder.email}</strong>.
+            Hello {holder.name}. Choose the password you will sign in with as <strong className="break-words text-concrete-900">{holder.email}</strong>.
           </>
         ) : (
           <>
-            For <strong className="break-all text-concrete-900">{holder.email}</strong>. Saving it signs the account out on every device.
+            For <strong className="break-words text-concrete-900">{holder.email}</strong>. Saving it signs the account out on every device.
           </>
         )
       }
