@@ -1,15 +1,11 @@
 import { Jimp } from 'jimp';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import type { Browser, BrowserContext, Page } from 'playwright-core';
+import type { Browser, BrowserContext } from 'playwright-core';
 import { launchChromium, signIn, trackPageErrors } from './browser';
+import { PHONE, SOON, Check, Photo, bridgeId, openControlledFieldMode, keepOnPhone, waitingItems, recordHere, pickLastSpan, apiGet } from './offline-helpers';
 
 const baseUrl = inject('baseUrl');
 let browser: Browser;
-
-// A phone-sized viewport (390 × 844 CSS px, a common phone size), touch enabled.
-const PHONE = { viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true, deviceScaleFactor: 2 };
-// Room to wait on a busy machine (an upper bound on waiting, not a timing check).
-const SOON = { timeout: 30000 };
 
 beforeAll(async () => {
   browser = await launchChromium();
@@ -18,82 +14,6 @@ beforeAll(async () => {
 afterAll(async () => {
   await browser?.close();
 });
-
-type Check = { id: number; span: number; girder: string; point: number; revision: number; client_key: string | null; pass: boolean; computed_edge_width: number | null };
-type Photo = { id: number; check_id: number | null; client_key: string | null; content_type: string; url: string };
-type Waiting = { key: string; kind: string; checkKey: string | null };
-
-async function bridgeId(page: Page, name: string): Promise<string> {
-  const list = (await page.evaluate(async () => (await fetch('/api/bridges', { headers: { accept: 'application/json' } })).json())) as unknown;
-  const rows = (Array.isArray(list) ? list : ((list as { bridges?: unknown[]; items?: unknown[] }).bridges ?? (list as { items?: unknown[] }).items ?? [])) as { id: number; name: string }[];
-  const row = rows.find((b) => b.name === name);
-  expect(row, `demo bridge ${name}`).toBeDefined();
-  return String(row!.id);
-}
-
-/** Opens field mode once the service worker controls the page (the first visit installs it). */
-async function openControlledFieldMode(page: Page, id: string): Promise<void> {
-  await page.goto(`${baseUrl}/bridges/${id}/field`);
-  await page.evaluate(async () => {
-    await navigator.serviceWorker.ready;
-  });
-  if (!(await page.evaluate(() => Boolean(navigator.serviceWorker.controller)))) await page.reload();
-  await expect.poll(() => page.evaluate(() => Boolean(navigator.serviceWorker.controller)), SOON).toBe(true);
-  await page.getByTestId('target-width').waitFor();
-}
-
-async function keepOnPhone(page: Page): Promise<void> {
-  await page.getByRole('button', { name: 'Keep on this phone' }).click();
-  await expect.poll(() => page.getByTestId('kept-status').textContent(), { timeout: 30000 }).toMatch(/^Kept on this phone · saved \d\d:\d\d · revision \d+$/);
-}
-
-/** The phone's waiting items, straight from IndexedDB. */
-function waitingItems(page: Page): Promise<Waiting[]> {
-  return page.evaluate(
-    () =>
-      new Promise<Waiting[]>((resolve, reject) => {
-        const open = indexedDB.open('chordline-offline');
-        open.onerror = () => reject(open.error);
-        open.onsuccess = () => {
-          const req = open.result.transaction('outbox').objectStore('outbox').getAll();
-          req.onsuccess = () => {
-            resolve((req.result as Waiting[]).map((i) => ({ key: i.key, kind: i.kind, checkKey: i.checkKey ?? null })));
-            open.result.close();
-          };
-          req.onerror = () => reject(req.error);
-        };
-      }),
-  );
-}
-
-/** The decimal edge-width target shown under the feet-inches one, e.g. "4.53 ft" → 4.53. */
-async function decimalTarget(page: Page): Promise<number> {
-  const text = (await page.getByTestId('target-width').locator('xpath=following-sibling::dd[1]').textContent()) ?? '';
-  return Number(text.replace(/[^0-9.]/g, ''));
-}
-
-/** Records the shown target as the measured width at the current bracket, then steps on. */
-async function recordHere(page: Page): Promise<void> {
-  await page.getByLabel(/Measured edge width/).fill((await decimalTarget(page)).toFixed(2));
-  await page.getByRole('button', { name: 'Record' }).click();
-  await expect.poll(() => page.getByTestId('field-verdict').textContent(), SOON).toBe('PASS');
-}
-
-async function pickLastSpan(page: Page): Promise<{ span: number; girder: string }> {
-  const spans = page.getByRole('group', { name: 'Span' }).getByRole('button');
-  const fallback = page.locator('fieldset').first().getByRole('button');
-  const buttons = (await spans.count()) ? spans : fallback;
-  const last = buttons.last();
-  const span = Number(await last.textContent());
-  await last.click();
-  const girder = ((await page.locator('fieldset').nth(1).getByRole('button').first().textContent()) ?? '').replace(/(LT|RT)$/, '').trim();
-  await page.locator('fieldset').nth(1).getByRole('button').first().click();
-  return { span, girder };
-}
-
-function apiGet<T>(page: Page, url: string): Promise<T> {
-  return page.evaluate(async (u) => (await fetch(u, { headers: { accept: 'application/json' }, cache: 'no-store' })).json(), url) as Promise<T>;
-}
 
 describe('installable app', () => {
   it('serves the manifest with name, start URL, colours and 192/512 px icons including a maskable one', async () => {
@@ -256,85 +176,6 @@ describe('field mode without a connection', () => {
       const row = page.locator('tbody tr').filter({ has: page.locator('td:first-child', { hasText: new RegExp(`^${c.id}$`) }) });
       await expect.poll(() => row.textContent(), SOON).toMatch(/rev 1\s*\(older revision\)/);
     }
-    await context.close();
-  });
-});
-
-describe('nothing lost, nothing leaked', () => {
-  const DESK = { viewport: { width: 1280, height: 800 } };
-
-  function outboxCount(page: Page): Promise<number> {
-    return waitingItems(page).then((items) => items.length);
-  }
-
-  it('keeps a measurement through an expired sign-in and another person signing in, then sends it under the person who took it', async () => {
-    const context = await browser.newContext(DESK);
-    const page = await context.newPage();
-    await signIn(page, baseUrl, 'inspector@example.com');
-    const inspector = await page.evaluate(async () => (await (await fetch('/api/auth/session')).json()).user.name as string);
-    const id = await bridgeId(page, 'Quarry Lane Connector');
-    await openControlledFieldMode(page, id);
-    await keepOnPhone(page);
-    await context.setOffline(true);
-    await recordHere(page);
-    const [item] = await waitingItems(page);
-
-    // The sign-in expires while the phone is offline; the connection comes back.
-    await context.clearCookies();
-    await context.setOffline(false);
-    await expect.poll(() => page.getByText('Signed out: sign in again to send.').count(), { timeout: 60000 }).toBeGreaterThan(0);
-    expect(await outboxCount(page)).toBe(1);
-
-    // Someone else signs in on this phone: the measurement is not theirs to send.
-    await signIn(page, baseUrl, 'crew@example.com');
-    await page.goto(`${baseUrl}/bridges/${id}/field`);
-    await expect.poll(() => page.getByText(/taken on this phone by inspector@example\.com wait for that person/).count(), SOON).toBe(1);
-    expect(await outboxCount(page)).toBe(1);
-    const early = await apiGet<Check[]>(page, `/api/bridges/${id}/checks`);
-    expect(early.filter((c) => c.client_key === item.key)).toEqual([]);
-    // Signing out with nothing of their own waiting does not ask, and leaves the inspector's measurement.
-    await page.goto(`${baseUrl}/bridges`);
-    await page.getByRole('button', { name: 'Sign out' }).click();
-    await page.waitForURL(/\/signin/);
-    expect(await outboxCount(page)).toBe(1);
-
-    // The inspector signs in again: it goes, once, under the inspector's name.
-    await signIn(page, baseUrl, 'inspector@example.com');
-    await expect.poll(() => outboxCount(page), { timeout: 60000 }).toBe(0);
-    const sent = (await apiGet<(Check & { by: string })[]>(page, `/api/bridges/${id}/checks`)).filter((c) => c.client_key === item.key);
-    expect(sent).toHaveLength(1);
-    expect(sent[0].by).toBe(inspector);
-    await context.close();
-  });
-
-  it('asks before signing out deletes unsent measurements, then clears the bridge data from the phone', async () => {
-    const context = await browser.newContext(DESK);
-    const page = await context.newPage();
-    await signIn(page, baseUrl, 'inspector@example.com');
-    const id = await bridgeId(page, 'Marlow Creek Overpass');
-    await openControlledFieldMode(page, id);
-    await keepOnPhone(page);
-    await context.setOffline(true);
-    await recordHere(page);
-    await page.getByRole('button', { name: 'Sign out' }).click();
-    await expect.poll(() => page.getByRole('alertdialog').textContent(), SOON).toMatch(/1 measurement or photo has not reached the server yet/);
-    await page.getByRole('button', { name: 'Stay signed in' }).click();
-    expect(await outboxCount(page)).toBe(1);
-    await page.getByRole('button', { name: 'Sign out' }).click();
-    await page.getByRole('button', { name: 'Delete and sign out' }).click();
-    await expect.poll(() => outboxCount(page), SOON).toBe(0);
-    const left = await page.evaluate(
-      () =>
-        new Promise<{ bridges: number; caches: string[] }>((resolve) => {
-          const open = indexedDB.open('chordline-offline');
-          open.onsuccess = () => {
-            const req = open.result.transaction('bridges').objectStore('bridges').count();
-            req.onsuccess = async () => resolve({ bridges: req.result, caches: await caches.keys() });
-          };
-        }),
-    );
-    expect(left.bridges).toBe(0);
-    expect(left.caches.filter((c) => ['chordline-pages', 'chordline-rsc', 'chordline-data', 'chordline-photos'].includes(c))).toEqual([]);
     await context.close();
   });
 });
