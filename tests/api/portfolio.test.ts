@@ -7,6 +7,7 @@ import * as bridge from '@/app/api/bridges/[id]/route';
 import * as checks from '@/app/api/bridges/[id]/checks/route';
 import * as signoffs from '@/app/api/bridges/[id]/signoffs/route';
 import { Bridge } from '@/models';
+import { listDistricts } from '@/lib/services/bridge-list';
 import { call, makeUsers, type TestUser } from './helpers';
 import type { Role } from '@/lib/auth/roles';
 
@@ -88,6 +89,15 @@ describe('GET /api/bridges search and filters', () => {
     expect(names(await list('?q=Portfolio&stage=forming')).sort()).toEqual(['Portfolio Alder Creek', 'Portfolio Dogwood Run']);
     expect(names(await list('?district=South')).sort()).toEqual(['Portfolio Cedar Wash', 'Portfolio Dogwood Run']);
     expect(names(await list('?q=route%207&district=North'))).toEqual(['Portfolio Birch Slough']);
+  });
+
+  it("offers the districts in use for the page's filter: each once, in order, none empty", async () => {
+    // Worked out independently from every bridge the list API returns (the districts above and any
+    // other test's) and compared with the filter's own read.
+    const all = (await list('?limit=500')).json as { district: string | null }[];
+    const expected = [...new Set(all.map((b) => b.district).filter((d): d is string => Boolean(d)))].sort((a, b) => (a < b ? -1 : a > b ? 1 : 0));
+    expect(expected).toEqual(expect.arrayContaining(['East', 'North', 'South', 'West']));
+    expect(await listDistricts()).toEqual(expected);
   });
 
   it('answers 400 naming the parameter for a bad stage, attention, sort or limit', async () => {
