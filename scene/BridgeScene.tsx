@@ -17,7 +17,7 @@ import CameraRig from './objects/CameraRig';
 import Ground from './objects/Ground';
 import OverlayBeams from './objects/OverlayBeams';
 import SkyDome from './objects/SkyDome';
-import SunLight from './objects/SunLight';
+import SunLight, { STATIC_SHADOWS } from './objects/SunLight';
 import LabelLayout from './objects/LabelLayout';
 import KinkProbe from './objects/KinkProbe';
 import PictureTaker, { type PictureFn } from './objects/PictureTaker';
@@ -74,6 +74,8 @@ export default function BridgeScene(props: BridgeSceneProps) {
     if (selected === null || selected * 3 >= pickPositions.length) return null;
     return [pickPositions[selected * 3], pickPositions[selected * 3 + 1], pickPositions[selected * 3 + 2]];
   }, [selected, pickPositions]);
+  // What casts or takes the sun's shadow: the static shadow map is drawn again when one of these changes.
+  const casters = useMemo(() => [parts.deckTop, parts.underside, parts.girders, brackets, bents, showDeck], [parts.deckTop, parts.underside, parts.girders, brackets, bents, showDeck]);
   const centre = useMemo((): { target: [number, number, number]; reach: number } => {
     const p = parts.deckTop.positions;
     let minX = Infinity,
@@ -100,14 +102,14 @@ export default function BridgeScene(props: BridgeSceneProps) {
         // counters describe steady rendering.
         frameloop={statsRef ? 'always' : 'demand'}
         dpr={[1, 1.5]}
-        shadows={shadows ? 'percentage' : false}
+        shadows={shadows ? STATIC_SHADOWS : false}
         camera={{ fov: 50, near: 0.3 * u, far: 60000 * u, position: pose.position }}
         gl={{ antialias: true, preserveDrawingBuffer: true }}
         aria-label={label}
         role="img"
       >
         <SkyDome radius={30000 * u} />
-        <SunLight target={centre.target} reach={centre.reach} shadows={shadows} />
+        <SunLight target={centre.target} reach={centre.reach} shadows={shadows} casters={casters} />
         <Ground y={bents.groundY} units={parts.units} centre={[centre.target[0], centre.target[2]]} extent={centre.reach} />
         {showDeck ? <BufferMesh positions={parts.deckTop.positions} indices={parts.deckTop.indices} color="#dcd7cb" recessed shadow={shadows} /> : null}
         <BufferMesh positions={parts.underside.positions} indices={parts.underside.indices} color="#c79d5f" roughness={0.9} recessed shadow={shadows} />

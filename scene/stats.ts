@@ -32,7 +32,10 @@ export interface PictureReport {
 }
 
 export interface SceneStats {
+  /** Draw calls of the last frame (the shadow pass included when that frame drew the shadow map). */
   drawCalls: number;
+  /** Most draw calls of any one frame so far: the shadow map is static, so this is the frame that redrew it. */
+  peakDrawCalls: number;
   triangles: number;
   frames: number;
   shadows: boolean;
@@ -63,6 +66,7 @@ export function sceneStats(): SceneStats {
   if (!window.__chordlineStats) {
     const s: SceneStats = {
       drawCalls: 0,
+      peakDrawCalls: 0,
       triangles: 0,
       frames: 0,
       shadows: false,

@@ -1,16 +1,21 @@
 'use client';
 
 import { useFrame } from '@react-three/fiber';
-import { useRef, type RefObject } from 'react';
+import { useEffect, useRef, type RefObject } from 'react';
 import { sceneStats } from '../stats';
 
 /**
  * Keeps the overlay's data attributes and `window.__chordlineStats` current from the renderer's
- * counters: draw calls and triangles of the last frame (shadow passes included), and frames rendered
- * so far. Writes attributes only when a number changed.
+ * counters: draw calls and triangles of the last frame (shadow pass included when that frame drew the
+ * static shadow map), the most draw calls of any frame, and frames rendered so far. Writes
+ * attributes only when a number changed.
  */
 export default function RenderStats({ targetRef, shadows }: { targetRef?: RefObject<HTMLElement | null>; shadows: boolean }) {
   const last = useRef({ calls: -1, triangles: -1, frames: 0 });
+  useEffect(() => {
+    // A new scene on this page (client-side navigation keeps the stats object): its own peak.
+    sceneStats().peakDrawCalls = 0;
+  }, []);
   useFrame(({ gl, size }, delta) => {
     const s = last.current;
     s.frames += 1;
@@ -22,6 +27,7 @@ export default function RenderStats({ targetRef, shadows }: { targetRef?: RefObj
     const calls = gl.info.render.calls;
     const triangles = gl.info.render.triangles;
     stats.drawCalls = calls;
+    stats.peakDrawCalls = Math.max(stats.peakDrawCalls, calls);
     stats.triangles = triangles;
     stats.frames = s.frames;
     stats.shadows = shadows;
