@@ -18,9 +18,9 @@ export default function UserAdmin({ selfId }: { selfId: number }) {
         <Loading>Loading users…</Loading>
       ) : (
         <div className="card overflow-x-auto">
-          <table className="w-full text-left text-sm">
+          <table role="table" className="block w-full text-left text-sm md:table">
             <caption className="sr-only">Users</caption>
-            <thead className="border-b border-concrete-200 bg-concrete-100 text-concrete-700">
+            <thead className="hidden border-b border-concrete-200 bg-concrete-100 text-concrete-700 md:table-header-group">
               <tr>
                 <th scope="col" className="px-4 py-3 font-semibold">
                   User
@@ -36,7 +36,7 @@ export default function UserAdmin({ selfId }: { selfId: number }) {
                 </th>
               </tr>
             </thead>
-            <tbody>
+            <tbody role="rowgroup" className="block md:table-row-group">
               {data.map((u) => (
                 <UserRow key={u.id} user={u} isSelf={u.id === selfId} />
               ))}

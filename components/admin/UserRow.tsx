@@ -34,8 +34,8 @@ export default function UserRow({ user, isSelf }: { user: PublicUserRow; isSelf:
   }
 
   return (
-    <tr className="border-t border-concrete-100 align-top">
-      <td className="px-4 py-3">
+    <tr role="row" className="block border-t border-concrete-100 py-2 align-top md:table-row md:py-0">
+      <td role="cell" className="block px-4 py-2 md:table-cell md:py-3">
         <div className="font-semibold text-concrete-900">
           {user.name}
           {isSelf ? <span className="ml-2 text-xs font-normal text-concrete-600">(you)</span> : null}
@@ -47,7 +47,8 @@ export default function UserRow({ user, isSelf }: { user: PublicUserRow; isSelf:
           {user.lastSeenAt ? ` · last seen ${dateTimeText(user.lastSeenAt)}` : ''}
         </div>
       </td>
-      <td className="px-4 py-3">
+      <td role="cell" className="block px-4 py-2 md:table-cell md:py-3">
+        <CellLabel>Role</CellLabel>
         <form
           className="flex flex-wrap items-start gap-2"
           onSubmit={(e) => {
@@ -87,10 +88,19 @@ export default function UserRow({ user, isSelf }: { user: PublicUserRow; isSelf:
           ) : null}
         </form>
       </td>
-      <td className="px-4 py-3">
+      <td role="cell" className="block px-4 py-2 md:table-cell md:py-3">
+        <CellLabel>Sign-in</CellLabel>
         <UserPasswordCell user={user} />
       </td>
-      <td className="px-4 py-3">{user.invitePending ? <p className="text-sm text-concrete-600">Not signed in yet.</p> : <UserAccessControls user={user} isSelf={isSelf} />}</td>
+      <td role="cell" className="block px-4 py-2 md:table-cell md:py-3">
+        <CellLabel>Access</CellLabel>
+        {user.invitePending ? <p className="text-sm text-concrete-600">Not signed in yet.</p> : <UserAccessControls user={user} isSelf={isSelf} />}
+      </td>
     </tr>
   );
+}
+
+/** A column's name above its cell on phones, where the table's header row is hidden. */
+function CellLabel({ children }: { children: string }) {
+  return <div className="mb-1 text-xs font-semibold uppercase tracking-wide text-concrete-500 md:hidden">{children}</div>;
 }
