@@ -6,38 +6,13 @@
  * with the draw calls and triangles. The browser test checks the picture; only this prints times, which
  * depend on the machine and its load (run it on a quiet machine to compare).
  */
-import { spawn, execFileSync } from 'node:child_process';
-import fs from 'node:fs';
-import net from 'node:net';
 import os from 'node:os';
-import path from 'node:path';
 import { chromium } from 'playwright-core';
 import { signIn } from '../e2e/browser';
+import { startServedApp } from './served-app';
 
-const root = path.resolve(__dirname, '../..');
 const distDir = process.env.BENCH_DIST_DIR || '.next-bench-scene';
 const rounds = Number(process.env.BENCH_SCENE_ROUNDS ?? 2);
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const srv = net.createServer().listen(0, '127.0.0.1', () => {
-      const { port } = srv.address() as net.AddressInfo;
-      srv.close(() => resolve(port));
-    });
-    srv.on('error', reject);
-  });
-}
-
-async function waitFor(url: string, ms: number) {
-  const until = Date.now() + ms;
-  while (Date.now() < until) {
-    try {
-      if ((await fetch(url)).ok) return;
-    } catch {}
-    await new Promise((r) => setTimeout(r, 250));
-  }
-  throw new Error(`no answer from ${url}`);
-}
 
 /** Opens each bridge's view `rounds` times and prints the time to three drawn frames. */
 async function measure(base: string): Promise<void> {
@@ -81,24 +56,11 @@ async function measure(base: string): Promise<void> {
 }
 
 async function main() {
-  if (!fs.existsSync(path.join(root, distDir, 'BUILD_ID')) || process.env.BENCH_REBUILD === '1') {
-    execFileSync('npx', ['next', 'build'], { cwd: root, env: { ...process.env, NEXT_DIST_DIR: distDir, NEXT_TELEMETRY_DISABLED: '1' }, stdio: 'inherit' });
-  }
-  const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'chordline-bench-scene-'));
-  const env = { ...process.env, DATA_DIR: dataDir, NEXT_DIST_DIR: distDir, NODE_ENV: 'production' as const, NEXT_TELEMETRY_DISABLED: '1' };
-  delete (env as Record<string, string | undefined>).CHORDLINE_NO_DEMO;
-  execFileSync('npx', ['tsx', 'lib/cli/prepare.ts'], { cwd: root, env, stdio: 'inherit' });
-  const port = await freePort();
-  const base = `http://127.0.0.1:${port}`;
-  const server = spawn('npx', ['next', 'start', '-p', String(port), '-H', '127.0.0.1'], { cwd: root, env: { ...env, NEXTAUTH_URL: base }, stdio: 'ignore', detached: true });
+  const app = await startServedApp({ distDir, rebuild: process.env.BENCH_REBUILD === '1', label: 'chordline-bench-scene' });
   try {
-    await waitFor(`${base}/api/health`, 120_000);
-    await measure(base);
+    await measure(app.base);
   } finally {
-    try {
-      process.kill(-server.pid!, 'SIGTERM');
-    } catch {}
-    fs.rmSync(dataDir, { recursive: true, force: true });
+    app.stop();
   }
 }
 
