@@ -107,8 +107,9 @@ export default function BridgeViewer({ description, table, name, revision, showS
       data-presenting={presenter.presenting ? 'true' : 'false'}
       className={presenter.presenting ? 'fixed inset-0 z-50 flex flex-col gap-3 overflow-y-auto bg-concrete-900 p-3 text-lg' : 'space-y-4'}
     >
+      {/* On a phone held upright the picture is about square: a tall, narrow one makes the overviews back far away. */}
       <div
-        className={`relative overflow-hidden rounded-lg border border-concrete-300 bg-[#dde4e6] ${presenter.presenting ? 'min-h-[60vh] flex-1' : 'h-[62vh] min-h-[360px] sm:min-h-[420px]'}`}
+        className={`relative overflow-hidden rounded-lg border border-concrete-300 bg-[#dde4e6] ${presenter.presenting ? 'min-h-[60vh] flex-1' : 'h-[min(62vh,100vw)] min-h-[320px] sm:h-[62vh] sm:min-h-[420px]'}`}
         data-testid="scene-canvas"
       >
         <BridgeScene

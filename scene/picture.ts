@@ -8,6 +8,12 @@ import type { LabelReport, PictureReport } from './stats';
 export const PICTURE_CAUTION =
   'Geometry only: bracket capacity, spacing, tie-back and fall protection follow the engineered falsework design, the maker\u2019s limits, the agency\u2019s specifications and local codes. The engineer of record decides; check against the plans.';
 
+/**
+ * The app's type for the picture's words. The family name is quoted: unquoted, "3" makes the whole
+ * canvas `font` value invalid and the canvas silently keeps its 10 px default.
+ */
+export const PICTURE_FONT = '"Source Sans 3", system-ui, sans-serif';
+
 export interface PictureCaption {
   bridge: string;
   revision: number | null;
@@ -55,12 +61,17 @@ function wrap(ctx: CanvasRenderingContext2D, text: string, width: number): strin
  */
 export function composePicture(scene: HTMLCanvasElement, scale: number, labels: readonly LabelReport[], caption: PictureCaption): { canvas: HTMLCanvasElement; report: PictureReport } {
   const w = scene.width;
-  const font = 'Source Sans 3, system-ui, sans-serif';
+  const font = PICTURE_FONT;
   const pad = 14 * scale;
+  const text = captionText(caption);
   const measure = document.createElement('canvas').getContext('2d')!;
+  // On a narrow (phone) picture the caption wraps like the caution instead of being squeezed.
+  measure.font = `700 ${15 * scale}px ${font}`;
+  const captionLines = wrap(measure, text, w - pad * 2);
   measure.font = `${12 * scale}px ${font}`;
   const cautionLines = wrap(measure, PICTURE_CAUTION, w - pad * 2);
-  const strip = Math.round(pad * 2 + 22 * scale + cautionLines.length * 16 * scale);
+  const captionHeight = captionLines.length * 20 * scale + 4 * scale;
+  const strip = Math.round(pad * 2 + captionHeight + cautionLines.length * 16 * scale);
   const canvas = document.createElement('canvas');
   canvas.width = w;
   canvas.height = scene.height + strip;
@@ -79,14 +90,13 @@ export function composePicture(scene: HTMLCanvasElement, scale: number, labels: 
   ctx.fillRect(0, scene.height, w, strip);
   ctx.fillStyle = '#d98e04';
   ctx.fillRect(0, scene.height, w, 3 * scale);
-  const text = captionText(caption);
   ctx.fillStyle = '#24221f';
   ctx.textBaseline = 'top';
   ctx.font = `700 ${15 * scale}px ${font}`;
-  ctx.fillText(text, pad, scene.height + pad, w - pad * 2);
+  captionLines.forEach((line, i) => ctx.fillText(line, pad, scene.height + pad + i * 20 * scale));
   ctx.font = `${12 * scale}px ${font}`;
   ctx.fillStyle = '#7a4a00';
-  cautionLines.forEach((line, i) => ctx.fillText(line, pad, scene.height + pad + 22 * scale + i * 16 * scale));
+  cautionLines.forEach((line, i) => ctx.fillText(line, pad, scene.height + pad + captionHeight + i * 16 * scale));
   return {
     canvas,
     report: {

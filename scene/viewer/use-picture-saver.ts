@@ -2,7 +2,7 @@
 
 import { useState, type RefObject } from 'react';
 import type { PictureFn } from '../objects/PictureTaker';
-import { composePicture, downloadCanvas, type PictureCaption } from '../picture';
+import { composePicture, downloadCanvas, PICTURE_FONT, type PictureCaption } from '../picture';
 import { sceneStats } from '../stats';
 
 /** Twice the picture's size on screen. */
@@ -20,6 +20,12 @@ export function usePictureSaver(pictureRef: RefObject<PictureFn | null>, caption
     }
     setBusy(true);
     try {
+      // The caption's weights of the app's type, loaded before the canvas draws with them.
+      await Promise.all([
+        document.fonts.load(`700 ${15 * PICTURE_SCALE}px ${PICTURE_FONT}`),
+        document.fonts.load(`${12 * PICTURE_SCALE}px ${PICTURE_FONT}`),
+        document.fonts.load(`600 ${12 * PICTURE_SCALE}px ${PICTURE_FONT}`),
+      ]);
       const scene = draw(PICTURE_SCALE);
       const stats = sceneStats();
       const { canvas, report } = composePicture(scene, PICTURE_SCALE, stats.labels, { ...caption, date: new Date() });
