@@ -1,5 +1,6 @@
 import { NextResponse } from 'next/server';
 import { ConflictError, DomainError, fieldErrors, invalidFields, NotFoundError, TooLargeError, UnprocessableError, UnsupportedTypeError, UpstreamError, ValidationError } from '@/lib/errors';
+import { shortProblemBody } from './problem-list';
 
 export { fieldErrors };
 
@@ -38,8 +39,12 @@ export function statusOf(err: DomainError): number {
   return STATUS.find(([kind]) => err instanceof kind)?.[1] ?? 400;
 }
 
+/**
+ * A JSON error answer. Field errors are listed short (lib/api/problem-list.ts): the first 20 and
+ * `problem_count`, so no input can make an error body large.
+ */
 export function jsonError(status: number, error: string, fields?: Record<string, string[]>): NextResponse {
-  return NextResponse.json(fields ? { error, fields } : { error }, { status });
+  return NextResponse.json(fields ? shortProblemBody(error, fields) : { error }, { status });
 }
 
 /** Maps anything thrown in a handler to a JSON answer that never carries a stack trace. */

@@ -5,6 +5,7 @@
  */
 import { z } from 'zod';
 import { HttpError } from '@/lib/api/errors';
+import { shortList } from '@/lib/api/problem-list';
 import { TooLargeError, ValidationError } from '@/lib/errors';
 import { filePart, readMultipart } from '@/lib/uploads/multipart';
 import { checkAlignmentCount } from './landxml-limits';
@@ -22,7 +23,7 @@ export interface LandXmlImportResponse {
   units: LengthUnit;
   linear_unit: string;
   alignments: ImportedAlignment[];
-  skipped: SkippedAlignment[];
+  skipped: (SkippedAlignment & { problem_count: number })[];
   alignment: ImportedAlignment['alignment'];
   profile: ImportedAlignment['profile'];
 }
@@ -104,7 +105,8 @@ export async function importLandXmlUpload(req: Request): Promise<LandXmlImportRe
       units: result.units,
       linear_unit: result.linear_unit,
       alignments,
-      skipped: result.skipped.map((s) => ({ name: s.name, reason: s.reason, problems: [...s.problems] })),
+      // Each skipped alignment lists its first 20 problems and counts them all (lib/api/problem-list.ts).
+      skipped: result.skipped.map((s) => ({ name: s.name, reason: s.reason, ...shortList(s.problems) })),
       alignment: alignments[0].alignment,
       profile: alignments[0].profile,
     };

@@ -1,5 +1,6 @@
 import { HttpError } from '@/lib/api/errors';
-import { descriptionSizeProblems, shortProblemBody } from './description-size';
+import { shortProblemBody } from '@/lib/api/problem-list';
+import { descriptionSizeProblems } from './description-size';
 
 /**
  * Refuses a description with a size no bridge reaches or a girder name over the one name limit:

@@ -24,9 +24,6 @@ export const GIRDER_NAME_MAX = 60;
 /** Deepest nesting of arrays and objects a request body may have (a description needs 4). */
 export const MAX_JSON_DEPTH = 32;
 
-/** At most this many problems are listed in an error body; the rest are counted. */
-export const MAX_LISTED_PROBLEMS = 20;
-
 export type SizeProblem = { path: string; message: string };
 
 const len = (v: unknown) => (Array.isArray(v) ? v.length : 0);
@@ -76,23 +73,4 @@ export function nestedDeeperThan(value: unknown, limit = MAX_JSON_DEPTH): boolea
     }
   }
   return false;
-}
-
-/**
- * An error body with at most {@link MAX_LISTED_PROBLEMS} problems: the first ones keyed by path,
- * and how many there were in all, so a hostile input cannot make the answer large.
- */
-export function shortProblemBody(error: string, problems: SizeProblem[] | Record<string, string[]>): { error: string; fields: Record<string, string[]>; problem_count: number } {
-  const entries: [string, string[]][] = Array.isArray(problems) ? problems.map((p) => [p.path, [p.message]] as [string, string[]]) : Object.entries(problems);
-  const total = entries.reduce((n, [, v]) => n + v.length, 0);
-  const fields: Record<string, string[]> = {};
-  let listed = 0;
-  for (const [path, messages] of entries) {
-    if (listed >= MAX_LISTED_PROBLEMS) break;
-    const take = messages.slice(0, MAX_LISTED_PROBLEMS - listed).map((m) => m.slice(0, 300));
-    fields[path.slice(0, 200)] = take;
-    listed += take.length;
-  }
-  const more = total - listed;
-  return { error: more > 0 ? `${error} (first ${listed} of ${total} problems listed)` : error, fields, problem_count: total };
 }
