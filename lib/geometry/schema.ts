@@ -4,11 +4,27 @@
  * new optional fields can be added without breaking stored revisions.
  */
 import { z } from 'zod';
+import { hasUnsafeChars } from '@/lib/text/unsafe-chars';
 
 const finite = (what: string) => z.number({ error: (iss) => (iss.input === undefined ? `${what} is required` : `${what} must be a finite number`) });
 
 const positive = (what: string) => finite(what).gt(0, { error: `${what} must be greater than zero` });
 const nonNegative = (what: string) => finite(what).min(0, { error: `${what} must not be negative` });
+
+/** The refusal of a name holding a control or bidirectional-control character, naming the field. */
+const noUnsafeChars = (what: string) => ({
+  error: `${what} must not contain control characters (tab, line breaks, NUL and the like) or right-to-left controls`,
+});
+
+/**
+ * A name shown to people (lists, sheets, CSV, PDF, DXF): text, not empty, with no control or
+ * bidirectional-control character (tab, line breaks, NUL, BEL, right-to-left override, ...).
+ */
+const nameText = (what: string) =>
+  z
+    .string({ error: `${what} must be text` })
+    .min(1, { error: `${what} is required` })
+    .refine((v) => !hasUnsafeChars(v), noUnsafeChars(what));
 
 const lineElement = z.looseObject({
   type: z.literal('line'),
@@ -97,26 +113,26 @@ const deckSchema = z.looseObject({
 });
 
 const bentSchema = z.looseObject({
-  name: z.string({ error: 'Bent name must be text' }).min(1, { error: 'Bent name is required' }),
+  name: nameText('Bent name'),
   station: finite('Bent station'),
   skew_deg: finite('Bent skew').gt(-90, { error: 'Bent skew must be strictly between -90 and 90 degrees' }).lt(90, { error: 'Bent skew must be strictly between -90 and 90 degrees' }),
 });
 
 const girderSchema = z.looseObject({
-  name: z.string({ error: 'Girder name must be text' }).min(1, { error: 'Girder name is required' }),
+  name: nameText('Girder name'),
   layout: z.enum(['chord', 'curved'], { error: 'Girder layout must be "chord" or "curved"' }),
   offsets: z.array(finite('Girder offset')).min(2, { error: 'A girder needs an offset at each bent (at least two)' }),
 });
 
 const topOfGirderSchema = z.looseObject({
-  girder: z.string({ error: 'Top-of-girder entry needs a girder name' }),
+  girder: z.string({ error: 'Top-of-girder entry needs a girder name' }).refine((v) => !hasUnsafeChars(v), noUnsafeChars('The girder name of a top-of-girder entry')),
   span: z.int({ error: 'Span must be a whole number' }).min(1, { error: 'Span numbers start at 1' }),
   point: z.int({ error: 'Point must be a whole number' }).min(0, { error: 'Point numbers start at 0' }),
   elevation: finite('Top-of-girder elevation'),
 });
 
 const deflectionSchema = z.looseObject({
-  girder: z.string({ error: 'Deflection entry needs a girder name' }),
+  girder: z.string({ error: 'Deflection entry needs a girder name' }).refine((v) => !hasUnsafeChars(v), noUnsafeChars('The girder name of a deflection entry')),
   span: z.int({ error: 'Span must be a whole number' }).min(1, { error: 'Span numbers start at 1' }),
   values: z
     .array(finite('Deflection'))
@@ -126,7 +142,7 @@ const deflectionSchema = z.looseObject({
 
 /** Zod schema of a bridge description (see shared bridge-format contract). */
 export const bridgeDescriptionSchema = z.looseObject({
-  name: z.string({ error: 'Name must be text' }).min(1, { error: 'Name is required' }),
+  name: nameText('Name'),
   units: z.enum(['ft', 'm'], { error: 'Units must be "ft" or "m"' }),
   alignment: alignmentSchema,
   profile: z.looseObject({

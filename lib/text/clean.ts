@@ -1,3 +1,5 @@
+import { UNSAFE_TEXT_RUNS } from './unsafe-chars';
+
 /**
  * Text a person typed, made safe to show and store as a name, caption or file name: control
  * characters (C0 including NUL, BEL, CR and LF; DEL; C1) and the bidirectional controls that can make
@@ -5,11 +7,7 @@
  * whitespace become one space, and the ends are trimmed. Unicode NFC so equal names compare equal.
  */
 export function cleanName(text: string): string {
-  return text
-    .normalize('NFC')
-    .replace(/[\u0000-\u001f\u007f-\u009f\u061c\u200e\u200f\u202a-\u202e\u2066-\u2069]+/g, ' ')
-    .replace(/\s+/g, ' ')
-    .trim();
+  return text.normalize('NFC').replace(UNSAFE_TEXT_RUNS, ' ').replace(/\s+/g, ' ').trim();
 }
 
 /** Multi-line text (notes, captions): the same, but line breaks are kept as "\n". */
@@ -20,7 +18,7 @@ export function cleanText(text: string): string {
     .split('\n')
     .map((line) =>
       line
-        .replace(/[\u0000-\u001f\u007f-\u009f\u061c\u200e\u200f\u202a-\u202e\u2066-\u2069]+/g, ' ')
+        .replace(UNSAFE_TEXT_RUNS, ' ')
         .replace(/[ \t]+/g, ' ')
         .trimEnd(),
     )
