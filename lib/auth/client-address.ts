@@ -9,9 +9,11 @@ function header(headers: HeaderSource, name: string): string | null {
 }
 
 /**
- * The client's address for the sign-in throttle. Next.js's server fills X-Forwarded-For from the
- * socket when the request has none. Behind a trusted proxy (TRUST_PROXY=1) the last entry is the
- * address the proxy itself saw, which the client cannot forge; otherwise the first entry is used.
+ * The client's address for the sign-in throttle. Without TRUST_PROXY the server process replaces any
+ * X-Forwarded-For a request brings with the connection's own address before Next.js sees it
+ * (lib/auth/peer-address.ts, installed by instrumentation.ts), so the header holds exactly that one
+ * address. Behind a trusted proxy (TRUST_PROXY=1) the header is the proxy's and its last entry is the
+ * address the proxy itself saw, which the client cannot forge.
  */
 export function clientAddress(headers: HeaderSource): string {
   const list = (header(headers, 'x-forwarded-for') ?? '')
