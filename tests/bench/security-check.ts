@@ -121,6 +121,25 @@ async function main() {
     const big = await upload(base, '/api/bridges/1/attachments', inspector, oversize);
     line(`11 MB file${big.early ? ' (refused before the whole body was sent)' : ''}`, big.status, 413);
 
+    // 25 wrong passwords for 25 addresses from one client that names a new X-Forwarded-For each time:
+    // without TRUST_PROXY the server counts the connection's own address, so the client is stopped.
+    let lastSignIn = 0;
+    for (let i = 0; i < 25; i++) {
+      const csrf = await fetch(`${base}/api/auth/csrf`);
+      const { csrfToken } = (await csrf.json()) as { csrfToken: string };
+      const cookie = csrf.headers
+        .getSetCookie()
+        .map((c) => c.split(';')[0])
+        .join('; ');
+      const res = await post('/api/auth/callback/credentials', cookie, new URLSearchParams({ csrfToken, email: `spray-${i}@example.com`, password: 'guess' }), {
+        'content-type': 'application/x-www-form-urlencoded',
+        origin: base,
+        'x-forwarded-for': `203.0.113.${i + 1}`,
+      });
+      lastSignIn = res.status;
+    }
+    line('25th sign-in with a made-up X-Forwarded-For each time', lastSignIn, 429);
+
     // Health while the heaviest allowed compute (interior rows, 250,000 girder points) and a 49-megapixel photo run.
     const bents = Array.from({ length: 8 }, (_, i) => ({ name: `B${i + 1}`, station: 1200 + i * 35, skew_deg: 0 }));
     const girders = Array.from({ length: 40 }, (_, i) => ({ name: `G${i + 1}`, layout: 'chord', offsets: bents.map(() => -18 + i * 0.9) }));
