@@ -38,6 +38,9 @@ export default defineConfig({
           globalSetup: ['tests/e2e/global-setup.ts'],
           testTimeout: 120000,
           hookTimeout: 120000,
+          // A poll waits for a condition on the page; on a busy machine a server answer can take
+          // seconds, so the default 1 s is only a floor for waiting, not a speed check.
+          expect: { poll: { timeout: 20000 } },
           fileParallelism: false,
         },
       },
