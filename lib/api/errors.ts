@@ -39,12 +39,18 @@ export function statusOf(err: DomainError): number {
   return STATUS.find(([kind]) => err instanceof kind)?.[1] ?? 400;
 }
 
+/** Answers to bad input, whose problem lists a hostile input could make long: listed short. */
+const INPUT_PROBLEM_STATUSES = new Set([400, 413, 415, 422]);
+
 /**
- * A JSON error answer. Field errors are listed short (lib/api/problem-list.ts): the first 20 and
- * `problem_count`, so no input can make an error body large.
+ * A JSON error answer. The field errors of a refused input (400, 413, 415, 422) are listed short
+ * (lib/api/problem-list.ts): the first 20 and `problem_count`, so no input can make an error body
+ * large. Other answers keep their list whole: a sign-off's 409 lists the checks still missing, a work
+ * list bounded by the stored bridge, not by what a request sends.
  */
 export function jsonError(status: number, error: string, fields?: Record<string, string[]>): NextResponse {
-  return NextResponse.json(fields ? shortProblemBody(error, fields) : { error }, { status });
+  if (!fields) return NextResponse.json({ error }, { status });
+  return NextResponse.json(INPUT_PROBLEM_STATUSES.has(status) ? shortProblemBody(error, fields) : { error, fields }, { status });
 }
 
 /** Maps anything thrown in a handler to a JSON answer that never carries a stack trace. */

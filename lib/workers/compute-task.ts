@@ -14,20 +14,6 @@ export type ComputeJob = { id: number; body: string; interior: boolean };
 /** The answer: the JSON text of the offset table, or a status and an error body for the client. */
 export type ComputeResult = { id: number; status: number; json: string };
 
-/**
- * The answer as it crosses to the server's main thread: the JSON already encoded as UTF-8 in a buffer
- * of its own, handed over (transferred, not copied), so the main thread neither copies a string of
- * hundreds of kilobytes out of the message nor encodes it again to send it.
- */
-export type ComputeReply = { id: number; status: number; bytes: Uint8Array<ArrayBuffer> };
-
-const utf8 = new TextEncoder();
-
-/** A result ready to transfer: its JSON text encoded as UTF-8 (TextEncoder gives a buffer of its own). */
-export function replyOf(result: ComputeResult): ComputeReply {
-  return { id: result.id, status: result.status, bytes: utf8.encode(result.json) };
-}
-
 const answer = (id: number, status: number, body: unknown): ComputeResult => ({ id, status, json: JSON.stringify(body) });
 
 /**
@@ -60,14 +46,11 @@ export function runComputeJob(job: ComputeJob): ComputeResult {
 if (parentPort) {
   const port = parentPort;
   port.on('message', (job: ComputeJob) => {
-    let result: ComputeResult;
     try {
-      result = runComputeJob(job);
+      port.postMessage(runComputeJob(job));
     } catch (err) {
       console.error('[chordline] compute worker failed:', err instanceof Error ? err.message : err);
-      result = answer(job.id, 500, { error: 'Something went wrong on the server. Try again; if it keeps happening, tell your administrator.' });
+      port.postMessage({ id: job.id, status: 500, json: JSON.stringify({ error: 'Something went wrong on the server. Try again; if it keeps happening, tell your administrator.' }) });
     }
-    const reply = replyOf(result);
-    port.postMessage(reply, [reply.bytes.buffer]);
   });
 }
