@@ -88,7 +88,7 @@ function load(): string {
 }
 
 async function measure(page: Page, url: string, shadows: boolean, frames: number) {
-  await page.goto(`${url}${shadows ? '' : '&shadows=0'}`);
+  await page.goto(`${url}${shadows ? '' : '&shadows=0'}`, { timeout: WAIT });
   // Past the first frames (programs compiled, the static shadow map drawn), then orbit.
   await page.waitForFunction(() => (window.__chordlineStats?.frames ?? 0) >= 5, null, { timeout: WAIT, polling: 100 });
   const first = await page.evaluate(() => window.__chordlineStats!.firstFrameMs as number);
@@ -118,6 +118,7 @@ async function main() {
   const browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH || '/usr/bin/chromium', headless: true, args: FLAGS });
   try {
     const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+    page.setDefaultTimeout(WAIT);
     await signIn(page, server.url, 'engineer@example.com');
     const bridge = twelveSpanBridge();
     const res = await page.request.post(`${server.url}/api/bridges`, { headers: { Origin: server.url }, data: { name: `${bridge.name} ${Date.now()}`, description: bridge } });
