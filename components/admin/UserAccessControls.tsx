@@ -4,6 +4,7 @@ import { useState } from 'react';
 import { mutate } from 'swr';
 import { ApiError, sendJson } from '@/lib/client/api-client';
 import type { PublicUserRow } from '@/components/admin/public-user';
+import ConfirmPanel from './ConfirmPanel';
 
 /**
  * Disable or enable an account (PATCH { disabled }), or remove it after a second, explicit
@@ -36,19 +37,15 @@ export default function UserAccessControls({ user, isSelf }: { user: PublicUserR
   return (
     <div className="space-y-2">
       {confirming ? (
-        <div role="alertdialog" aria-labelledby={`remove-${user.id}`} className="rounded-md border border-fail-600 bg-fail-100 p-3">
-          <p id={`remove-${user.id}`} className="text-sm font-semibold text-concrete-900">
-            Remove {user.name}? They are signed out everywhere and can no longer sign in. Their checks, revisions and photos keep their name.
-          </p>
-          <div className="mt-2 flex flex-wrap gap-2">
-            <button type="button" className="btn-danger" onClick={() => void remove()} disabled={busy} autoFocus>
-              {busy ? 'Removing…' : 'Yes, remove this user'}
-            </button>
-            <button type="button" className="btn-secondary" onClick={() => setConfirming(false)} disabled={busy}>
-              Keep
-            </button>
-          </div>
-        </div>
+        <ConfirmPanel
+          id={`remove-${user.id}`}
+          question={`Remove ${user.name}? They are signed out everywhere and can no longer sign in. Their checks, revisions and photos keep their name.`}
+          confirmLabel="Yes, remove this user"
+          busyLabel="Removing…"
+          busy={busy}
+          onConfirm={() => void remove()}
+          onKeep={() => setConfirming(false)}
+        />
       ) : (
         <div className="flex flex-wrap gap-2">
           <button type="button" className="btn-secondary" onClick={() => void toggle()} disabled={busy}>

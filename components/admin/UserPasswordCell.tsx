@@ -6,6 +6,7 @@ import { ApiError, sendJson } from '@/lib/client/api-client';
 import { dateTimeText } from '@/lib/units';
 import type { PublicUserRow } from '@/components/admin/public-user';
 import { sentText } from '@/components/admin/InviteUserForm';
+import ConfirmPanel from './ConfirmPanel';
 
 /**
  * The sign-in column of one user. A pending invite: when its link stops working, "Re-send invite"
@@ -60,19 +61,15 @@ export default function UserPasswordCell({ user }: { user: PublicUserRow }) {
             ) : null}
           </p>
           {confirming ? (
-            <div role="alertdialog" aria-labelledby={`withdraw-${user.id}`} className="rounded-md border border-fail-600 bg-fail-100 p-3">
-              <p id={`withdraw-${user.id}`} className="text-sm font-semibold text-concrete-900">
-                Withdraw the invite to {user.email}? The link stops working and the unused account is deleted.
-              </p>
-              <div className="mt-2 flex flex-wrap gap-2">
-                <button type="button" className="btn-danger" onClick={() => void withdraw()} disabled={busy} autoFocus>
-                  {busy ? 'Withdrawing…' : 'Yes, withdraw'}
-                </button>
-                <button type="button" className="btn-secondary" onClick={() => setConfirming(false)} disabled={busy}>
-                  Keep
-                </button>
-              </div>
-            </div>
+            <ConfirmPanel
+              id={`withdraw-${user.id}`}
+              question={`Withdraw the invite to ${user.email}? The link stops working and the unused account is deleted.`}
+              confirmLabel="Yes, withdraw"
+              busyLabel="Withdrawing…"
+              busy={busy}
+              onConfirm={() => void withdraw()}
+              onKeep={() => setConfirming(false)}
+            />
           ) : (
             <div className="flex flex-wrap gap-2">
               <button type="button" className="btn-secondary" onClick={() => void resend()} disabled={busy}>

@@ -17,7 +17,7 @@ import { sendMail, type MailResult } from '@/lib/mail/send';
 import { inviteMail, linkFor, resetMail } from '@/lib/mail/account-mail';
 import { cleanName } from '@/lib/text/clean';
 import { audit } from './audit';
-import { publicUser, type PublicUser } from './users';
+import { assertEmailFree, publicUser, type PublicUser } from './users';
 
 export const inviteUserSchema = z.object({
   email: z.email('Enter a valid e-mail address.').max(254, 'Keep the e-mail address under 254 characters.').trim().toLowerCase(),
@@ -58,13 +58,7 @@ async function mailLink(actor: SessionUser, user: User, purpose: TokenPurpose): 
 /** Creates the account without a usable password and mails the invite link (valid 24 hours). */
 export async function inviteUser(actor: SessionUser, input: z.infer<typeof inviteUserSchema>): Promise<InviteAnswer> {
   await db();
-  const existing = await User.findOne({ where: { email: input.email } });
-  if (existing) {
-    const removed = existing.removedAt != null;
-    throw new ValidationError(removed ? 'That e-mail address belonged to a removed account; use another address.' : 'A user with that e-mail address already exists.', {
-      email: [removed ? 'Belonged to a removed account.' : 'Already in use.'],
-    });
-  }
+  await assertEmailFree(input.email);
   const user = await User.create({ email: input.email, name: input.name, role: input.role, passwordHash: await unusablePasswordHash(), invitedAt: new Date() });
   await audit(actor.id, 'user.invite', 'user', user.id, { email: user.email, role: user.role });
   const { result, expiresAt } = await mailLink(actor, user, 'invite');

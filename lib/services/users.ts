@@ -78,15 +78,19 @@ export async function listUsers(): Promise<PublicUser[]> {
   return users.map((u) => publicUser(u, expires.get(u.id) ?? null));
 }
 
+/** Refuses an e-mail address that a live or removed account already holds (addresses are never reused). */
+export async function assertEmailFree(email: string): Promise<void> {
+  const existing = await User.findOne({ where: { email } });
+  if (!existing) return;
+  const removed = existing.removedAt != null;
+  throw new ValidationError(removed ? 'That e-mail address belonged to a removed account; use another address.' : 'A user with that e-mail address already exists.', {
+    email: [removed ? 'Belonged to a removed account.' : 'Already in use.'],
+  });
+}
+
 export async function createUser(actor: SessionUser | null, input: z.infer<typeof createUserSchema>): Promise<PublicUser> {
   await db();
-  const existing = await User.findOne({ where: { email: input.email } });
-  if (existing) {
-    const removed = existing.removedAt != null;
-    throw new ValidationError(removed ? 'That e-mail address belonged to a removed account; use another address.' : 'A user with that e-mail address already exists.', {
-      email: [removed ? 'Belonged to a removed account.' : 'Already in use.'],
-    });
-  }
+  await assertEmailFree(input.email);
   const user = await User.create({ email: input.email, name: input.name, role: input.role, passwordHash: await hashPassword(input.password) });
   await audit(actor?.id ?? null, 'user.create', 'user', user.id, { email: user.email, role: user.role });
   return publicUser(user);
