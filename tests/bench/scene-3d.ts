@@ -12,12 +12,12 @@
  */
 import { execFileSync, spawn, type ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
-import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 import { chromium, type Page } from 'playwright-core';
 import { twelveSpanBridge } from './geometry';
 import { signIn } from '../e2e/browser';
+import { freePort } from '../support/free-port';
 
 const root = path.resolve(__dirname, '../..');
 const FLAGS = [
@@ -35,17 +35,6 @@ const FLAGS = [
 function median(v: number[]): number {
   const s = [...v].sort((a, b) => a - b);
   return s.length ? (s.length % 2 ? s[(s.length - 1) / 2] : (s[s.length / 2 - 1] + s[s.length / 2]) / 2) : NaN;
-}
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const srv = net.createServer();
-    srv.listen(0, '127.0.0.1', () => {
-      const { port } = srv.address() as net.AddressInfo;
-      srv.close(() => resolve(port));
-    });
-    srv.on('error', reject);
-  });
 }
 
 async function serve(): Promise<{ url: string; stop: () => void }> {

@@ -6,9 +6,9 @@
  */
 import { spawn, execFileSync, type StdioOptions } from 'node:child_process';
 import fs from 'node:fs';
-import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
+import { freePort } from '../support/free-port';
 
 const root = path.resolve(__dirname, '../..');
 
@@ -37,17 +37,6 @@ export type ServeOptions = {
   /** Extra environment for the server (e.g. COMPUTE_WORKERS). */
   env?: Record<string, string>;
 };
-
-/** A free TCP port on loopback. */
-export function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const srv = net.createServer().listen(0, '127.0.0.1', () => {
-      const { port } = srv.address() as net.AddressInfo;
-      srv.close(() => resolve(port));
-    });
-    srv.on('error', reject);
-  });
-}
 
 /** Waits until `url` answers 2xx, polling every 250 ms; throws after `ms`. */
 export async function waitFor(url: string, ms: number): Promise<void> {

@@ -1,23 +1,12 @@
 import { execFileSync, spawn, type ChildProcess } from 'node:child_process';
 import crypto from 'node:crypto';
 import fs from 'node:fs';
-import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 import { Client } from 'pg';
+import { freePort } from '../support/free-port';
 
 export const ROOT = path.resolve(__dirname, '../..');
-
-export function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const srv = net.createServer();
-    srv.listen(0, '127.0.0.1', () => {
-      const { port } = srv.address() as net.AddressInfo;
-      srv.close(() => resolve(port));
-    });
-    srv.on('error', reject);
-  });
-}
 
 /** A PostgreSQL database of its own for the cluster test, and how to drop it (and the server, when this test started one). */
 export type TestDatabase = { url: string; drop(): Promise<void> };

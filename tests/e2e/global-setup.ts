@@ -1,10 +1,10 @@
 import { spawn, execFileSync, type ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
-import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 import type { TestProject } from 'vitest/node';
 import { startSmtpCapture } from './smtp-capture';
+import { freePort } from '../support/free-port';
 
 declare module 'vitest' {
   interface ProvidedContext {
@@ -17,17 +17,6 @@ declare module 'vitest' {
 
 const root = path.resolve(__dirname, '../..');
 const distDir = process.env.E2E_DIST_DIR || '.next-test';
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const srv = net.createServer();
-    srv.listen(0, '127.0.0.1', () => {
-      const { port } = srv.address() as net.AddressInfo;
-      srv.close(() => resolve(port));
-    });
-    srv.on('error', reject);
-  });
-}
 
 async function waitForHealth(url: string, child: ChildProcess, timeoutMs: number): Promise<void> {
   const until = Date.now() + timeoutMs;
