@@ -1,4 +1,4 @@
-import { chromium, type Browser, type Page } from 'playwright-core';
+import { chromium, type Browser, type Locator, type Page } from 'playwright-core';
 
 /** Debian's Chromium, headless, with the flags this closed network needs. Never a downloaded browser. */
 export function launchChromium(): Promise<Browser> {
@@ -41,4 +41,12 @@ export function trackPageErrors(page: Page): Error[] {
   const errors: Error[] = [];
   page.on('pageerror', (e) => errors.push(e));
   return errors;
+}
+
+/**
+ * The shown element with this test id. While React streams a page in, a finished part can sit in a
+ * hidden holder beside its revealed copy for a moment; a bare getByTestId then matches two elements.
+ */
+export function shown(scope: Page | Locator, testId: string): Locator {
+  return scope.getByTestId(testId).filter({ visible: true });
 }

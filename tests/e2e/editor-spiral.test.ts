@@ -9,7 +9,7 @@
  */
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
-import { launchChromium, signIn, trackPageErrors } from './browser';
+import { launchChromium, signIn, trackPageErrors, shown } from './browser';
 import { demoBridges } from '@/lib/demo/bridges';
 import { bridgeDescriptionSchema, computeOffsetTable, formatFeet, GeometryError, type BridgeDescription } from '@/lib/geometry';
 import { elevationCell, lengthCell } from '@/lib/units';
@@ -100,7 +100,7 @@ describe('geometry editor: spirals, flared edges and deflections', () => {
     await expect.poll(() => spanCell(page, 1, 'left', 'max-width').textContent()).toBe(withSpiral.max);
 
     // 2. The right edge flares from 21 ft RT at Abutment 1 to 24 ft RT at Abutment 4.
-    const right = page.getByTestId('edge-right');
+    const right = shown(page, 'edge-right');
     await right.getByLabel('Edge line').selectOption('table');
     await right.getByLabel('Station 1', { exact: true }).fill('12+00');
     await right.getByLabel('Station 2', { exact: true }).fill('14+80');
@@ -132,17 +132,16 @@ describe('geometry editor: spirals, flared edges and deflections', () => {
     const values = '0\t0.31\t0.58\t0.79\t0.92\t0.96\t0.92\t0.79\t0.58\t0.31\t0';
     await page.getByLabel(/Pasted rows/).fill(`G1\t1\t${values}\nG5\t1\t${values}`);
     await page.getByRole('button', { name: 'Read pasted rows' }).click();
-    await page
-      .getByTestId('deflection-paste')
+    await shown(page, 'deflection-paste')
       .getByText(/Read 2 rows/)
       .waitFor();
-    expect(await page.getByTestId('deflection-rows').locator(':scope > li').count()).toBe(2);
+    expect(await shown(page, 'deflection-rows').locator(':scope > li').count()).toBe(2);
     await ready(page);
 
     expect(await save.isDisabled()).toBe(false);
     await save.click();
-    await page.getByTestId('save-result').waitFor();
-    expect(await page.getByTestId('save-result').textContent()).toMatch(/Saved as revision 2/);
+    await shown(page, 'save-result').waitFor();
+    expect(await shown(page, 'save-result').textContent()).toMatch(/Saved as revision 2/);
 
     // The stored description holds all three, and the engine run on it gives the numbers to expect.
     const stored = await page.evaluate(async (bridgeId) => (await fetch(`/api/bridges/${bridgeId}`)).json(), id);
@@ -154,7 +153,7 @@ describe('geometry editor: spirals, flared edges and deflections', () => {
     const table = computeOffsetTable(saved);
 
     await page.goto(`${baseUrl}/bridges/${id}/offsets`);
-    await page.getByTestId('deflection-note').waitFor();
+    await shown(page, 'deflection-note').waitFor();
     for (const [side, girder] of [
       ['left', 'G1'],
       ['right', 'G5'],

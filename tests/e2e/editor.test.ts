@@ -3,7 +3,7 @@ import os from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
-import { launchChromium, signIn, trackPageErrors } from './browser';
+import { launchChromium, signIn, trackPageErrors, shown } from './browser';
 import { demoBridges } from '@/lib/demo/bridges';
 import { computeOffsetTable, formatFeet, type BridgeDescription } from '@/lib/geometry';
 
@@ -77,8 +77,8 @@ describe('geometry editor in a real browser', () => {
 
     await a.page.getByLabel(/Note for the history/).fill('G1 moved 0.7 ft inboard at Abutment 1');
     await a.page.getByRole('button', { name: 'Save revision' }).click();
-    await a.page.getByTestId('save-result').waitFor();
-    expect(await a.page.getByTestId('save-result').textContent()).toMatch(/Saved as revision 2/);
+    await shown(a.page, 'save-result').waitFor();
+    expect(await shown(a.page, 'save-result').textContent()).toMatch(/Saved as revision 2/);
     const stored = await a.page.evaluate(async (bridgeId) => (await fetch(`/api/bridges/${bridgeId}`)).json(), id);
     expect(stored.revision).toBe(2);
     expect(stored.description.girders[0].offsets[0]).toBe(-17.5);
@@ -89,7 +89,7 @@ describe('geometry editor in a real browser', () => {
     expect(await b.page.getByRole('button', { name: 'Save revision' }).isDisabled()).toBe(true);
     await b.page.getByLabel(/Note for the history/).fill('G2 moved at Pier 2');
     await b.page.getByRole('button', { name: 'Save revision' }).click();
-    const stale = b.page.getByTestId('stale-revision');
+    const stale = shown(b.page, 'stale-revision');
     await stale.waitFor();
     expect(await stale.textContent()).toMatch(/newer revision/);
     await b.page.getByRole('button', { name: 'Reload the latest revision' }).click();
@@ -99,10 +99,10 @@ describe('geometry editor in a real browser', () => {
     // The history shows the change field by field and the edge widths that moved.
     await a.page.getByRole('link', { name: 'See what changed' }).click();
     await a.page.waitForURL(/history\?from=1&to=2/);
-    const fields = a.page.getByTestId('field-changes');
+    const fields = shown(a.page, 'field-changes');
     await fields.waitFor();
     expect(await fields.textContent()).toMatch(/Girder G1 · offset at Abutment 1.*18\.20 ft LT.*17\.50 ft LT/);
-    expect(await a.page.getByTestId('point-width-changes').locator('tbody tr').count()).toBeGreaterThan(0);
+    expect(await shown(a.page, 'point-width-changes').locator('tbody tr').count()).toBeGreaterThan(0);
 
     expect(a.errors).toEqual([]);
     expect(b.errors).toEqual([]);
@@ -120,7 +120,7 @@ describe('geometry editor in a real browser', () => {
     await station.fill('12+9O');
     await pier.getByText(/is not a station/).waitFor();
     // The preview names the problem and takes the user to it.
-    expect(await page.getByTestId('problem-list').textContent()).toMatch(/Pier 2 · station: .*is not a station/);
+    expect(await shown(page, 'problem-list').textContent()).toMatch(/Pier 2 · station: .*is not a station/);
     await page.getByRole('button', { name: 'Go to the first problem' }).click();
     await expect.poll(() => page.evaluate(() => document.activeElement?.getAttribute('aria-invalid'))).toBe('true');
     expect(await station.evaluate((el) => el === document.activeElement)).toBe(true);
@@ -159,8 +159,8 @@ describe('geometry editor in a real browser', () => {
     const file = page.getByLabel(/LandXML file/);
     await file.setInputFiles(path.join(fixtures, 'two-ramps-m.xml'));
     await page.getByRole('button', { name: 'Read file' }).click();
-    await page.getByTestId('landxml-error').waitFor();
-    expect(await page.getByTestId('landxml-error').textContent()).toMatch(/metres .* this bridge is in feet/);
+    await shown(page, 'landxml-error').waitFor();
+    expect(await shown(page, 'landxml-error').textContent()).toMatch(/metres .* this bridge is in feet/);
 
     // A file with two alignments: the user picks one and the preview follows the choice.
     const single = fs.readFileSync(path.join(fixtures, 'creek-road-ft.xml'), 'utf8');
@@ -172,7 +172,7 @@ describe('geometry editor in a real browser', () => {
     fs.writeFileSync(two, single.replace('</Alignments>', `${second}</Alignments>`));
     await file.setInputFiles(two);
     await page.getByRole('button', { name: 'Read file' }).click();
-    const preview = page.getByTestId('landxml-preview');
+    const preview = shown(page, 'landxml-preview');
     await preview.waitFor();
     expect(await page.getByRole('radio').count()).toBe(2);
     await page.getByRole('radio', { name: 'Creek Road east' }).check();
@@ -196,7 +196,7 @@ describe('geometry editor in a real browser', () => {
     await ready(page);
     await page.getByLabel(/Note for the history/).fill('Alignment and profile from the road design (LandXML)');
     await page.getByRole('button', { name: 'Save revision' }).click();
-    await page.getByTestId('save-result').waitFor();
+    await shown(page, 'save-result').waitFor();
     const stored = await page.evaluate(async (bridgeId) => (await fetch(`/api/bridges/${bridgeId}`)).json(), id);
     expect(stored.description.alignment.elements).toHaveLength(4);
     expect(stored.description.alignment.elements[1]).toMatchObject({ type: 'arc', radius: 800, direction: 'right' });

@@ -8,7 +8,7 @@
  */
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
-import { launchChromium, signIn, trackPageErrors } from './browser';
+import { launchChromium, signIn, trackPageErrors, shown } from './browser';
 import { computeOffsetTable, type BridgeDescription } from '@/lib/geometry';
 import { lengthText } from '@/lib/units';
 
@@ -50,7 +50,7 @@ describe('field mode with deflections', () => {
     const ramp = await demoByName(page, 'Tansy Hollow Ramp B');
     const table = computeOffsetTable(ramp.description);
     await page.goto(`${baseUrl}/bridges/${ramp.id}/field`);
-    await page.getByTestId('target-width').waitFor();
+    await shown(page, 'target-width').waitFor();
     await page.getByRole('button', { name: '2', exact: true }).click();
     const girder = table.points.find((p) => p.span === 2 && p.side === 'left')!.girder;
     await page.getByRole('button', { name: new RegExp(`^${girder}`) }).click();
@@ -62,19 +62,19 @@ describe('field mode with deflections', () => {
     }
     const p = table.points.find((q) => q.span === 2 && q.girder === girder && q.point === 5)!;
     expect(p.deflection).toBeGreaterThan(0);
-    await expect.poll(() => page.getByTestId('target-deflection').textContent()).toBe(lengthText(p.deflection, 'ft'));
-    expect(await page.getByTestId('target-screed').textContent()).toBe(lengthText(p.screed_grade, 'ft'));
+    await expect.poll(() => shown(page, 'target-deflection').textContent()).toBe(lengthText(p.deflection, 'ft'));
+    expect(await shown(page, 'target-screed').textContent()).toBe(lengthText(p.screed_grade, 'ft'));
     const card = page.locator('section', { has: heading(page) });
     expect(await card.textContent()).toMatch(/sags this much under the wet deck/);
     expect(await card.textContent()).toMatch(/Top of deck plus deflection/);
     // Readable at arm's length, and nothing spills sideways on the phone.
-    expect(await page.getByTestId('target-deflection').evaluate((el) => parseFloat(getComputedStyle(el).fontSize))).toBeGreaterThanOrEqual(24);
+    expect(await shown(page, 'target-deflection').evaluate((el) => parseFloat(getComputedStyle(el).fontSize))).toBeGreaterThanOrEqual(24);
     expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
     await page.screenshot({ path: `${process.env.FIELD_SHOTS_DIR ?? '/tmp'}/chordline-field-deflection-390.png` });
 
     // The printed sheet says what the two columns mean and has them in every table.
     await page.goto(`${baseUrl}/bridges/${ramp.id}/sheet`);
-    await page.getByTestId('sheet-deflection-note').waitFor();
+    await shown(page, 'sheet-deflection-note').waitFor();
     const tables = page.locator('section.sheet-group table');
     const count = await tables.count();
     expect(count).toBe(new Set(table.points.filter((q) => q.side !== 'interior').map((q) => `${q.span}/${q.girder}`)).size);
@@ -84,12 +84,12 @@ describe('field mode with deflections', () => {
     const plain = await demoByName(page, 'Marlow Creek Overpass');
     expect(plain.description.deflections ?? []).toEqual([]);
     await page.goto(`${baseUrl}/bridges/${plain.id}/field`);
-    await page.getByTestId('target-width').waitFor();
-    expect(await page.getByTestId('target-deflection').count()).toBe(0);
-    expect(await page.getByTestId('target-screed').count()).toBe(0);
+    await shown(page, 'target-width').waitFor();
+    expect(await shown(page, 'target-deflection').count()).toBe(0);
+    expect(await shown(page, 'target-screed').count()).toBe(0);
     await page.goto(`${baseUrl}/bridges/${plain.id}/sheet`);
     await page.locator('section.sheet-group table').first().waitFor();
-    expect(await page.getByTestId('sheet-deflection-note').count()).toBe(0);
+    expect(await shown(page, 'sheet-deflection-note').count()).toBe(0);
     expect(await page.locator('section.sheet-group thead').first().textContent()).not.toMatch(/Screed grade/);
 
     expect(errors).toEqual([]);

@@ -1,7 +1,7 @@
 import { Jimp } from 'jimp';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
-import { launchChromium, signIn, trackPageErrors } from './browser';
+import { launchChromium, signIn, trackPageErrors, shown } from './browser';
 
 const baseUrl = inject('baseUrl');
 let browser: Browser;
@@ -24,7 +24,7 @@ async function openFieldMode(page: Page): Promise<string> {
   const id = /\/bridges\/(\d+)$/.exec(page.url())![1];
   await page.getByRole('link', { name: 'Field mode' }).click();
   await page.waitForURL(/\/field$/);
-  await page.getByTestId('target-width').waitFor();
+  await shown(page, 'target-width').waitFor();
   return id;
 }
 
@@ -49,7 +49,7 @@ function outbox(page: Page): Promise<{ kind: string; bridgeId: number; body?: un
 
 /** The decimal edge-width target shown under the feet-inches one, e.g. "4.53 ft" → 4.53. */
 async function decimalTarget(page: Page): Promise<number> {
-  const text = (await page.getByTestId('target-width').locator('xpath=following-sibling::dd[1]').textContent()) ?? '';
+  const text = (await shown(page, 'target-width').locator('xpath=following-sibling::dd[1]').textContent()) ?? '';
   const value = Number(text.replace(/[^0-9.]/g, ''));
   expect(Number.isFinite(value) && value > 0, text).toBe(true);
   return value;
@@ -66,7 +66,7 @@ describe('field mode on a phone', () => {
     const before: number[] = await page.evaluate(async (bridge) => (await (await fetch(`/api/bridges/${bridge}/checks`)).json()).map((c: { id: number }) => c.id), id);
 
     // Big type: the target numbers are at least 24 px; nothing scrolls sideways on the phone.
-    const size = await page.getByTestId('target-width').evaluate((el) => parseFloat(getComputedStyle(el).fontSize));
+    const size = await shown(page, 'target-width').evaluate((el) => parseFloat(getComputedStyle(el).fontSize));
     expect(size).toBeGreaterThanOrEqual(24);
     expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
 
@@ -77,8 +77,8 @@ describe('field mode on a phone', () => {
     const width0 = await decimalTarget(page);
     await page.getByLabel(/Measured edge width/).fill(width0.toFixed(2));
     await page.getByRole('button', { name: 'Record' }).click();
-    await expect.poll(() => page.getByTestId('field-verdict').textContent()).toBe('PASS');
-    await expect.poll(() => page.getByTestId('field-result').textContent()).toMatch(/Saved as check #\d+/);
+    await expect.poll(() => shown(page, 'field-verdict').textContent()).toBe('PASS');
+    await expect.poll(() => shown(page, 'field-result').textContent()).toMatch(/Saved as check #\d+/);
 
     // A photo for that check, as the phone's camera would hand it over.
     const png = await new Jimp({ width: 640, height: 480, color: 0x5a7d9aff }).getBuffer('image/png');
@@ -91,9 +91,9 @@ describe('field mode on a phone', () => {
     const width1 = await decimalTarget(page);
     await page.getByLabel(/Measured edge width/).fill((width1 + 0.5).toFixed(3));
     await page.getByRole('button', { name: 'Record' }).click();
-    await expect.poll(() => page.getByTestId('field-verdict').textContent()).toBe('FAIL');
+    await expect.poll(() => shown(page, 'field-verdict').textContent()).toBe('FAIL');
     // Half a foot too wide: the crew is told to bring the edge in by about six inches.
-    expect(await page.getByTestId('fix-width').textContent()).toMatch(/^Bring the form edge in [56]\.\d\d in\.$/);
+    expect(await shown(page, 'fix-width').textContent()).toMatch(/^Bring the form edge in [56]\.\d\d in\.$/);
 
     // Connection lost: the entry shows at once, is kept on the phone, and goes when the connection returns.
     await page.getByRole('button', { name: /Next/ }).click();
@@ -101,7 +101,7 @@ describe('field mode on a phone', () => {
     await context.setOffline(true);
     await page.getByLabel(/Measured edge width/).fill(width2.toFixed(2));
     await page.getByRole('button', { name: 'Record' }).click();
-    await expect.poll(() => page.getByTestId('field-verdict').textContent()).toBe('PASS');
+    await expect.poll(() => shown(page, 'field-verdict').textContent()).toBe('PASS');
     await expect
       .poll(() =>
         page

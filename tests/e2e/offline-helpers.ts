@@ -1,6 +1,7 @@
 /** Shared pieces of the offline field mode browser tests: phone viewport, waits and page helpers. */
 import type { Page } from 'playwright-core';
 import { expect, inject } from 'vitest';
+import { shown } from './browser';
 
 const baseUrl = inject('baseUrl');
 
@@ -29,12 +30,12 @@ export async function openControlledFieldMode(page: Page, id: string): Promise<v
   });
   if (!(await page.evaluate(() => Boolean(navigator.serviceWorker.controller)))) await page.reload();
   await expect.poll(() => page.evaluate(() => Boolean(navigator.serviceWorker.controller)), SOON).toBe(true);
-  await page.getByTestId('target-width').waitFor();
+  await shown(page, 'target-width').waitFor();
 }
 
 export async function keepOnPhone(page: Page): Promise<void> {
   await page.getByRole('button', { name: 'Keep on this phone' }).click();
-  await expect.poll(() => page.getByTestId('kept-status').textContent(), { timeout: 30000 }).toMatch(/^Kept on this phone · saved \d\d:\d\d · revision \d+$/);
+  await expect.poll(() => shown(page, 'kept-status').textContent(), { timeout: 30000 }).toMatch(/^Kept on this phone · saved \d\d:\d\d · revision \d+$/);
 }
 
 /** The phone's waiting items, straight from IndexedDB. */
@@ -58,7 +59,7 @@ export function waitingItems(page: Page): Promise<Waiting[]> {
 
 /** The decimal edge-width target shown under the feet-inches one, e.g. "4.53 ft" → 4.53. */
 export async function decimalTarget(page: Page): Promise<number> {
-  const text = (await page.getByTestId('target-width').locator('xpath=following-sibling::dd[1]').textContent()) ?? '';
+  const text = (await shown(page, 'target-width').locator('xpath=following-sibling::dd[1]').textContent()) ?? '';
   return Number(text.replace(/[^0-9.]/g, ''));
 }
 
@@ -66,7 +67,7 @@ export async function decimalTarget(page: Page): Promise<number> {
 export async function recordHere(page: Page): Promise<void> {
   await page.getByLabel(/Measured edge width/).fill((await decimalTarget(page)).toFixed(2));
   await page.getByRole('button', { name: 'Record' }).click();
-  await expect.poll(() => page.getByTestId('field-verdict').textContent(), SOON).toBe('PASS');
+  await expect.poll(() => shown(page, 'field-verdict').textContent(), SOON).toBe('PASS');
 }
 
 export async function pickLastSpan(page: Page): Promise<{ span: number; girder: string }> {

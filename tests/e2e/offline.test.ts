@@ -1,7 +1,7 @@
 import { Jimp } from 'jimp';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser, BrowserContext } from 'playwright-core';
-import { launchChromium, signIn, trackPageErrors } from './browser';
+import { launchChromium, signIn, trackPageErrors, shown } from './browser';
 import { PHONE, SOON, Check, Photo, bridgeId, openControlledFieldMode, keepOnPhone, waitingItems, recordHere, pickLastSpan, apiGet } from './offline-helpers';
 
 const baseUrl = inject('baseUrl');
@@ -73,17 +73,17 @@ describe('field mode without a connection', () => {
     const id = await bridgeId(page, 'Marlow Creek Overpass');
     await openControlledFieldMode(page, id);
     const { span, girder } = await pickLastSpan(page);
-    const onlineTarget = await page.getByTestId('target-width').textContent();
+    const onlineTarget = await shown(page, 'target-width').textContent();
     await keepOnPhone(page);
     const before = await apiGet<Check[]>(page, `/api/bridges/${id}/checks`);
 
     await context.setOffline(true);
     await page.reload();
-    await page.getByTestId('target-width').waitFor();
-    await expect.poll(() => page.getByTestId('field-source').textContent(), SOON).toMatch(/^offline · saved \d\d:\d\d · revision 1$/);
+    await shown(page, 'target-width').waitFor();
+    await expect.poll(() => shown(page, 'field-source').textContent(), SOON).toMatch(/^offline · saved \d\d:\d\d · revision 1$/);
     await pickLastSpan(page);
     // The numbers on screen offline are the kept offset table's, the same as online.
-    expect(await page.getByTestId('target-width').textContent()).toBe(onlineTarget);
+    expect(await shown(page, 'target-width').textContent()).toBe(onlineTarget);
 
     for (let point = 0; point < 3; point++) {
       if (point > 0) await page.getByRole('button', { name: /Next/ }).click();
@@ -93,7 +93,7 @@ describe('field mode without a connection', () => {
     const png = await new Jimp({ width: 2400, height: 1800, color: 0x5a7d9aff }).getBuffer('image/png');
     await page.locator('input[type=file]').setInputFiles({ name: 'edge.png', mimeType: 'image/png', buffer: png });
     await expect.poll(() => page.getByText(/Photo kept on this phone/).count(), SOON).toBe(1);
-    await expect.poll(() => page.getByTestId('field-waiting').textContent(), SOON).toBe('4 waiting');
+    await expect.poll(() => shown(page, 'field-waiting').textContent(), SOON).toBe('4 waiting');
     const waiting = await waitingItems(page);
     expect(waiting.map((w) => w.kind)).toEqual(['check', 'check', 'check', 'photo']);
     expect(waiting[3].checkKey).toBe(waiting[2].key);
@@ -103,11 +103,11 @@ describe('field mode without a connection', () => {
     page = await context.newPage();
     errors.push(...trackPageErrors(page));
     await page.goto(`${baseUrl}/bridges/${id}/field`);
-    await page.getByTestId('target-width').waitFor();
-    await expect.poll(() => page.getByTestId('field-waiting').textContent(), SOON).toBe('4 waiting');
+    await shown(page, 'target-width').waitFor();
+    await expect.poll(() => shown(page, 'field-waiting').textContent(), SOON).toBe('4 waiting');
 
     await context.setOffline(false);
-    await expect.poll(() => page.getByTestId('field-waiting').textContent(), { timeout: 60000 }).toBe('All sent');
+    await expect.poll(() => shown(page, 'field-waiting').textContent(), { timeout: 60000 }).toBe('All sent');
     expect(await waitingItems(page)).toEqual([]);
 
     const after = await apiGet<Check[]>(page, `/api/bridges/${id}/checks`);
@@ -140,7 +140,7 @@ describe('field mode without a connection', () => {
     await keepOnPhone(page);
     await context.setOffline(true);
     await page.reload();
-    await page.getByTestId('target-width').waitFor();
+    await shown(page, 'target-width').waitFor();
     await pickLastSpan(page);
     await recordHere(page);
     await page.getByRole('button', { name: /Next/ }).click();
@@ -166,7 +166,7 @@ describe('field mode without a connection', () => {
     await office.close();
 
     await context.setOffline(false);
-    await expect.poll(() => page.getByTestId('field-waiting').textContent(), { timeout: 60000 }).toBe('All sent');
+    await expect.poll(() => shown(page, 'field-waiting').textContent(), { timeout: 60000 }).toBe('All sent');
     const sent = (await apiGet<Check[]>(page, `/api/bridges/${id}/checks`)).filter((c) => c.client_key && keys.includes(c.client_key));
     expect(sent).toHaveLength(2);
     for (const c of sent) expect(c.revision).toBe(1);

@@ -13,7 +13,7 @@ import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { demoBridges } from '@/lib/demo/bridges';
-import { launchChromium, signIn, trackPageErrors } from './browser';
+import { launchChromium, signIn, trackPageErrors, shown } from './browser';
 
 const baseUrl = inject('baseUrl');
 let browser: Browser;
@@ -195,9 +195,9 @@ describe('bridge overview', () => {
     await page.waitForURL(new RegExp(`/bridges/${id}$`));
     // The link navigates in the page: the URL changes at once and the overview streams in after the
     // loading panel, so wait for its parts before counting anything in them.
-    const actions = page.getByTestId('bridge-actions');
+    const actions = shown(page, 'bridge-actions');
     await actions.waitFor();
-    await page.getByTestId('plan-sketch').waitFor();
+    await shown(page, 'plan-sketch').waitFor();
     // Server-rendered: the SVG is in the HTML as sent, before any script runs.
     const html = await (await page.request.get(page.url())).text();
     expect(html).toMatch(/<svg[^>]*data-testid="plan-sketch"/);
@@ -205,7 +205,7 @@ describe('bridge overview', () => {
 
     const live = await liveStatus(page, id);
     const bridge = await api(page, `/api/bridges/${id}`);
-    const status = (await page.getByTestId('bridge-status').innerText()).replace(/\s+/g, ' ');
+    const status = (await shown(page, 'bridge-status').innerText()).replace(/\s+/g, ' ');
     expect(status).toContain(`${bridge.stage[0].toUpperCase()}${bridge.stage.slice(1)}.`);
     expect(status).toContain(`${live.passing} of ${live.total} brackets pass their latest checks`);
     expect(live.failures).toBeGreaterThanOrEqual(1);
@@ -220,7 +220,7 @@ describe('bridge overview', () => {
     expect(await group('Checking').getByRole('link', { name: 'Checks and sign-off', exact: true }).count()).toBe(1);
     expect(await group('Geometry').getByRole('link', { name: 'Edit geometry', exact: true }).isVisible()).toBe(true);
     expect(await group('3D view').getByRole('link', { name: '3D view', exact: true }).count()).toBe(1);
-    expect(await page.getByTestId('bridge-record').innerText()).toContain('DM-0417');
+    expect(await shown(page, 'bridge-record').innerText()).toContain('DM-0417');
     await page.screenshot({ path: path.join(shots, 'overview-desktop.png'), fullPage: true });
     await page.setViewportSize({ width: 390, height: 844 });
     expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
@@ -233,7 +233,7 @@ describe('bridge overview', () => {
     const page = await signedInPage('crew@example.com');
     const id = await bridgeIdByName(page, DEMO);
     await page.goto(`${baseUrl}/bridges/${id}`);
-    const actions = page.getByTestId('bridge-actions');
+    const actions = shown(page, 'bridge-actions');
     await actions.waitFor();
     expect(await actions.getByRole('link', { name: 'Checks and sign-off', exact: true }).count()).toBe(1);
     expect(await actions.getByRole('link', { name: 'Edit geometry', exact: true }).count()).toBe(0);
@@ -248,7 +248,7 @@ describe('new bridge without JSON', () => {
     const errors = trackPageErrors(page);
     const name = `Browser Test Viaduct ${Date.now().toString(36)}`;
     await page.goto(`${baseUrl}/bridges/new`);
-    expect(await page.getByTestId('paste-json').getAttribute('open')).toBeNull();
+    expect(await shown(page, 'paste-json').getAttribute('open')).toBeNull();
     await page.getByRole('button', { name: 'Use the starter bridge' }).click();
     await page.getByLabel(/^Bridge name/).fill(name);
     await page.getByLabel(/^Structure number/).fill('BT-7001');
@@ -259,7 +259,7 @@ describe('new bridge without JSON', () => {
     await page.waitForURL(/\/bridges\/\d+$/);
     // The overview streams in after the loading panel: wait for its heading, then read the record.
     await page.getByRole('heading', { level: 1, name, exact: true }).waitFor();
-    expect(await page.getByTestId('bridge-record').innerText()).toContain('BT-7001');
+    expect(await shown(page, 'bridge-record').innerText()).toContain('BT-7001');
     const id = /\/bridges\/(\d+)$/.exec(page.url())![1];
     const stored = await api(page, `/api/bridges/${id}`);
     expect(stored).toMatchObject({ name, structureNumber: 'BT-7001', stage: 'forming', revision: 1 });

@@ -10,6 +10,7 @@ import type { BrowserContext, Page } from 'playwright-core';
 import { Jimp } from 'jimp';
 import { demoBridges } from '@/lib/demo/bridges';
 import { DEVICES, PAGE_TIMEOUT, PRESET_TIMEOUT, VISIBLE_CORNER_DEG, choosePreset, sceneSession, settledLabels } from './scene-teach-helpers';
+import { shown } from './browser';
 
 const { openView } = sceneSession();
 
@@ -32,7 +33,7 @@ describe(`${demoBridges[0].name} along the edge on a desktop: the kink and a sav
   it(
     'the form edge’s corner at an interior bent is plainly visible at the preset’s ×8, and True scale brings the heights back',
     async () => {
-      expect(await page.getByTestId('kink-note').textContent()).toMatch(/Heights ×8 to show the kink at each bent/);
+      expect(await shown(page, 'kink-note').textContent()).toMatch(/Heights ×8 to show the kink at each bent/);
       const kink = await page.evaluate(() => window.__chordlineStats!.kink);
       expect(kink).not.toBeNull();
       expect(kink!.bent).toMatch(/Pier/);
@@ -42,7 +43,7 @@ describe(`${demoBridges[0].name} along the edge on a desktop: the kink and a sav
       // True scale: the toggle brings the heights back and the note goes.
       await page.getByRole('button', { name: 'True scale' }).click();
       await settledLabels(page);
-      expect(await page.getByTestId('kink-note').textContent()).not.toMatch(/Heights ×8 to show/);
+      expect(await shown(page, 'kink-note').textContent()).not.toMatch(/Heights ×8 to show/);
     },
     PRESET_TIMEOUT * 2,
   );

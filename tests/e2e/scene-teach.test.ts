@@ -12,7 +12,7 @@
  */
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
-import { trackPageErrors } from './browser';
+import { trackPageErrors, shown } from './browser';
 import { demoBridges } from '@/lib/demo/bridges';
 import { DEVICES, PAGE_TIMEOUT, PRESETS, PRESET_TIMEOUT, choosePreset, overlapping, pageWidth, sceneSession, settledLabels } from './scene-teach-helpers';
 
@@ -76,7 +76,7 @@ for (const device of DEVICES) {
       const page = await ctx.newPage();
       const errors = trackPageErrors(page);
       await page.goto(`${inject('baseUrl')}/learn`);
-      await page.getByTestId('scene-canvas').locator('canvas').waitFor({ timeout: PAGE_TIMEOUT });
+      await shown(page, 'scene-canvas').locator('canvas').waitFor({ timeout: PAGE_TIMEOUT });
       await page.waitForFunction(() => (window.__chordlineStats?.frames ?? 0) >= 3, null, { timeout: PAGE_TIMEOUT, polling: 100 });
       const labels = await settledLabels(page, 0);
       const size = await page.evaluate(() => ({ w: window.__chordlineStats!.width, h: window.__chordlineStats!.height }));

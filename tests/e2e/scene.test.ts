@@ -7,7 +7,7 @@
  */
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { chromium, type Browser, type Page } from 'playwright-core';
-import { signIn, trackPageErrors } from './browser';
+import { signIn, trackPageErrors, shown } from './browser';
 import { computeOffsetTable, formatLength } from '@/lib/geometry';
 import { DEFAULT_SANDBOX, sandboxBridge } from '@/lib/scene-data/sandbox';
 import type { Units } from '@/lib/units';
@@ -124,26 +124,26 @@ describe('3D view and walkthrough', () => {
     await page.goto(`${baseUrl}/bridges/${first.id}/view`);
     // Span 1, left side: narrowest and widest over the API's rows.
     const left1 = rows.filter((r) => r.span === 1 && r.side === 'left').map((r) => r.edge_width as number);
-    const summary = page.getByTestId('edge-width-summary');
+    const summary = shown(page, 'edge-width-summary');
     const firstRow = summary.locator('tbody tr').first();
     await expect.poll(() => firstRow.locator('td').nth(3).textContent()).toBe(formatLength(Math.min(...left1), units));
     expect(await firstRow.locator('td').nth(4).textContent()).toBe(formatLength(Math.max(...left1), units));
 
-    await page.getByTestId('scene-canvas').locator('canvas').waitFor({ timeout: 60000 });
+    await shown(page, 'scene-canvas').locator('canvas').waitFor({ timeout: 60000 });
     const select = page.getByLabel('Girder point');
     const options = await select.locator('option').allTextContents();
     const idx = options.findIndex((o) => /Span 1 .*\(left\) · point 3$/.test(o));
     expect(idx).toBeGreaterThan(0);
     await select.selectOption({ index: idx });
     const row = rows.find((r) => r.span === 1 && r.side === 'left' && r.point === 3)!;
-    const readout = page.getByTestId('point-readout');
+    const readout = shown(page, 'point-readout');
     await expect.poll(() => readout.textContent()).toContain(formatLength(row.edge_width as number, units));
     expect(await page.getByRole('note').first().textContent()).toMatch(/geometry only/i);
   });
 
   it('walks through the six steps with live numbers from the engine', async () => {
     await page.goto(`${baseUrl}/learn`);
-    await page.getByTestId('scene-canvas').locator('canvas').waitFor({ timeout: 60000 });
+    await shown(page, 'scene-canvas').locator('canvas').waitFor({ timeout: 60000 });
     await page.waitForTimeout(1500);
     const content = await canvasContent(page);
     expect(content.covered).toBeGreaterThan(0.05);
@@ -151,7 +151,7 @@ describe('3D view and walkthrough', () => {
     // The sandbox's table equals the engine run here on the same settings.
     const t = computeOffsetTable(sandboxBridge(DEFAULT_SANDBOX));
     const s = t.span_summaries.find((x) => x.span === 2 && x.side === 'left')!;
-    const rowsText = await page.getByTestId('edge-width-summary').locator('tbody tr').allTextContents();
+    const rowsText = await shown(page, 'edge-width-summary').locator('tbody tr').allTextContents();
     expect(rowsText.some((r) => r.includes(formatLength(s.min_edge_width, 'ft')) && r.includes(formatLength(s.max_edge_width, 'ft')))).toBe(true);
 
     const heading = page.locator('#step-title');
@@ -178,7 +178,7 @@ describe('3D view and walkthrough', () => {
     await page.getByLabel(/Curve radius/).fill('1500');
     const t2 = computeOffsetTable(sandboxBridge({ ...DEFAULT_SANDBOX, radius: 1500 }));
     const s2 = t2.span_summaries.find((x) => x.span === 2 && x.side === 'left')!;
-    await expect.poll(async () => (await page.getByTestId('edge-width-summary').locator('tbody tr').allTextContents()).some((r) => r.includes(formatLength(s2.max_edge_width, 'ft')))).toBe(true);
+    await expect.poll(async () => (await shown(page, 'edge-width-summary').locator('tbody tr').allTextContents()).some((r) => r.includes(formatLength(s2.max_edge_width, 'ft')))).toBe(true);
 
     // A deck the engine cannot build: a 160 ft chord on a 400 ft radius bows 160² ÷ (8 × 400) = 8 ft
     // off the curve, more than the 3.50 ft overhang. The steps say their numbers are the last good deck's.
@@ -192,11 +192,11 @@ describe('3D view and walkthrough', () => {
           .count(),
       )
       .toBe(1);
-    expect(await page.getByTestId('walkthrough-stale').textContent()).toMatch(/radius 1500\.00 ft, span 160\.00 ft, overhang 3\.50 ft/);
+    expect(await shown(page, 'walkthrough-stale').textContent()).toMatch(/radius 1500\.00 ft, span 160\.00 ft, overhang 3\.50 ft/);
     const good = computeOffsetTable(sandboxBridge({ ...DEFAULT_SANDBOX, radius: 1500, spanLength: 160 })).span_summaries.find((x) => x.span === 2 && x.side === 'left')!;
-    expect(await page.getByTestId('walkthrough-step').textContent()).toContain(formatLength(good.max_edge_width, 'ft'));
+    expect(await shown(page, 'walkthrough-step').textContent()).toContain(formatLength(good.max_edge_width, 'ft'));
     await page.getByLabel(/Curve radius/).fill('1500');
-    await expect.poll(() => page.getByTestId('walkthrough-stale').count()).toBe(0);
+    await expect.poll(() => shown(page, 'walkthrough-stale').count()).toBe(0);
     expect(errors.map(String)).toEqual([]);
   });
 
@@ -210,10 +210,10 @@ describe('3D view and walkthrough', () => {
       const body = await (await p.request.get(`${baseUrl}/api/bridges`)).json();
       const first = (Array.isArray(body) ? body : body.bridges)[0];
       await p.goto(`${baseUrl}/bridges/${first.id}/view`);
-      await p.getByTestId('no-webgl').waitFor({ timeout: 30000 });
-      expect(await p.getByTestId('no-webgl').textContent()).toMatch(/WebGL/);
-      expect(await p.getByTestId('edge-width-summary').locator('tbody tr').count()).toBeGreaterThan(0);
-      expect(await p.getByTestId('no-webgl').getByRole('link', { name: 'offset table' }).getAttribute('href')).toBe(`/bridges/${first.id}/offsets`);
+      await shown(p, 'no-webgl').waitFor({ timeout: 30000 });
+      expect(await shown(p, 'no-webgl').textContent()).toMatch(/WebGL/);
+      expect(await shown(p, 'edge-width-summary').locator('tbody tr').count()).toBeGreaterThan(0);
+      expect(await shown(p, 'no-webgl').getByRole('link', { name: 'offset table' }).getAttribute('href')).toBe(`/bridges/${first.id}/offsets`);
       expect(errs.map(String)).toEqual([]);
     } finally {
       await plain.close();
