@@ -10,7 +10,7 @@
 import os from 'node:os';
 import path from 'node:path';
 import { Worker } from 'node:worker_threads';
-import type { ComputeJob, ComputeResult } from './compute-task';
+import type { ComputeJob, ComputeReply } from './compute-task';
 
 /** Workers in the pool: COMPUTE_WORKERS, else one less than the cores (at least 1, at most 4). */
 export function poolSize(): number {
@@ -24,13 +24,13 @@ export const MAX_QUEUED = 64;
 /** Longest one job may run before its worker is stopped and the client told (503). */
 export const JOB_TIME_LIMIT_MS = 30_000;
 
-const busyAnswer = (id: number, what: string): ComputeResult => ({
+const busyAnswer = (id: number, what: string): ComputeReply => ({
   id,
   status: 503,
-  json: JSON.stringify({ error: `The server is busy computing (${what}). Try again in a few seconds.` }),
+  bytes: new TextEncoder().encode(JSON.stringify({ error: `The server is busy computing (${what}). Try again in a few seconds.` })),
 });
 
-type Pending = { job: ComputeJob; resolve: (r: ComputeResult) => void };
+type Pending = { job: ComputeJob; resolve: (r: ComputeReply) => void };
 type Slot = { worker: Worker; current: Pending | null; timer: NodeJS.Timeout | null };
 
 function workerSource(): string {
@@ -50,13 +50,13 @@ class ComputePool {
     const worker = new Worker(workerSource(), { eval: true, resourceLimits: { maxOldGenerationSizeMb: 768 } });
     worker.unref();
     const slot: Slot = { worker, current: null, timer: null };
-    worker.on('message', (result: ComputeResult) => this.finish(slot, result));
+    worker.on('message', (result: ComputeReply) => this.finish(slot, result));
     worker.on('error', (err) => console.error('[chordline] compute worker error:', err.message));
     worker.on('exit', () => this.replace(slot, 'a worker stopped'));
     return slot;
   }
 
-  private finish(slot: Slot, result: ComputeResult) {
+  private finish(slot: Slot, result: ComputeReply) {
     if (slot.timer) clearTimeout(slot.timer);
     const done = slot.current;
     slot.current = null;
@@ -90,7 +90,7 @@ class ComputePool {
     }
   }
 
-  run(job: ComputeJob): Promise<ComputeResult> {
+  run(job: ComputeJob): Promise<ComputeReply> {
     if (this.queue.length >= MAX_QUEUED) return Promise.resolve(busyAnswer(job.id, 'too many requests waiting'));
     return new Promise((resolve) => {
       this.queue.push({ job, resolve });
@@ -112,8 +112,8 @@ function thePool(): ComputePool {
   return pool;
 }
 
-/** Runs the engine on a request body's JSON text in the pool; the answer's status and JSON text. */
-export function computeInPool(body: string, interior: boolean): Promise<ComputeResult> {
+/** Runs the engine on a request body's JSON text in the pool; the answer's status and UTF-8 JSON bytes. */
+export function computeInPool(body: string, interior: boolean): Promise<ComputeReply> {
   return thePool().run({ id: nextId++, body, interior });
 }
 
@@ -125,5 +125,5 @@ export function warmComputePool(): Promise<void> {
 /** The compute API's answer for a request body's JSON text: the offset table, or a short JSON error. */
 export async function computeAnswer(body: string, interior: boolean): Promise<Response> {
   const result = await computeInPool(body, interior);
-  return new Response(result.json, { status: result.status, headers: { 'Content-Type': 'application/json' } });
+  return new Response(result.bytes, { status: result.status, headers: { 'Content-Type': 'application/json' } });
 }

@@ -1,9 +1,10 @@
 /**
  * The engine's side of the compute pool: runs inside a worker thread (lib/workers/compute-pool.ts).
- * Checks the description against the schema, computes the offset table and writes the JSON answer
- * text, so the server's main thread only passes bytes along. Never imports next/* or React.
+ * Checks the description against the schema, computes the offset table and writes the answer as
+ * UTF-8 JSON bytes (lib/workers/json-utf8.ts), so the server's main thread only passes bytes along. Never imports next/* or React.
  */
 import { parentPort } from 'node:worker_threads';
+import { jsonUtf8 } from './json-utf8';
 import { computeOffsetTable, GeometryError, parseBridgeSchema } from '@/lib/geometry';
 import { shortProblemBody } from '@/lib/api/problem-list';
 import { descriptionSizeProblems, MAX_JSON_DEPTH, nestedDeeperThan } from '@/lib/limits/description-size';
@@ -11,10 +12,10 @@ import { descriptionSizeProblems, MAX_JSON_DEPTH, nestedDeeperThan } from '@/lib
 /** One job: the request body's text and whether interior girders' rows are wanted. */
 export type ComputeJob = { id: number; body: string; interior: boolean };
 
-/** The answer: the JSON text of the offset table, or a status and an error body for the client. */
-export type ComputeResult = { id: number; status: number; json: string };
+/** The answer: the offset table, or a status and an error body for the client. */
+export type ComputeResult = { id: number; status: number; body: object };
 
-const answer = (id: number, status: number, body: unknown): ComputeResult => ({ id, status, json: JSON.stringify(body) });
+const answer = (id: number, status: number, body: object): ComputeResult => ({ id, status, body });
 
 /**
  * Runs one job to its answer; never throws for bad input. 400 malformed or too deeply nested JSON and
@@ -36,21 +37,31 @@ export function runComputeJob(job: ComputeJob): ComputeResult {
   try {
     const table = computeOffsetTable(parsed.bridge);
     const out = job.interior ? table : { ...table, points: table.points.filter((p) => p.side !== 'interior') };
-    return { id: job.id, status: 200, json: JSON.stringify(out) };
+    return answer(job.id, 200, out);
   } catch (err) {
     if (err instanceof GeometryError) return answer(job.id, 422, { error: err.message.slice(0, 2000) });
     throw err;
   }
 }
 
+/** What the worker posts back: the answer's UTF-8 bytes, whose buffer is moved to the main thread, not copied. */
+export type ComputeReply = { id: number; status: number; bytes: Uint8Array<ArrayBuffer> };
+
+const failed = (id: number): ComputeResult => answer(id, 500, { error: 'Something went wrong on the server. Try again; if it keeps happening, tell your administrator.' });
+
 if (parentPort) {
   const port = parentPort;
   port.on('message', (job: ComputeJob) => {
+    let result: ComputeResult;
     try {
-      port.postMessage(runComputeJob(job));
+      result = runComputeJob(job);
     } catch (err) {
       console.error('[chordline] compute worker failed:', err instanceof Error ? err.message : err);
-      port.postMessage({ id: job.id, status: 500, json: JSON.stringify({ error: 'Something went wrong on the server. Try again; if it keeps happening, tell your administrator.' }) });
+      result = failed(job.id);
     }
+    // Encoded here, so the main thread neither copies a large table's text nor encodes it.
+    const bytes = jsonUtf8(result.body);
+    const reply: ComputeReply = { id: result.id, status: result.status, bytes };
+    port.postMessage(reply, [bytes.buffer]);
   });
 }
