@@ -9,7 +9,7 @@ import http from 'node:http';
 import os from 'node:os';
 import zlib from 'node:zlib';
 import { demoBridges } from '../../lib/demo/bridges';
-import { signInCookie as signIn, startServedApp } from './served-app';
+import { csrfJar, signInCookie as signIn, startServedApp } from './served-app';
 
 const distDir = process.env.SECURITY_DIST_DIR || '.next-loadtest';
 
@@ -151,13 +151,8 @@ async function main() {
     let lastSignIn = 0;
     const spray = async () => {
       for (let i = 0; i < 25; i++) {
-        const csrf = await fetch(`${base}/api/auth/csrf`);
-        const { csrfToken } = (await csrf.json()) as { csrfToken: string };
-        const cookie = csrf.headers
-          .getSetCookie()
-          .map((c) => c.split(';')[0])
-          .join('; ');
-        const res = await post('/api/auth/callback/credentials', cookie, new URLSearchParams({ csrfToken, email: `spray-${i}@example.com`, password: 'guess' }), {
+        const { csrfToken, jar } = await csrfJar(base);
+        const res = await post('/api/auth/callback/credentials', jar, new URLSearchParams({ csrfToken, email: `spray-${i}@example.com`, password: 'guess' }), {
           'content-type': 'application/x-www-form-urlencoded',
           origin: base,
           'x-forwarded-for': `203.0.113.${i + 1}`,

@@ -83,17 +83,23 @@ export async function startServedApp(opts: ServeOptions): Promise<ServedApp> {
   return { base, dataDir, stop };
 }
 
+/** next-auth's CSRF token for a new visitor, and that visitor's cookies as a Cookie header value. */
+export async function csrfJar(base: string): Promise<{ csrfToken: string; jar: string }> {
+  const res = await fetch(`${base}/api/auth/csrf`);
+  const { csrfToken } = (await res.json()) as { csrfToken: string };
+  const jar = res.headers
+    .getSetCookie()
+    .map((c) => c.split(';')[0])
+    .join('; ');
+  return { csrfToken, jar };
+}
+
 /**
  * Signs in through next-auth's credentials flow (with the demo password unless given) and returns the
  * session cookie as `name=value`.
  */
 export async function signInCookie(base: string, email: string, password = 'chordline-demo'): Promise<string> {
-  const csrfRes = await fetch(`${base}/api/auth/csrf`);
-  const { csrfToken } = (await csrfRes.json()) as { csrfToken: string };
-  const jar = csrfRes.headers
-    .getSetCookie()
-    .map((c) => c.split(';')[0])
-    .join('; ');
+  const { csrfToken, jar } = await csrfJar(base);
   const res = await fetch(`${base}/api/auth/callback/credentials`, {
     method: 'POST',
     redirect: 'manual',
