@@ -1,11 +1,13 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import { headers } from 'next/headers';
 import { redirect } from 'next/navigation';
 import SessionProvider from '@/components/SessionProvider';
 import SignInForm from '@/components/signin/SignInForm';
 import Wordmark, { ChordlineMark } from '@/components/Wordmark';
 import { currentUser } from '@/lib/auth/server-session';
 import { safeCallbackPath } from '@/lib/auth/safe-callback';
+import { appOrigin } from '@/lib/api/origin';
 
 export const metadata: Metadata = { title: 'Sign in' };
 export const dynamic = 'force-dynamic';
@@ -20,6 +22,9 @@ export default async function SignInPage({ searchParams }: { searchParams: Searc
   const params = await searchParams;
   const callbackUrl = first(params.callbackUrl);
   if (await currentUser()) redirect(safeCallbackPath(callbackUrl, process.env.NEXTAUTH_URL ? new URL(process.env.NEXTAUTH_URL).origin : undefined));
+  // The address sign-in requests must come from (the origin check's own rule, lib/api/origin.ts).
+  const requestHeaders = await headers();
+  const own = appOrigin(requestHeaders, `http://${requestHeaders.get('host') ?? 'localhost'}`);
 
   return (
     <SessionProvider>
@@ -40,7 +45,7 @@ export default async function SignInPage({ searchParams }: { searchParams: Searc
           <div className="w-full max-w-sm">
             <h2 className="text-2xl font-bold text-concrete-900">Sign in</h2>
             <p className="mb-6 mt-1 text-sm text-concrete-600">Use your e-mail address and your Chordline password.</p>
-            <SignInForm callbackUrl={callbackUrl} initialError={first(params.error)} />
+            <SignInForm callbackUrl={callbackUrl} initialError={first(params.error)} appOrigin={own} />
             <p className="mt-6 text-sm">
               <Link href="/forgot-password" className="font-semibold text-brand-700 underline-offset-2 hover:underline">
                 Forgot password?

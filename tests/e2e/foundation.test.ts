@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser } from 'playwright-core';
-import { launchChromium, signIn, trackPageErrors } from './browser';
+import { launchChromium, shown, signIn, trackPageErrors } from './browser';
 
 const baseUrl = inject('baseUrl');
 let browser: Browser;
@@ -114,6 +114,25 @@ describe('foundation in a real browser', () => {
     await page.getByRole('button', { name: /sign in/i }).click();
     await page.waitForURL(/\/bridges\/1\/checks$/);
     expect(await page.getByRole('heading', { level: 1 }).textContent()).toMatch(/Checks/);
+    await page.close();
+  });
+
+  it('opened at another address than the app’s own, the sign-in page says so and links to the right one', async () => {
+    // The served app's own address is 127.0.0.1 (NEXTAUTH_URL); the same server answers as localhost,
+    // where a sign-in would be refused as a cross-site request.
+    const other = baseUrl.replace('127.0.0.1', 'localhost');
+    const page = await browser.newPage();
+    const errors = trackPageErrors(page);
+    await page.goto(`${other}/signin?callbackUrl=/bridges/1/checks`);
+    const notice = shown(page, 'signin-elsewhere');
+    await notice.waitFor();
+    expect(await notice.innerText()).toContain(`set up to be opened at ${baseUrl}`);
+    expect(await page.getByRole('button', { name: /sign in/i }).count()).toBe(0);
+    await notice.getByRole('link', { name: `Open the sign-in page at ${baseUrl}` }).click();
+    await page.waitForURL(`${baseUrl}/signin?callbackUrl=%2Fbridges%2F1%2Fchecks`);
+    await page.getByRole('button', { name: /sign in/i }).waitFor();
+    expect(await shown(page, 'signin-elsewhere').count()).toBe(0);
+    expect(errors).toEqual([]);
     await page.close();
   });
 });
