@@ -1,7 +1,7 @@
 /**
  * UTF-8 JSON bytes of an answer, written in slices. Encoding one large JSON string (an offset table is
  * 150 KB at 40th points, tens of MB at the largest allowed size) costs three times what writing it did,
- * measured in this project's worker (see DEVELOPERS.md, "Compute pool"); the same text encoded in slices
+ * measured in this project's worker (see DEVELOPERS.md, "Work off the main thread"); the same text encoded in slices
  * of 64 rows costs a fraction. The bytes are exactly those of `JSON.stringify(value)` encoded as UTF-8.
  */
 

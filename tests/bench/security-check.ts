@@ -9,7 +9,8 @@ import http from 'node:http';
 import os from 'node:os';
 import zlib from 'node:zlib';
 import { demoBridges } from '../../lib/demo/bridges';
-import { csrfJar, signInCookie as signIn, startServedApp } from './served-app';
+import { signInCookie as signIn, startServedApp } from './served-app';
+import { csrfJar } from '../support/csrf-jar';
 
 const distDir = process.env.SECURITY_DIST_DIR || '.next-loadtest';
 

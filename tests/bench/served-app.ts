@@ -9,6 +9,7 @@ import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { freePort } from '../support/free-port';
+import { csrfJar } from '../support/csrf-jar';
 
 const root = path.resolve(__dirname, '../..');
 
@@ -81,17 +82,6 @@ export async function startServedApp(opts: ServeOptions): Promise<ServedApp> {
     throw err;
   }
   return { base, dataDir, stop };
-}
-
-/** next-auth's CSRF token for a new visitor, and that visitor's cookies as a Cookie header value. */
-export async function csrfJar(base: string): Promise<{ csrfToken: string; jar: string }> {
-  const res = await fetch(`${base}/api/auth/csrf`);
-  const { csrfToken } = (await res.json()) as { csrfToken: string };
-  const jar = res.headers
-    .getSetCookie()
-    .map((c) => c.split(';')[0])
-    .join('; ');
-  return { csrfToken, jar };
 }
 
 /**

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser } from 'playwright-core';
 import { launchChromium, shown, signIn, trackPageErrors } from './browser';
+import { csrfJar } from '../support/csrf-jar';
 
 const baseUrl = inject('baseUrl');
 let browser: Browser;
@@ -20,12 +21,7 @@ describe('served pages', () => {
     expect(page.headers.get('content-security-policy')).toMatch(/default-src 'self'/);
     expect(page.headers.get('x-content-type-options')).toBe('nosniff');
     expect(page.headers.get('referrer-policy')).toBe('strict-origin-when-cross-origin');
-    const csrf = await fetch(`${baseUrl}/api/auth/csrf`);
-    const { csrfToken } = (await csrf.json()) as { csrfToken: string };
-    const jar = csrf.headers
-      .getSetCookie()
-      .map((c) => c.split(';')[0])
-      .join('; ');
+    const { csrfToken, jar } = await csrfJar(baseUrl);
     const signIn = await fetch(`${baseUrl}/api/auth/callback/credentials`, {
       method: 'POST',
       redirect: 'manual',
